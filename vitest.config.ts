@@ -1,0 +1,14 @@
+import { defineConfig } from "vitest/config";
+
+// Kept apart from vite.config.ts so tests never load the React Router plugin.
+export default defineConfig({
+  resolve: { tsconfigPaths: true },
+  test: {
+    include: ["tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts"],
+    environment: "node",
+    globalSetup: [],
+    testTimeout: 20000,
+    hookTimeout: 60000,
+    fileParallelism: false,
+  },
+});
