@@ -1,0 +1,93 @@
+import { z } from "zod";
+import { CLIMATE_ZONE_IDS } from "./zones";
+
+/** Vocabularies of a detail's front matter, as fixed in docs/content-format.md. */
+export const ASSEMBLY_KINDS = [
+  "above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor",
+  "basement-wall", "slab", "rim-joist",
+] as const;
+export const SUBSTRATES = [
+  "wood-frame", "cast-concrete", "concrete-block", "icf", "wood-roof-deck", "wood-floor-framing",
+] as const;
+export const BELOW_GRADE_CONDITIONS = [
+  "none", "vented-crawlspace", "sealed-crawlspace", "basement", "slab-on-grade",
+] as const;
+export const INSULATION_STRATEGIES = [
+  "cavity-only", "exterior-continuous", "cavity-plus-exterior", "interior-continuous",
+  "spray-foam", "flash-and-batt", "insulated-form", "under-slab",
+] as const;
+export const TIERS = ["free", "premium"] as const;
+export const LAYER_ROLES = [
+  "cladding", "drainage-gap", "water-resistive-barrier", "air-barrier", "sheathing", "insulation",
+  "vapour-retarder", "structure", "interior-finish", "thermal-barrier", "soil-side-protection",
+  "capillary-break", "roofing", "underlayment", "subfloor",
+] as const;
+export const JOINT_TREATMENTS = ["taped", "lapped", "sealed"] as const;
+export const ADHESIVES = ["solvent-based", "water-based", "mechanical"] as const;
+
+/** Lower-case words joined by single hyphens: the shape of every slug. */
+export const slugSchema = z
+  .string()
+  .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "must be lower-case words joined by hyphens");
+
+// YAML 1.2 reads 2026-09-14 as a string; an editor's tool may hand us a Date.
+const isoDateSchema = z.preprocess(
+  (value) => (value instanceof Date ? value.toISOString().slice(0, 10) : value),
+  z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date written YYYY-MM-DD"),
+);
+
+const framingSchema = z.strictObject({
+  material: slugSchema,
+  fraction: z.number().gt(0).lt(1),
+});
+
+export const layerSchema = z.strictObject({
+  role: z.enum(LAYER_ROLES),
+  material: slugSchema,
+  thickness_mm: z.number().positive().max(2000),
+  joints: z.enum(JOINT_TREATMENTS).optional(),
+  note: z.string().min(1).max(200).optional(),
+  adhesive: z.enum(ADHESIVES).optional(),
+  exposed: z.boolean().optional(),
+  framing: framingSchema.optional(),
+});
+
+export const detailFrontMatterSchema = z
+  .strictObject({
+    slug: slugSchema,
+    title: z.string().min(5).max(120),
+    summary: z.string().min(20).max(400),
+    assembly: z.enum(ASSEMBLY_KINDS),
+    substrate: z.enum(SUBSTRATES),
+    below_grade: z.enum(BELOW_GRADE_CONDITIONS),
+    strategy: z.enum(INSULATION_STRATEGIES),
+    zones: z
+      .array(z.enum(CLIMATE_ZONE_IDS))
+      .min(1)
+      .refine((zones) => new Set(zones).size === zones.length, "lists a zone twice"),
+    tier: z.enum(TIERS),
+    sets: z.array(slugSchema).default([]),
+    revision: z.number().int().min(1),
+    revised: isoDateSchema.optional(),
+    change_note: z.string().min(10).max(300).optional(),
+    author: z.string().min(2).max(80),
+    reviewer: z.string().min(2).max(80),
+    references: z.array(z.string().min(5).max(200)).min(1),
+    layers: z.array(layerSchema).min(2),
+  })
+  .superRefine((detail, ctx) => {
+    // Review needs a second pair of eyes (DESIGN.md: never their own).
+    if (detail.reviewer === detail.author) {
+      ctx.addIssue({ code: "custom", path: ["reviewer"], message: "a detail's reviewer cannot be its author" });
+    }
+    // A later revision must say what changed, so subscribers get a useful alert.
+    if (detail.revision > 1 && !detail.change_note) {
+      ctx.addIssue({ code: "custom", path: ["revision"], message: "a revision above 1 needs a change_note" });
+    }
+    if (detail.revision > 1 && !detail.revised) {
+      ctx.addIssue({ code: "custom", path: ["revision"], message: "a revision above 1 needs a revised date" });
+    }
+  });
+
+export type DetailLayer = z.infer<typeof layerSchema>;
+export type DetailFrontMatter = z.infer<typeof detailFrontMatterSchema>;
