@@ -1,25 +1,23 @@
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
+import { materialSchema, type Material } from "~/envelope/material-schema";
 import { ContentError, type ContentProblem } from "./content-error";
 import { parseDetail, type ParsedDetail } from "./parse-detail";
 import { parseSets } from "./parse-sets";
 import type { DetailSet } from "./set-schema";
 import { lineOfPath, parseLocated, syntaxProblems } from "./yaml-locate";
+import { problemsFromZod } from "./zod-problems";
 
-/**
- * A material file read as plain YAML. Its fields are validated by the engine's material schema.
- * TODO(materials): validate `data` with `materialSchema` from `~/envelope/material-schema` once that
- * module exists, and return its parsed type here instead of `unknown`.
- */
-export interface RawMaterial {
+/** A material file validated by the engine's material schema, with the file it came from. */
+export interface LoadedMaterial {
   file: string;
   slug: string;
-  data: unknown;
+  material: Material;
 }
 
 export interface LoadedContent {
-  /** Undefined when the folder has no `materials/` directory (material references are then not checked). */
-  materials?: RawMaterial[];
+  /** Undefined when the folder has no `materials/` directory (layer materials are then not checked). */
+  materials?: LoadedMaterial[];
   details: ParsedDetail[];
   sets: DetailSet[];
   /** Every problem found; the importer writes nothing unless this is empty. */
@@ -58,9 +56,9 @@ function loadSets(root: string, errors: ContentProblem[]): DetailSet[] {
   return sets;
 }
 
-function loadMaterials(root: string, errors: ContentProblem[]): RawMaterial[] | undefined {
+function loadMaterials(root: string, errors: ContentProblem[]): LoadedMaterial[] | undefined {
   if (!existsSync(path.join(root, "materials"))) return undefined;
-  const materials: RawMaterial[] = [];
+  const materials: LoadedMaterial[] = [];
   for (const file of listFiles(root, "materials", ".yaml")) {
     const located = parseLocated(readFileSync(path.join(root, file), "utf8"), 0);
     const syntax = syntaxProblems(file, located);
@@ -68,19 +66,23 @@ function loadMaterials(root: string, errors: ContentProblem[]): RawMaterial[] | 
       errors.push(...syntax);
       continue;
     }
-    const data: unknown = located.doc.toJS();
+    const result = materialSchema.safeParse(located.doc.toJS());
+    if (!result.success) {
+      errors.push(...problemsFromZod(file, located, result.error));
+      continue;
+    }
+    const material = result.data;
     const expected = path.basename(file, ".yaml");
-    const slug = isRecord(data) && typeof data.slug === "string" ? data.slug : undefined;
-    if (slug !== expected) {
+    if (material.slug !== expected) {
       errors.push({
         file,
         line: lineOfPath(located, ["slug"]),
         field: "slug",
-        message: `slug ${slug === undefined ? "is missing" : `"${slug}"`} does not match the file name (expected "${expected}")`,
+        message: `slug "${material.slug}" does not match the file name (expected "${expected}")`,
       });
       continue;
     }
-    materials.push({ file, slug, data });
+    materials.push({ file, slug: material.slug, material });
   }
   return materials;
 }
@@ -102,8 +104,4 @@ function collect(errors: ContentProblem[], work: () => void): void {
     if (error instanceof ContentError) errors.push(...error.problems);
     else throw error;
   }
-}
-
-function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === "object" && value !== null && !Array.isArray(value);
 }

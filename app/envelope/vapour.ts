@@ -1,0 +1,164 @@
+// Vapour permeance of layers, retarder classes (IRC 2021 R702.7(1): dry cup, Class I ≤ 0.1 perm,
+// II > 0.1 ≤ 1.0, III > 1.0 ≤ 10) and the drying directions of a stack.
+import { lookupMaterial, type Material, type MaterialLibrary } from "./material-schema";
+import { isInsulation, resolveAssembly, type ResolvedAssembly, type ResolvedLayer } from "./layers";
+import type { AssemblyInput, InteriorClass, LayerVapourClass, VapourLayer, VapourResult } from "./types";
+import { ngToPerm } from "./units";
+
+/** Dry cup is 0/50 % RH (mean 25 %), wet cup 50/100 % (mean 75 %): where a material has both and no
+ * curve, they are the two points of its curve (REFERENCES §5.2: model responsive materials as a
+ * function of mean RH). */
+const DRY_CUP_MEAN_RH = 25;
+const WET_CUP_MEAN_RH = 75;
+
+function thicknessScale(m: Material, thickness_mm: number): number {
+  // Homogeneous materials: permeance ∝ 1/thickness. Sheets and membranes: fixed.
+  return m.vapour.at_thickness_mm !== undefined ? m.vapour.at_thickness_mm / thickness_mm : 1;
+}
+
+/** Dry-cup permeance, ng/(s·m²·Pa), of a material at a thickness. */
+export function dryCupPermeance(m: Material, thickness_mm: number): number {
+  return m.vapour.permeance_ng * thicknessScale(m, thickness_mm);
+}
+
+export function isRhDependent(m: Material): boolean {
+  return m.vapour.curve !== undefined || m.vapour.wet_cup_ng !== undefined;
+}
+
+/** Permeance at a mean RH (percent): the curve, or dry/wet cup, interpolated in ln(permeance). */
+export function permeanceAtRh(m: Material, thickness_mm: number, rh: number): number {
+  const points: readonly (readonly [number, number])[] | undefined =
+    m.vapour.curve ??
+    (m.vapour.wet_cup_ng !== undefined
+      ? [[DRY_CUP_MEAN_RH, m.vapour.permeance_ng], [WET_CUP_MEAN_RH, m.vapour.wet_cup_ng]]
+      : undefined);
+  const scale = thicknessScale(m, thickness_mm);
+  if (!points) return m.vapour.permeance_ng * scale;
+  const x = Math.min(100, Math.max(0, rh));
+  if (x <= points[0][0]) return points[0][1] * scale;
+  const last = points[points.length - 1];
+  if (x >= last[0]) return last[1] * scale;
+  for (let i = 1; i < points.length; i++) {
+    const [x1, y1] = points[i];
+    if (x <= x1) {
+      const [x0, y0] = points[i - 1];
+      const f = (x - x0) / (x1 - x0);
+      return Math.exp(Math.log(y0) + f * (Math.log(y1) - Math.log(y0))) * scale;
+    }
+  }
+  return last[1] * scale;
+}
+
+/** Permeance of a resolved layer; framed layers combine cavity and framing in parallel
+ * (area-weighted permeance). rh undefined means dry cup. */
+export function layerPermeance(layer: ResolvedLayer, rh?: number): number {
+  const of = (m: Material): number =>
+    rh === undefined ? dryCupPermeance(m, layer.thickness_mm) : permeanceAtRh(m, layer.thickness_mm, rh);
+  if (!layer.framing) return of(layer.material);
+  const f = layer.framing.fraction;
+  return (1 - f) * of(layer.material) + f * of(layer.framing.material);
+}
+
+/** Class by the IRC definitions (dry-cup permeance in US perms). */
+export function retarderClass(ng: number): LayerVapourClass {
+  const perm = ngToPerm(ng);
+  if (perm <= 0.1) return "I";
+  if (perm <= 1.0) return "II";
+  if (perm <= 10) return "III";
+  return "permeable";
+}
+
+/** Layers in series: vapour resistances (1/W) add. */
+export function seriesPermeance(permeances: readonly number[]): number {
+  let z = 0;
+  for (const w of permeances) z += 1 / w;
+  return 1 / z;
+}
+
+/** Side of a stack whose combined wet-cup permeance is at or below 1 perm is treated as closed to
+ * drying (common practice: Class II or tighter at service humidity dries too slowly to count). */
+const CLOSED_SIDE_PERM = 1.0;
+
+const VENTED_GAP_FAMILIES = new Set(["air-space", "drainage"]);
+
+function isWaterSensitiveCore(layer: ResolvedLayer): boolean {
+  if (["cladding", "interior-finish", "drainage-gap", "thermal-barrier", "roofing"].includes(layer.input.role)) return false;
+  return layer.material.water_sensitive || (layer.framing?.material.water_sensitive ?? false);
+}
+
+/** Index range of the part of the stack that must dry: the water-sensitive layers (sheathing,
+ * framing, fibrous fill), or else the structure and insulation. */
+export function coreRange(a: ResolvedAssembly): { first: number; last: number } | null {
+  let idx = a.layers.filter(isWaterSensitiveCore).map((l) => l.index);
+  if (idx.length === 0) {
+    idx = a.layers.filter((l) => l.input.role === "structure" || isInsulation(l)).map((l) => l.index);
+  }
+  if (idx.length === 0) return null;
+  return { first: Math.min(...idx), last: Math.max(...idx) };
+}
+
+/** Layers inboard of the innermost insulation layer (else of the core): the interior retarder. */
+function interiorSide(a: ResolvedAssembly): ResolvedLayer[] {
+  let innermost = -1;
+  for (const l of a.layers) if (isInsulation(l)) innermost = l.index;
+  if (innermost < 0) innermost = coreRange(a)?.last ?? -1;
+  return innermost < 0 ? [] : a.layers.slice(innermost + 1);
+}
+
+function classOfStack(layers: readonly ResolvedLayer[]): { cls: InteriorClass; perm_us: number | null } {
+  if (layers.length === 0) return { cls: "none", perm_us: null };
+  const w = seriesPermeance(layers.map((l) => layerPermeance(l)));
+  const c = retarderClass(w);
+  return { cls: c === "permeable" ? "none" : c, perm_us: ngToPerm(w) };
+}
+
+export function interiorRetarderClassOf(a: ResolvedAssembly): InteriorClass {
+  return classOfStack(interiorSide(a)).cls;
+}
+
+/** Interior vapour-retarder class of an assembly (catalogue facet). */
+export function interiorRetarderClass(assembly: AssemblyInput, materials: MaterialLibrary): InteriorClass {
+  return interiorRetarderClassOf(resolveAssembly(assembly, materials));
+}
+
+export function analyseVapour(a: ResolvedAssembly): VapourResult {
+  const layers: VapourLayer[] = a.layers.map((l) => {
+    const w = layerPermeance(l);
+    return { index: l.index, material: l.material.slug, perm_ng: w, perm_us: ngToPerm(w), class: retarderClass(w), case_perm_ng: w };
+  });
+  const interior = classOfStack(interiorSide(a));
+  const core = coreRange(a);
+  let inwardPerm: number | null = null;
+  let outwardPerm: number | null = null;
+  if (core) {
+    const inside = a.layers.slice(core.last + 1);
+    let outside = a.layers.slice(0, core.first);
+    // A vented cavity connects to outdoor air: layers outboard of it do not hold drying back.
+    const gap = outside.map((l) => l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)).lastIndexOf(true);
+    if (gap >= 0) outside = outside.slice(gap + 1);
+    const wet = (ls: ResolvedLayer[]): number | null =>
+      ls.length === 0 ? null : ngToPerm(seriesPermeance(ls.map((l) => layerPermeance(l, WET_CUP_MEAN_RH))));
+    inwardPerm = wet(inside);
+    outwardPerm = wet(outside);
+  }
+  const open = (perm: number | null): boolean => perm === null || perm > CLOSED_SIDE_PERM;
+  const dryingDirections: ("inward" | "outward")[] = [];
+  if (core && open(inwardPerm)) dryingDirections.push("inward");
+  if (core && open(outwardPerm)) dryingDirections.push("outward");
+  const bothSidesClosed = core !== null && !open(inwardPerm) && !open(outwardPerm);
+  const fmt = (p: number | null): string => (p === null ? "nothing" : `${p < 1 ? p.toFixed(2) : p.toFixed(1)} perm`);
+  const explanation = core
+    ? `Layers inboard of the ${a.layers[core.last].material.name.toLowerCase()} pass ${fmt(inwardPerm)} and layers outboard of the ${a.layers[core.first].material.name.toLowerCase()} pass ${fmt(outwardPerm)} (wet cup, in series; a vented cavity and what lies outside it are not counted). A side at or below ${CLOSED_SIDE_PERM} perm is treated as closed to drying (common practice).`
+    : "No structure or insulation layer: drying directions not assessed.";
+  return {
+    layers,
+    interiorClass: interior.cls,
+    interiorPerm_us: interior.perm_us,
+    exteriorPerm_us: outwardPerm,
+    dryingDirections,
+    bothSidesClosed,
+    explanation,
+  };
+}
+
+export { lookupMaterial };

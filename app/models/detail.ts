@@ -1,0 +1,76 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export type Tier = "free" | "premium";
+
+/** The searchable projection of a detail's current published revision. */
+export class Detail extends Model<InferAttributes<Detail>, InferCreationAttributes<Detail>> {
+  declare id: CreationOptional<number>;
+  declare slug: string;
+  declare title: string;
+  declare summary: string;
+  declare searchText: string;
+  declare assembly: string;
+  declare substrate: string;
+  declare belowGrade: string;
+  declare strategy: string;
+  declare interiorClass: string;
+  declare tier: Tier;
+  declare rValueRsi: number | null;
+  declare publishedRevisionId: number | null;
+  declare publishedAt: Date | null;
+  declare withdrawnAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Detail.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        slug: { type: DataTypes.STRING(120), allowNull: false, unique: true },
+        title: { type: DataTypes.STRING(200), allowNull: false },
+        summary: { type: DataTypes.TEXT, allowNull: false },
+        searchText: { type: DataTypes.TEXT, allowNull: false },
+        assembly: { type: DataTypes.STRING(40), allowNull: false },
+        substrate: { type: DataTypes.STRING(40), allowNull: false },
+        belowGrade: { type: DataTypes.STRING(40), allowNull: false },
+        strategy: { type: DataTypes.STRING(40), allowNull: false },
+        interiorClass: { type: DataTypes.STRING(8), allowNull: false },
+        tier: { type: DataTypes.ENUM("free", "premium"), allowNull: false },
+        rValueRsi: {
+          type: DataTypes.DECIMAL(6, 3),
+          allowNull: true,
+          // The connector returns DECIMAL as a string; the model speaks numbers.
+          get() {
+            const raw = this.getDataValue("rValueRsi") as unknown;
+            return raw === null || raw === undefined ? null : Number(raw);
+          },
+        },
+        publishedRevisionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        publishedAt: { type: DataTypes.DATE(3), allowNull: true },
+        withdrawnAt: { type: DataTypes.DATE(3), allowNull: true },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: "details" },
+    );
+  }
+}
+
+export class DetailZone extends Model<InferAttributes<DetailZone>, InferCreationAttributes<DetailZone>> {
+  declare detailId: number;
+  declare zone: string;
+  declare zoneNumber: number;
+  declare regime: string | null;
+
+  static initModel(sequelize: Sequelize) {
+    DetailZone.init(
+      {
+        detailId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
+        zone: { type: DataTypes.STRING(3), primaryKey: true },
+        zoneNumber: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
+        regime: { type: DataTypes.CHAR(1), allowNull: true },
+      },
+      { sequelize, tableName: "detail_zones", timestamps: false },
+    );
+  }
+}

@@ -1,0 +1,31 @@
+import type { Sequelize } from "sequelize";
+import { db } from "~/db/sequelize.server";
+import { Detail, DetailZone } from "./detail";
+import { DetailRevision } from "./detail-revision";
+import { DetailSet, DetailSetMember } from "./detail-set";
+import { MaterialRecord } from "./material";
+import { User } from "./user";
+
+export { Detail, DetailZone, DetailRevision, DetailSet, DetailSetMember, MaterialRecord, User };
+
+const initialised = new WeakSet<Sequelize>();
+
+/** Binds every model to a Sequelize instance and declares the associations, once per instance. */
+export function initModels(sequelize: Sequelize): Sequelize {
+  if (initialised.has(sequelize)) return sequelize;
+  for (const model of [User, MaterialRecord, Detail, DetailZone, DetailRevision, DetailSet, DetailSetMember]) {
+    model.initModel(sequelize);
+  }
+  Detail.hasMany(DetailZone, { foreignKey: "detailId", as: "zones" });
+  Detail.hasMany(DetailRevision, { foreignKey: "detailId", as: "revisions" });
+  DetailRevision.belongsTo(Detail, { foreignKey: "detailId", as: "detail" });
+  Detail.belongsToMany(DetailSet, { through: DetailSetMember, foreignKey: "detailId", otherKey: "setId", as: "sets" });
+  DetailSet.belongsToMany(Detail, { through: DetailSetMember, foreignKey: "setId", otherKey: "detailId", as: "details" });
+  initialised.add(sequelize);
+  return sequelize;
+}
+
+/** The app's models bound to the app's database. */
+export function models(): Sequelize {
+  return initModels(db());
+}

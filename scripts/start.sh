@@ -1,0 +1,72 @@
+#!/usr/bin/env bash
+# npm start: installs what is missing, starts MariaDB and the local stand-ins on loopback, migrates,
+# imports the demo content, builds and serves on http://127.0.0.1:3000. Ctrl-C stops everything.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/common.sh
+
+APP_PORT=${PORT:-3000}
+export DB_PORT=${DB_PORT:-3307}
+export DB_NAME=${DB_NAME:-dryside}
+PAYMENTS_PORT=${PAYMENTS_STANDIN_PORT:-12111}
+SMTP_PORT_LOCAL=${SMTP_PORT:-2525}
+
+ensure_mariadb_installed
+ensure_node_modules
+
+mkdir -p .data
+# Secrets are generated once per checkout and kept out of git.
+if [ ! -f .data/secrets.env ]; then
+  printf 'SESSION_SECRET=%s\n' "$(node -e 'console.log(require("crypto").randomBytes(32).toString("base64url"))')" > .data/secrets.env
+fi
+set -a; source .data/secrets.env; set +a
+
+children=()
+cleanup() {
+  trap - EXIT INT TERM
+  log "stopping"
+  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  stop_pid "${MARIADB_PID:-}"
+  wait 2>/dev/null || true
+}
+trap cleanup EXIT INT TERM
+
+log "starting MariaDB on 127.0.0.1:$DB_PORT (data in .data/mariadb)"
+start_mariadb .data/mariadb "$DB_PORT"
+mariadb_sql "$DB_PORT" "CREATE DATABASE IF NOT EXISTS \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci"
+
+export NODE_ENV=production
+export APP_URL="http://127.0.0.1:$APP_PORT"
+export STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT=$PAYMENTS_PORT STRIPE_API_PROTOCOL=http
+export STRIPE_SECRET_KEY=${STRIPE_SECRET_KEY:-sk_test_standin} STRIPE_WEBHOOK_SECRET=${STRIPE_WEBHOOK_SECRET:-whsec_standin_local}
+export SMTP_HOST=127.0.0.1 SMTP_PORT=$SMTP_PORT_LOCAL
+
+log "migrating"
+npx tsx db/migrate.ts up
+if [ -f scripts/content-import.ts ]; then
+  log "importing content/"
+  npx tsx scripts/content-import.ts
+fi
+
+if [ -f dev/payments-standin/cli.ts ]; then
+  log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
+  PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
+    PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE=.data/payments-standin.json \
+    npx tsx dev/payments-standin/cli.ts &
+  children+=($!)
+fi
+if [ -f dev/mail-catcher/cli.ts ]; then
+  log "starting the mail catcher on 127.0.0.1:$SMTP_PORT_LOCAL (messages in .data/outbox)"
+  MAIL_CATCHER_PORT=$SMTP_PORT_LOCAL MAIL_OUTBOX_DIR=.data/outbox npx tsx dev/mail-catcher/cli.ts &
+  children+=($!)
+fi
+if [ -f scripts/sync-payments-catalogue.ts ]; then
+  npx tsx scripts/sync-payments-catalogue.ts
+fi
+
+log "building"
+npx react-router build >/dev/null
+log "serving on $APP_URL"
+HOST=127.0.0.1 PORT=$APP_PORT npx react-router-serve ./build/server/index.js &
+children+=($!)
+wait -n "${children[@]}" "$MARIADB_PID" || true
