@@ -5,8 +5,13 @@ import { DetailRevision } from "./detail-revision";
 import { DetailSet, DetailSetMember } from "./detail-set";
 import { MaterialRecord } from "./material";
 import { User } from "./user";
+import { Session } from "./session";
+import { AuthToken } from "./auth-token";
+import { SignInAttempt } from "./sign-in-attempt";
+import { AuditEvent } from "./audit-event";
 
 export { Detail, DetailZone, DetailRevision, DetailSet, DetailSetMember, MaterialRecord, User };
+export { Session, AuthToken, SignInAttempt, AuditEvent };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -21,6 +26,9 @@ export function initModels(sequelize: Sequelize): Sequelize {
   DetailRevision.belongsTo(Detail, { foreignKey: "detailId", as: "detail" });
   Detail.belongsToMany(DetailSet, { through: DetailSetMember, foreignKey: "detailId", otherKey: "setId", as: "sets" });
   DetailSet.belongsToMany(Detail, { through: DetailSetMember, foreignKey: "setId", otherKey: "detailId", as: "details" });
+  for (const model of [Session, AuthToken, SignInAttempt, AuditEvent]) model.initModel(sequelize);
+  Session.belongsTo(User, { foreignKey: "userId", as: "user" });
+  AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
   initialised.add(sequelize);
   return sequelize;
 }
