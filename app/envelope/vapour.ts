@@ -1,6 +1,6 @@
 // Vapour permeance of layers, retarder classes (IRC 2021 R702.7(1): dry cup, Class I ≤ 0.1 perm,
 // II > 0.1 ≤ 1.0, III > 1.0 ≤ 10) and the drying directions of a stack.
-import { lookupMaterial, type Material, type MaterialLibrary } from "./material-schema";
+import type { Material, MaterialLibrary } from "./material-schema";
 import { isInsulation, resolveAssembly, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { AssemblyInput, InteriorClass, LayerVapourClass, VapourLayer, VapourResult } from "./types";
 import { ngToPerm } from "./units";
@@ -161,4 +161,3 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
   };
 }
 
-export { lookupMaterial };

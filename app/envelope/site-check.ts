@@ -1,0 +1,79 @@
+// The one entry point: resolves the site and the layers, then runs thermal, vapour, profile,
+// code and rule checks and returns a plain-JSON result.
+import { resolveSite } from "./climate";
+import { codeRows } from "./code-tables";
+import { resolveAssembly, type ResolvedAssembly } from "./layers";
+import type { MaterialLibrary } from "./material-schema";
+import { computeProfile, type CaseConditions } from "./profile";
+import { saturationPressure } from "./psychrometrics";
+import { evaluateRules, isReservoirCladding, LOCAL_CODE_CAUTION } from "./rules";
+import { analyseThermal, isBelowGrade } from "./thermal";
+import type { AssemblyInput, ResolvedSite, SiteCheckResult, SiteInput } from "./types";
+import { analyseVapour } from "./vapour";
+
+export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
+  const indoor = { t_c: site.indoor.t_c, rh: site.indoor.rh, p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100 };
+  if (isBelowGrade(a.kind)) {
+    // Soil air is saturated; its face sits at the ground temperature.
+    return {
+      name: "winter", description: `Winter: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} % against soil at ${site.ground_t_c} °C, saturated`,
+      exterior: { t_c: site.ground_t_c, rh: 100, p_v_pa: saturationPressure(site.ground_t_c), label: "soil" },
+      interior: indoor, fixedSurface: true, vapourStart: 0, source: "interior",
+    };
+  }
+  return {
+    name: "winter", description: `Winter design: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
+    exterior: { t_c: site.winter.t_c, rh: site.winter.rh, p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100, label: "outdoor air" },
+    interior: indoor, fixedSurface: false, vapourStart: 0, source: "interior",
+  };
+}
+
+/** Summer inward drive: sun-warmed wet cladding where the cladding stores rain and sits tight to
+ * the wall (a vented gap behind it breaks the drive), otherwise humid outdoor air; below grade,
+ * saturated soil. */
+export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
+  const indoor = { t_c: site.indoor.summer_t_c, rh: site.indoor.summer_rh, p_v_pa: (saturationPressure(site.indoor.summer_t_c) * site.indoor.summer_rh) / 100 };
+  const indoorText = `indoor ${site.indoor.summer_t_c} °C / ${site.indoor.summer_rh} %`;
+  if (isBelowGrade(a.kind)) {
+    return {
+      name: "summer", description: `Summer: saturated soil at ${site.ground_t_c} °C against ${indoorText}`,
+      exterior: { t_c: site.ground_t_c, rh: 100, p_v_pa: saturationPressure(site.ground_t_c), label: "soil" },
+      interior: indoor, fixedSurface: true, vapourStart: 0, source: "exterior",
+    };
+  }
+  const cladIdx = a.layers.findIndex(isReservoirCladding);
+  const ventedBehind = cladIdx >= 0 && a.layers.slice(cladIdx + 1).some((l, i) => i === 0 && (l.input.role === "drainage-gap" || l.material.family === "air-space"));
+  if (cladIdx >= 0 && !ventedBehind && a.kind !== "floor") {
+    const t = site.summer.cladding_t_c;
+    return {
+      name: "summer", description: `Summer inward drive: rain-wet ${a.layers[cladIdx].material.name.toLowerCase()} warmed by sun to ${t} °C, ${indoorText}`,
+      exterior: { t_c: t, rh: 100, p_v_pa: saturationPressure(t), label: "sun-warmed wet cladding" },
+      interior: indoor, fixedSurface: true, vapourStart: cladIdx + 1, saturatedSource: true, source: "exterior",
+    };
+  }
+  return {
+    name: "summer", description: `Summer inward drive: outdoor ${site.summer.t_c} °C / ${site.summer.rh} %, ${indoorText}`,
+    exterior: { t_c: site.summer.t_c, rh: site.summer.rh, p_v_pa: (saturationPressure(site.summer.t_c) * site.summer.rh) / 100, label: "outdoor air" },
+    interior: indoor, fixedSurface: false, vapourStart: 0, source: "exterior",
+  };
+}
+
+export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary): SiteCheckResult {
+  const resolvedSite = resolveSite(site);
+  const a = resolveAssembly(assembly, materials);
+  const thermal = analyseThermal(a);
+  const vapour = analyseVapour(a);
+  const winter = computeProfile(a, winterCase(a, resolvedSite));
+  const summer = computeProfile(a, summerCase(a, resolvedSite));
+  const rows = codeRows(a, resolvedSite, vapour.interiorClass);
+  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, codeRows: rows });
+  return {
+    site: resolvedSite,
+    thermal,
+    profiles: { winter, summer },
+    vapour,
+    code: { edition: resolvedSite.edition, rows },
+    flags,
+    caution: LOCAL_CODE_CAUTION,
+  };
+}
