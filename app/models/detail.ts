@@ -2,6 +2,12 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 
 export type Tier = "free" | "premium";
 
+export interface LayerStripEntry {
+  role: string;
+  family: string;
+  thickness_mm: number;
+}
+
 /** The searchable projection of a detail's current published revision. */
 export class Detail extends Model<InferAttributes<Detail>, InferCreationAttributes<Detail>> {
   declare id: CreationOptional<number>;
@@ -16,6 +22,9 @@ export class Detail extends Model<InferAttributes<Detail>, InferCreationAttribut
   declare interiorClass: string;
   declare tier: Tier;
   declare rValueRsi: number | null;
+  /** Role, material family and thickness of each layer, for the card's section strip. */
+  declare layerStrip: LayerStripEntry[];
+  declare zonesLabel: string;
   declare publishedRevisionId: number | null;
   declare publishedAt: Date | null;
   declare withdrawnAt: CreationOptional<Date | null>;
@@ -45,6 +54,8 @@ export class Detail extends Model<InferAttributes<Detail>, InferCreationAttribut
             return raw === null || raw === undefined ? null : Number(raw);
           },
         },
+        layerStrip: { type: DataTypes.JSON, allowNull: false },
+        zonesLabel: { type: DataTypes.STRING(120), allowNull: false },
         publishedRevisionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         publishedAt: { type: DataTypes.DATE(3), allowNull: true },
         withdrawnAt: { type: DataTypes.DATE(3), allowNull: true },

@@ -33,6 +33,8 @@ export const catalogue: Migration = {
       interior_class: { type: DataTypes.STRING(8), allowNull: false },
       tier: { type: DataTypes.ENUM("free", "premium"), allowNull: false },
       r_value_rsi: { type: DataTypes.DECIMAL(6, 3), allowNull: true },
+      layer_strip: { type: DataTypes.JSON, allowNull: false },
+      zones_label: { type: DataTypes.STRING(120), allowNull: false },
       published_revision_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       published_at: { type: DataTypes.DATE(3), allowNull: true },
       withdrawn_at: { type: DataTypes.DATE(3), allowNull: true },

@@ -1,0 +1,165 @@
+import { Op } from "sequelize";
+import { canReadDetail, type Viewer } from "~/access/premium.server";
+import type { DetailFrontMatter, DetailLayer } from "~/content/detail-schema";
+import type { Material } from "~/envelope";
+import { renderMarkdown, markdownSection } from "~/markdown/render.server";
+import { Detail, DetailRevision, DetailSet, DetailZone, models } from "~/models";
+import { materialLibrary } from "./materials.server";
+import { describeChanges } from "./revision-diff";
+import { plainText } from "./search-text";
+
+export interface DrawingLayer {
+  role: string;
+  family: string;
+  materialName: string;
+  thickness_mm: number;
+  framing?: { fraction: number; family: string };
+}
+
+export interface RevisionEntry {
+  number: number;
+  state: string;
+  publishedAt: string | null;
+  authorName: string;
+  reviewerName: string | null;
+  changeNote: string | null;
+  changes: string[];
+}
+
+export interface DetailView {
+  id: number;
+  slug: string;
+  title: string;
+  summary: string;
+  tier: "free" | "premium";
+  assembly: DetailFrontMatter["assembly"];
+  substrate: string;
+  belowGrade: string;
+  strategy: string;
+  interiorClass: string;
+  zones: string[];
+  rsi: number | null;
+  /** Public: the drawing is part of the preview. */
+  drawing: DrawingLayer[];
+  revision: RevisionEntry & { reviewedAt: string | null };
+  history: RevisionEntry[];
+  sets: { slug: string; title: string }[];
+  related: { slug: string; title: string; tier: string }[];
+  access: "full" | "preview";
+  /** Only present with access: never serialised for a viewer without it. */
+  full?: {
+    layers: (DetailLayer & { materialName: string; family: string })[];
+    bodyHtml: string;
+    references: string[];
+  };
+  preview?: { excerpt: string };
+}
+
+function materialName(library: ReadonlyMap<string, Material>, slug: string): string {
+  return library.get(slug)?.name ?? slug;
+}
+
+/** A published detail as a viewer may see it, or null when there is none under that slug. */
+export async function getDetailView(slug: string, viewer: Viewer | null): Promise<DetailView | null> {
+  models();
+  const detail = await Detail.findOne({ where: { slug, publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null } });
+  if (!detail?.publishedRevisionId) return null;
+  const [revision, history, zones, sets, library, allowed] = await Promise.all([
+    DetailRevision.findByPk(detail.publishedRevisionId),
+    DetailRevision.findAll({
+      where: { detailId: detail.id, state: { [Op.in]: ["published", "superseded", "withdrawn"] } },
+      order: [["number", "ASC"]],
+    }),
+    DetailZone.findAll({ where: { detailId: detail.id } }),
+    detailSets(detail.id),
+    materialLibrary(),
+    canReadDetail(viewer, detail),
+  ]);
+  if (!revision) return null;
+  const front = revision.frontMatter as DetailFrontMatter;
+
+  const entries: RevisionEntry[] = history.map((entry, i) => {
+    const previous = i > 0 ? history[i - 1] : null;
+    return {
+      number: entry.number,
+      state: entry.state,
+      publishedAt: entry.publishedAt?.toISOString() ?? null,
+      authorName: entry.authorName,
+      reviewerName: entry.reviewerName,
+      changeNote: entry.changeNote,
+      changes: previous ? describeChanges(previous.frontMatter as DetailFrontMatter, entry.frontMatter as DetailFrontMatter, previous.bodyMd, entry.bodyMd) : [],
+    };
+  });
+  const current = entries.find((entry) => entry.number === revision.number)!;
+
+  const view: DetailView = {
+    id: detail.id,
+    slug: detail.slug,
+    title: revision.title,
+    summary: revision.summary,
+    tier: detail.tier,
+    assembly: front.assembly,
+    substrate: detail.substrate,
+    belowGrade: detail.belowGrade,
+    strategy: detail.strategy,
+    interiorClass: detail.interiorClass,
+    zones: zones.map((z) => z.zone).sort((a, b) => a.localeCompare(b, "en", { numeric: true })),
+    rsi: detail.rValueRsi,
+    drawing: front.layers.map((layer) => ({
+      role: layer.role,
+      family: library.get(layer.material)?.family ?? "unknown",
+      materialName: materialName(library, layer.material),
+      thickness_mm: layer.thickness_mm,
+      ...(layer.framing ? { framing: { fraction: layer.framing.fraction, family: library.get(layer.framing.material)?.family ?? "lumber" } } : {}),
+    })),
+    revision: { ...current, reviewedAt: revision.reviewedAt?.toISOString() ?? null },
+    history: entries.reverse(),
+    sets,
+    related: await relatedDetails(detail),
+    access: allowed ? "full" : "preview",
+  };
+  if (allowed) {
+    view.full = {
+      layers: front.layers.map((layer) => ({ ...layer, materialName: materialName(library, layer.material), family: library.get(layer.material)?.family ?? "unknown" })),
+      bodyHtml: renderMarkdown(revision.bodyMd),
+      references: front.references,
+    };
+  } else {
+    const why = plainText(markdownSection(revision.bodyMd, "Why it works"));
+    view.preview = { excerpt: why.length > 280 ? `${why.slice(0, 280).replace(/\s+\S*$/, "")}…` : why };
+  }
+  return view;
+}
+
+/** The published front matter (layers and metadata) of a detail, for the site check. */
+export async function getPublishedAssembly(slug: string): Promise<{ id: number; tier: "free" | "premium"; frontMatter: DetailFrontMatter } | null> {
+  models();
+  const detail = await Detail.findOne({ where: { slug, publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null } });
+  if (!detail?.publishedRevisionId) return null;
+  const revision = await DetailRevision.findByPk(detail.publishedRevisionId, { attributes: ["frontMatter"] });
+  if (!revision) return null;
+  return { id: detail.id, tier: detail.tier, frontMatter: revision.frontMatter as DetailFrontMatter };
+}
+
+async function relatedDetails(detail: Detail): Promise<{ slug: string; title: string; tier: string }[]> {
+  const rows = await Detail.findAll({
+    attributes: ["slug", "title", "tier"],
+    where: {
+      id: { [Op.ne]: detail.id },
+      publishedRevisionId: { [Op.ne]: null },
+      withdrawnAt: null,
+      [Op.or]: [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade !== "none" ? detail.belowGrade : "__none__" }],
+    },
+    order: [["publishedAt", "DESC"]],
+    limit: 4,
+  });
+  return rows.map((row) => ({ slug: row.slug, title: row.title, tier: row.tier }));
+}
+
+export async function detailSets(detailId: number): Promise<{ slug: string; title: string }[]> {
+  const sets = await DetailSet.findAll({
+    attributes: ["slug", "title"],
+    include: [{ model: Detail, as: "details", attributes: [], where: { id: detailId }, required: true }],
+  });
+  return sets.map((set) => ({ slug: set.slug, title: set.title }));
+}

@@ -1,0 +1,47 @@
+import { z } from "zod";
+import { CLIMATE_ZONE_IDS } from "~/content/zones";
+import type { SiteInput } from "~/envelope";
+import { fToC, type UnitSystem } from "~/envelope/units";
+
+// What the site-check panel (and the API) accepts. Temperatures and degree-days arrive in the
+// user's units; the engine takes SI.
+const optionalNumber = (label: string) =>
+  z.preprocess(
+    (value) => (value === "" || value === null || value === undefined ? undefined : Number(value)),
+    z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a number`).optional(),
+  );
+
+export const siteFormSchema = z
+  .object({
+    units: z.enum(["si", "ip"]).default("ip"),
+    zone: z.union([z.enum(CLIMATE_ZONE_IDS), z.literal("")]).optional(),
+    hdd: optionalNumber("Heating degree-days").pipe(z.number().min(0, "Heating degree-days cannot be negative").max(20000, "Heating degree-days above 20,000 are outside every climate zone").optional()),
+    cdd: optionalNumber("Cooling degree-days").pipe(z.number().min(0, "Cooling degree-days cannot be negative").max(20000, "Cooling degree-days look too high").optional()),
+    indoorRh: optionalNumber("Indoor relative humidity").pipe(z.number().min(5, "Indoor RH below 5 % is not a realistic design value").max(95, "Indoor RH above 95 % is not a design condition").optional()),
+    indoorT: optionalNumber("Indoor temperature").optional(),
+    winterT: optionalNumber("Winter design temperature").optional(),
+  })
+  .superRefine((form, ctx) => {
+    const hasZone = Boolean(form.zone);
+    const hasDegreeDays = form.hdd !== undefined;
+    if (!hasZone && !hasDegreeDays) ctx.addIssue({ code: "custom", path: ["zone"], message: "Choose a climate zone or enter heating degree-days" });
+    if (hasDegreeDays && form.cdd === undefined) ctx.addIssue({ code: "custom", path: ["cdd"], message: "Enter cooling degree-days too (0 if none)" });
+  });
+
+export type SiteForm = z.infer<typeof siteFormSchema>;
+
+export function siteInputFromForm(form: SiteForm): SiteInput {
+  const ip = form.units === "ip";
+  const temperature = (value: number | undefined) => (value === undefined ? undefined : ip ? fToC(value) : value);
+  const site: SiteInput = {};
+  if (form.zone) site.zone = form.zone;
+  else if (ip) Object.assign(site, { hdd65: form.hdd, cdd50: form.cdd });
+  else Object.assign(site, { hdd18: form.hdd, cdd10: form.cdd });
+  if (form.indoorRh !== undefined || form.indoorT !== undefined) site.indoor = { rh: form.indoorRh, t_c: temperature(form.indoorT) };
+  if (form.winterT !== undefined) site.winter = { t_c: temperature(form.winterT) };
+  return site;
+}
+
+export function unitsOf(form: Pick<SiteForm, "units">): UnitSystem {
+  return form.units;
+}

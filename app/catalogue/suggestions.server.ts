@@ -1,0 +1,24 @@
+import { QueryTypes } from "sequelize";
+import { models } from "~/models";
+import type { Suggestion } from "./suggestions";
+import { SEARCH_SYNONYMS, labelFor } from "./vocabulary";
+
+// The typeahead corpus stays small even for a large library: the newest titles, every material, the trade terms.
+const TITLE_LIMIT = 1500;
+
+export async function suggestionCorpus(): Promise<Suggestion[]> {
+  const sequelize = models();
+  const [details, materials] = await Promise.all([
+    sequelize.query<{ slug: string; title: string; assembly: string }>(
+      `SELECT slug, title, assembly FROM details WHERE published_revision_id IS NOT NULL AND withdrawn_at IS NULL
+        ORDER BY published_at DESC LIMIT ${TITLE_LIMIT}`,
+      { type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ name: string; family: string }>("SELECT name, family FROM materials ORDER BY name", { type: QueryTypes.SELECT }),
+  ]);
+  return [
+    ...details.map((d) => ({ kind: "detail" as const, text: d.title, hint: labelFor(d.assembly), href: `/details/${d.slug}` })),
+    ...materials.map((m) => ({ kind: "material" as const, text: m.name, hint: "material" })),
+    ...Object.keys(SEARCH_SYNONYMS).map((term) => ({ kind: "term" as const, text: term, hint: "trade term" })),
+  ];
+}
