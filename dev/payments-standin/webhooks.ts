@@ -95,7 +95,7 @@ export class WebhookSender {
       // Any 2xx counts as received, as with the real service.
       if (response.status < 200 || response.status > 299) attempt.error = `receiver answered ${response.status}`;
     } catch (error) {
-      attempt.error = error instanceof Error ? error.message : String(error);
+      attempt.error = describeFailure(error);
     } finally {
       clearTimeout(timer);
       this.inFlight.delete(controller);
@@ -118,4 +118,10 @@ export class WebhookSender {
       this.sleepers.add(wake);
     });
   }
+}
+
+/** fetch reports "fetch failed"; the cause (e.g. ECONNREFUSED) is what a developer needs to see. */
+function describeFailure(error: unknown): string {
+  if (!(error instanceof Error)) return String(error);
+  return error.cause instanceof Error ? `${error.message}: ${error.cause.message}` : error.message;
 }

@@ -361,7 +361,7 @@ test("a renewal bills the next period: invoice.paid and the subscription's new p
   const updated = await waitForEvent("customer.subscription.updated");
   const renewed = updated.data.object as Stripe.Subscription;
   expect(renewed.items.data[0].current_period_start).toBe(oldEnd);
-  // One calendar month later (UTC), clamped to the month's last day.
+  // One calendar month later (UTC), clamped to the month's last day: the real service's monthly cycle, from memory.
   const expectedEnd = new Date(oldEnd * 1000);
   const day = expectedEnd.getUTCDate();
   expectedEnd.setUTCDate(1);
