@@ -51,7 +51,7 @@ fi
 if [ -f dev/payments-standin/cli.ts ]; then
   log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
   PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
-    PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE=.data/payments-standin.json \
+    PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE_FILE=.data/payments-standin.json \
     npx tsx dev/payments-standin/cli.ts &
   children+=($!)
 fi

@@ -1,0 +1,70 @@
+// Catalogue benchmark: seeds 10,000 details into the database named by DB_* (a throwaway one from
+// scripts/bench.sh), serves the built app, and measures search routes against a trivial route.
+import { spawn } from "node:child_process";
+import { createServer } from "node:net";
+import autocannon from "autocannon";
+import { createSequelize } from "../../app/db/sequelize.server.ts";
+import { seedLargeCatalogue } from "./seed-catalogue.ts";
+
+const TARGET = Number(process.env.BENCH_DETAILS ?? 10000);
+const DURATION = Number(process.env.BENCH_SECONDS ?? 8);
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const server = createServer();
+    server.listen(0, "127.0.0.1", () => {
+      const address = server.address();
+      server.close(() => resolve(typeof address === "object" && address ? address.port : 0));
+    });
+  });
+}
+
+const sequelize = createSequelize({
+  host: "127.0.0.1",
+  port: Number(process.env.DB_PORT),
+  database: process.env.DB_NAME ?? "bench",
+  username: "root",
+  password: "",
+});
+const seeded = performance.now();
+const total = await seedLargeCatalogue(sequelize, TARGET);
+console.log(`seeded ${total} details in ${Math.round(performance.now() - seeded)} ms`);
+await sequelize.close();
+
+const port = await freePort();
+const server = spawn("npx", ["react-router-serve", "./build/server/index.js"], {
+  env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port) },
+  stdio: ["ignore", "ignore", "inherit"],
+});
+const base = `http://127.0.0.1:${port}`;
+for (let i = 0; i < 200; i++) {
+  try {
+    if ((await fetch(`${base}/healthz`)).ok) break;
+  } catch {}
+  await new Promise((r) => setTimeout(r, 100));
+}
+
+const targets = [
+  ["trivial route (/healthz: one SELECT 1)", "/healthz"],
+  ["API search, two facets", "/api/details?zone=5A&assembly=above-grade-wall"],
+  ["API search, text + facets", "/api/details?q=exterior+foam&zone=6A&tier=premium"],
+  ["catalogue page, two facets (SSR)", "/details?zone=5A&below-grade=basement"],
+  ["catalogue page, text search (SSR)", "/details?q=crawlspace"],
+] as const;
+
+interface Row { name: string; rps: number; p50: number; p95: number; errors: number }
+const rows: Row[] = [];
+for (const [name, path] of targets) {
+  // Warm the route and the pool first.
+  await autocannon({ url: base + path, connections: 4, duration: 1 });
+  const result = await autocannon({ url: base + path, connections: 10, duration: DURATION });
+  rows.push({ name, rps: Math.round(result.requests.average), p50: result.latency.p50, p95: result.latency.p97_5 ?? result.latency.p99, errors: result.errors + result.non2xx });
+}
+server.kill("SIGTERM");
+
+console.log(`\nCatalogue over ${total} details, loopback, 10 connections, ${DURATION} s each (p95 column is autocannon's p97.5)`);
+console.log("route".padEnd(44), "req/s".padStart(7), "p50 ms".padStart(7), "p95 ms".padStart(7), "errors".padStart(7), "vs trivial".padStart(11));
+const trivial = rows[0].rps;
+for (const row of rows) {
+  console.log(row.name.padEnd(44), String(row.rps).padStart(7), String(row.p50).padStart(7), String(row.p95).padStart(7), String(row.errors).padStart(7), `${Math.round((row.rps / trivial) * 100)} %`.padStart(11));
+}

@@ -1,0 +1,39 @@
+// Multiplies the imported demo library into a large catalogue for benchmarks (never for the app's data).
+import { QueryTypes, type Sequelize } from "sequelize";
+
+const VARIANTS = ["coastal", "upland", "prairie", "river", "lakeside", "ridge", "valley", "harbour", "forest", "mesa"];
+const ZONE_POOL = ["2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
+
+export async function seedLargeCatalogue(sequelize: Sequelize, target: number): Promise<number> {
+  const [{ n }] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM details", { type: QueryTypes.SELECT });
+  const base = Number(n);
+  if (base === 0) throw new Error("import the demo content first: the seed multiplies it");
+  const copies = Math.ceil((target - base) / base);
+  for (let copy = 1; copy <= copies; copy++) {
+    const variant = VARIANTS[copy % VARIANTS.length];
+    await sequelize.query(
+      `INSERT INTO details (slug, title, summary, search_text, assembly, substrate, below_grade, strategy, interior_class, tier,
+                            r_value_rsi, layer_strip, zones_label, published_revision_id, published_at, created_at, updated_at)
+       SELECT CONCAT(slug, '-v', :copy), CONCAT(title, ' (', :variant, ' variant ', :copy, ')'), summary,
+              CONCAT(search_text, ' ', :variant), assembly, substrate, below_grade, strategy, interior_class,
+              IF((id + :copy) % 3 = 0, 'free', 'premium'), r_value_rsi * (0.9 + ((id + :copy) % 5) / 20), layer_strip, zones_label,
+              published_revision_id, DATE_SUB(published_at, INTERVAL :copy HOUR), NOW(3), NOW(3)
+         FROM details WHERE slug NOT LIKE '%-v%' ORDER BY id`,
+      { replacements: { copy, variant } },
+    );
+    // Spread zones so facet counts vary across the generated copies.
+    const zoneA = ZONE_POOL[copy % ZONE_POOL.length];
+    const zoneB = ZONE_POOL[(copy * 7) % ZONE_POOL.length];
+    for (const zone of new Set([zoneA, zoneB])) {
+      await sequelize.query(
+        `INSERT INTO detail_zones (detail_id, zone, zone_number, regime)
+         SELECT id, :zone, :zoneNumber, :regime FROM details WHERE slug LIKE CONCAT('%-v', :copy)`,
+        { replacements: { zone, zoneNumber: Number.parseInt(zone, 10), regime: zone.length > 1 ? zone.slice(1) : null, copy } },
+      );
+    }
+  }
+  await sequelize.query(`DELETE FROM details WHERE id > (SELECT m FROM (SELECT MIN(id) + :target - 1 AS m FROM details) t)`, { replacements: { target } });
+  await sequelize.query("ANALYZE TABLE details, detail_zones");
+  const [{ total }] = await sequelize.query<{ total: number }>("SELECT COUNT(*) AS total FROM details", { type: QueryTypes.SELECT });
+  return Number(total);
+}
