@@ -107,17 +107,17 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   let perms = a.layers.map((l) => layerPermeance(l, (c.interior.rh + c.exterior.rh) / 2));
   let zCum: number[] = [];
   let pLinear: number[] = [];
-  for (let pass = 0; pass < (dependent ? MAX_RH_ITERATIONS : 1); pass++) {
+  for (let pass = 0; ; pass++) {
     zCum = [0];
     for (let i = 0; i < n; i++) zCum.push(zCum[i] + (i < c.vapourStart ? 0 : 1 / (perms[i] * NG_TO_KG)));
     const zTot = zCum[n];
     pLinear = zCum.map((z) => pExt + ((c.interior.p_v_pa - pExt) * z) / zTot);
-    if (!dependent) break;
+    if (!dependent || pass + 1 >= MAX_RH_ITERATIONS) break;
     const rhAt = pLinear.map((p, k) => Math.min(100, (100 * p) / pSat[k]));
     const next = a.layers.map((l, i) => layerPermeance(l, (rhAt[i] + rhAt[i + 1]) / 2));
-    const settled = next.every((w, i) => Math.abs(w - perms[i]) <= 0.005 * perms[i]);
+    // Stop when settled; the profile above was computed with the permeances reported.
+    if (next.every((w, i) => Math.abs(w - perms[i]) <= 0.005 * perms[i])) break;
     perms = next;
-    if (settled) break;
   }
   const zTot = zCum[n];
 

@@ -4,7 +4,7 @@ import { isInsulation, materialRsi, type ResolvedAssembly, type ResolvedLayer } 
 import type { CodeRow, Flag, ProfileCase, ResolvedSite, VapourResult } from "./types";
 import { isBelowGrade } from "./thermal";
 import { formatTemperature, rsiToRip } from "./units";
-import { coreRange, layerPermeance, retarderClass } from "./vapour";
+import { coreRange, dryCupPermeance, layerPermeance, retarderClass } from "./vapour";
 import { summariseInsulation } from "./code-tables";
 
 export interface RuleContext {
@@ -277,7 +277,8 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
 
   // 13. Open-cell spray foam in a cold-zone roof without a retarder.
   if (a.kind === "roof" && (site.zoneNumber >= 5 || (site.zoneNumber === 4 && site.moisture === "C"))) {
-    const openCell = layers.find((l) => l.material.family === "spray-foam" && retarderClass(layerPermeance(l)) === "permeable");
+    // Open-cell foam told from closed-cell by its permeability: above 10 perm per inch.
+    const openCell = layers.find((l) => l.material.family === "spray-foam" && retarderClass(dryCupPermeance(l.material, 25.4)) === "permeable");
     if (openCell && (vapour.interiorClass === "III" || vapour.interiorClass === "none")) {
       add({
         id: "open-cell-roof-no-retarder",

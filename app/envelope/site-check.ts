@@ -43,7 +43,8 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   }
   const cladIdx = a.layers.findIndex(isReservoirCladding);
   const ventedBehind = cladIdx >= 0 && a.layers.slice(cladIdx + 1).some((l, i) => i === 0 && (l.input.role === "drainage-gap" || l.material.family === "air-space"));
-  if (cladIdx >= 0 && !ventedBehind && a.kind !== "floor") {
+  // Needs something inboard of the cladding for the drive to reach.
+  if (cladIdx >= 0 && cladIdx < a.layers.length - 1 && !ventedBehind && a.kind !== "floor") {
     const t = site.summer.cladding_t_c;
     return {
       name: "summer", description: `Summer inward drive: rain-wet ${a.layers[cladIdx].material.name.toLowerCase()} warmed by sun to ${t} °C, ${indoorText}`,

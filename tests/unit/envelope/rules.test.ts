@@ -1,0 +1,125 @@
+import { expect, test } from "vitest";
+import { runSiteCheck } from "~/envelope";
+import type { AssemblyInput, LayerInput, SiteInput } from "~/envelope/types";
+import { loadLibrary } from "./library";
+
+const lib = loadLibrary();
+const layer = (role: string, material: string, thickness_mm: number, extra: Partial<LayerInput> = {}): LayerInput => ({ role, material, thickness_mm, ...extra });
+const batt140 = layer("insulation", "fibreglass-batt", 139.7, { framing: { material: "softwood-lumber", fraction: 0.23 } });
+const gyp = layer("interior-finish", "gypsum-board", 12.7);
+const paint = layer("interior-finish", "latex-paint", 0.1);
+const ids = (a: AssemblyInput, site: SiteInput = { zone: "5A" }) => runSiteCheck(a, site, lib).flags.map((f) => `${f.id}:${f.severity}`);
+
+test("interior poly with foil-faced exterior foam in zone 3A: vapour sandwich, stop — IRC 2021 Table R702.7(2) (M — from memory); common practice", () => {
+  const a: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "vinyl-siding", 1), layer("insulation", "polyiso-foil-faced", 25.4), layer("sheathing", "osb", 11.1), batt140,
+    layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15), gyp, paint,
+  ] };
+  expect(ids(a, { zone: "3A" })).toContain("interior-sheet-with-closed-exterior:stop");
+  const r = runSiteCheck(a, { zone: "3A" }, lib);
+  expect(r.vapour.bothSidesClosed).toBe(true);
+  expect(r.vapour.dryingDirections).toEqual([]);
+});
+
+test("foam board tight to housewrap behind absorptive siding with no gap: caution — common practice", () => {
+  const a: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "wood-bevel-siding", 12.7), layer("water-resistive-barrier", "polymeric-housewrap", 0.2), layer("insulation", "xps-board", 50.8),
+    layer("sheathing", "osb", 11.1), batt140, gyp, paint,
+  ] };
+  expect(ids(a)).toContain("foam-against-wrb-no-gap:caution");
+  const withGap: AssemblyInput = { ...a, layers: [a.layers[0], layer("drainage-gap", "vented-air-space", 19), ...a.layers.slice(1)] };
+  expect(ids(withGap).some((f) => f.startsWith("foam-against-wrb-no-gap"))).toBe(false);
+});
+
+test("solvent-based adhesive on polystyrene: stop — common practice (foam makers' instructions)", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [
+    layer("structure", "cast-concrete", 200), layer("insulation", "eps-board", 50.8, { adhesive: "solvent-based" }), gyp,
+  ] };
+  expect(ids(a)).toContain("solvent-adhesive-on-polystyrene:stop");
+});
+
+test("foam exposed to the interior without a thermal barrier: stop — IRC 2021 R316.4 (C2)", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [layer("structure", "cast-concrete", 200), layer("insulation", "xps-board", 50.8)] };
+  expect(ids(a)).toContain("foam-no-thermal-barrier:stop");
+  expect(ids({ ...a, layers: [...a.layers, gyp] }).some((f) => f.startsWith("foam-no-thermal-barrier"))).toBe(false);
+});
+
+test("foam in a crawl space without an ignition barrier: caution — IRC 2021 R316.5.4 (C)", () => {
+  const a: AssemblyInput = { kind: "crawlspace-wall", layers: [layer("structure", "cast-concrete", 200), layer("insulation", "xps-board", 50.8)] };
+  expect(ids(a)).toContain("foam-crawlspace-no-ignition-barrier:caution");
+  expect(ids({ ...a, layers: [...a.layers, layer("thermal-barrier", "ignition-barrier-coating", 0.5)] }).some((f) => f.startsWith("foam-crawlspace"))).toBe(false);
+});
+
+test("fibreglass against a basement wall: water-sensitive insulation below grade, stop — common practice (REFERENCES §8, M — from memory)", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [layer("structure", "cast-concrete", 200), batt140, gyp] };
+  expect(ids(a)).toContain("below-grade-water-sensitive-insulation:stop");
+});
+
+test("soil-side foam without protection in zone 3: insects, caution — IRC R318.4 (M — from memory); common practice", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [layer("insulation", "xps-board", 50.8), layer("structure", "cast-concrete", 200), gyp] };
+  expect(ids(a, { zone: "3A" })).toContain("below-grade-foam-insects:caution");
+});
+
+test("below-grade dampproofing with no drainage layer: caution; with a drainage mat: none — IRC R405/R406 (M — from memory); common practice", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [layer("soil-side-protection", "bituminous-dampproofing", 1), layer("structure", "cast-concrete", 200), layer("insulation", "xps-board", 76.2), gyp] };
+  expect(ids(a)).toContain("below-grade-membrane-no-drainage:caution");
+  expect(ids({ ...a, layers: [layer("drainage-gap", "dimpled-drainage-mat", 8), ...a.layers] }).some((f) => f.startsWith("below-grade-membrane"))).toBe(false);
+});
+
+test("Class I interior on a basement wall: caution — IRC 2021 R702.7 exception (C2)", () => {
+  const a: AssemblyInput = { kind: "basement-wall", layers: [layer("structure", "cast-concrete", 200), layer("insulation", "xps-board", 76.2), layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15), gyp] };
+  expect(ids(a)).toContain("basement-class-i-interior:caution");
+});
+
+test("summer inward drive behind brick condenses on interior poly: stop — common practice (inward drive)", () => {
+  const a: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "brick-veneer", 101.6), layer("water-resistive-barrier", "building-paper-grade-d", 0.5), layer("sheathing", "fibreboard-sheathing", 12.7), batt140,
+    layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15), gyp, paint,
+  ] };
+  const r = runSiteCheck(a, { zone: "5A", summer: { t_c: 30, rh: 70 } }, lib);
+  expect(r.profiles.summer.description).toMatch(/brick veneer warmed by sun/);
+  expect(r.profiles.summer.condensingPlanes.length).toBeGreaterThan(0);
+  expect(r.flags.map((f) => `${f.id}:${f.severity}`)).toContain("summer-condensation-interior-sheet:stop");
+  // A vented cavity behind the brick switches the case to humid outdoor air.
+  const vented = runSiteCheck({ ...a, layers: [a.layers[0], layer("drainage-gap", "vented-air-space", 25), ...a.layers.slice(1)] }, { zone: "5A" }, lib);
+  expect(vented.profiles.summer.description).toMatch(/outdoor/);
+});
+
+test("hot-humid wall with exterior foam under 10 % of total R: caution — DOE/PNNL BASC CZ 1–3 note (C)", () => {
+  const a: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "vinyl-siding", 1), layer("insulation", "eps-board", 6), layer("sheathing", "osb", 11.1), batt140, gyp, paint,
+  ] };
+  expect(ids(a, { zone: "2A" })).toContain("hot-humid-exterior-foam-under-10pct:caution");
+});
+
+test("crawl-space ground cover that is not Class I: stop — IRC 2021 R408.3 (C2)", () => {
+  expect(ids({ kind: "crawlspace-floor", layers: [layer("capillary-break", "crushed-stone", 100), layer("vapour-retarder", "building-paper-grade-d", 1)] })).toContain("crawlspace-no-class-i-ground-cover:stop");
+  expect(ids({ kind: "crawlspace-floor", layers: [layer("capillary-break", "crushed-stone", 100), layer("vapour-retarder", "polyethylene-sheet-10mil", 0.25)] }).some((f) => f.startsWith("crawlspace-no-class-i"))).toBe(false);
+});
+
+test("open-cell spray foam under a zone 6 roof deck without a retarder: stop — IRC 2021 R806.5 (M — from memory); with primer: none", () => {
+  const roof: AssemblyInput = { kind: "roof", layers: [
+    layer("roofing", "asphalt-shingles", 6), layer("underlayment", "synthetic-roof-underlayment", 0.5), layer("sheathing", "plywood", 15.9),
+    layer("insulation", "open-cell-spray-foam", 241, { framing: { material: "softwood-lumber", fraction: 0.1 } }), gyp, paint,
+  ] };
+  expect(ids(roof, { zone: "6A" })).toContain("open-cell-roof-no-retarder:stop");
+  const primed = { ...roof, layers: [...roof.layers.slice(0, 5), layer("interior-finish", "vapour-retarder-primer", 0.1)] };
+  expect(ids(primed, { zone: "6A" }).some((f) => f.startsWith("open-cell-roof"))).toBe(false);
+});
+
+test("every result carries the caution deferring to the local code and a licensed professional", () => {
+  const r = runSiteCheck({ kind: "slab", layers: [layer("capillary-break", "crushed-stone", 100), layer("vapour-retarder", "polyethylene-sheet-10mil", 0.25), layer("structure", "cast-concrete", 100)] }, { zone: "4A" }, lib);
+  expect(r.caution).toMatch(/local building official/);
+  expect(r.caution).toMatch(/licensed design professional/);
+  for (const f of r.flags) expect(f.source.length).toBeGreaterThan(0);
+});
+
+test("a 2×6 wall with kraft facing dries both ways; a foil-faced exterior closes the outside", () => {
+  const open: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "fibre-cement-lap-siding", 8), layer("water-resistive-barrier", "polymeric-housewrap", 0.2), layer("sheathing", "osb", 11.1),
+    batt140, layer("vapour-retarder", "kraft-facing", 0.1), gyp, paint,
+  ] };
+  const r = runSiteCheck(open, { zone: "5A" }, lib);
+  expect(r.vapour.interiorClass).toBe("II");
+  expect(r.vapour.dryingDirections).toEqual(["inward", "outward"]);
+});
