@@ -95,6 +95,13 @@ const SUMMER_RH: Record<MoistureRegime | "none", number> = { A: 60, B: 25, C: 55
 export const CLADDING_SOLAR_RISE_K = 15;
 export const DEFAULT_INDOOR = { t_c: 21, rh: 40, summer_t_c: 24, summer_rh: 50 } as const;
 
+/** The given value, or the default (recorded as defaulted so the page can say "assumed"). */
+function pick(defaulted: string[], value: number | undefined, fallback: number, name: string): number {
+  if (value !== undefined) return value;
+  defaulted.push(name);
+  return fallback;
+}
+
 function checkNumber(value: number | undefined, field: string, min: number, max: number, what: string): void {
   if (value === undefined) return;
   if (!Number.isFinite(value) || value < min || value > max) {
@@ -159,11 +166,6 @@ export function resolveSite(site: SiteInput): ResolvedSite {
 
   const zn = zoneNumberOf(zone);
   const regime = moistureOf(zone);
-  const pick = (value: number | undefined, fallback: number, name: string): number => {
-    if (value !== undefined) return value;
-    defaulted.push(name);
-    return fallback;
-  };
   checkNumber(site.winter?.t_c, "winter.t_c", -60, 40, "winter design temperature (°C)");
   checkNumber(site.winter?.rh, "winter.rh", 0, 100, "winter outdoor RH (%)");
   checkNumber(site.summer?.t_c, "summer.t_c", -10, 55, "summer design temperature (°C)");
@@ -181,7 +183,7 @@ export function resolveSite(site: SiteInput): ResolvedSite {
   // Marine zones have mild winters for their number (common practice adjustment).
   const winterT = WINTER_T_C[zn] + (regime === "C" ? 8 : 0);
   const summerT = SUMMER_T_C[zn] - (regime === "C" ? 6 : 0);
-  const summer_t_c = pick(site.summer?.t_c, summerT, "summer.t_c");
+  const summer_t_c = pick(defaulted, site.summer?.t_c, summerT, "summer.t_c");
   const edition: CodeEdition = site.edition ?? "IECC/IRC 2021";
   if (site.edition === undefined) defaulted.push("edition");
 
@@ -193,18 +195,18 @@ export function resolveSite(site: SiteInput): ResolvedSite {
     hdd18: hdd18 ?? null,
     cdd10: cdd10 ?? null,
     nbcZone: hdd18 !== undefined ? nbcZoneFromHdd(hdd18) : null,
-    winter: { t_c: pick(site.winter?.t_c, winterT, "winter.t_c"), rh: pick(site.winter?.rh, 80, "winter.rh") },
+    winter: { t_c: pick(defaulted, site.winter?.t_c, winterT, "winter.t_c"), rh: pick(defaulted, site.winter?.rh, 80, "winter.rh") },
     summer: {
       t_c: summer_t_c,
-      rh: pick(site.summer?.rh, SUMMER_RH[regime ?? "none"], "summer.rh"),
-      cladding_t_c: pick(site.summer?.cladding_t_c, summer_t_c + CLADDING_SOLAR_RISE_K, "summer.cladding_t_c"),
+      rh: pick(defaulted, site.summer?.rh, SUMMER_RH[regime ?? "none"], "summer.rh"),
+      cladding_t_c: pick(defaulted, site.summer?.cladding_t_c, summer_t_c + CLADDING_SOLAR_RISE_K, "summer.cladding_t_c"),
     },
-    ground_t_c: pick(site.ground_t_c, GROUND_T_C[zn], "ground_t_c"),
+    ground_t_c: pick(defaulted, site.ground_t_c, GROUND_T_C[zn], "ground_t_c"),
     indoor: {
-      t_c: pick(site.indoor?.t_c, DEFAULT_INDOOR.t_c, "indoor.t_c"),
-      rh: pick(site.indoor?.rh, DEFAULT_INDOOR.rh, "indoor.rh"),
-      summer_t_c: pick(site.indoor?.summer_t_c, DEFAULT_INDOOR.summer_t_c, "indoor.summer_t_c"),
-      summer_rh: pick(site.indoor?.summer_rh, DEFAULT_INDOOR.summer_rh, "indoor.summer_rh"),
+      t_c: pick(defaulted, site.indoor?.t_c, DEFAULT_INDOOR.t_c, "indoor.t_c"),
+      rh: pick(defaulted, site.indoor?.rh, DEFAULT_INDOOR.rh, "indoor.rh"),
+      summer_t_c: pick(defaulted, site.indoor?.summer_t_c, DEFAULT_INDOOR.summer_t_c, "indoor.summer_t_c"),
+      summer_rh: pick(defaulted, site.indoor?.summer_rh, DEFAULT_INDOOR.summer_rh, "indoor.summer_rh"),
     },
     edition,
     defaulted,

@@ -32,7 +32,8 @@ export interface CaseConditions {
 const NG_TO_KG = 1e-12;
 const MAX_RH_ITERATIONS = 6;
 
-interface Point { z: number; p: number }
+/** A point of the Glaser diagram; k is the interface index, or −1 for a boundary air state. */
+interface Point { z: number; p: number; k: number }
 
 /** Lower convex hull (Andrew's monotone chain) of points sorted by z, one point per z. */
 function lowerHull(points: readonly Point[]): Point[] {
@@ -61,6 +62,22 @@ function interfaceLabels(a: ResolvedAssembly): string[] {
   return labels;
 }
 
+function resistsVapour(l: ResolvedLayer): boolean {
+  return retarderClass(layerPermeance(l)) !== "permeable";
+}
+
+/** Vapour pressure on the Glaser string at cumulative resistance z. */
+function hullAt(hull: readonly Point[], z: number): number {
+  for (let i = 1; i < hull.length; i++) {
+    if (z <= hull[i].z) {
+      const h0 = hull[i - 1];
+      const h1 = hull[i];
+      return h1.z === h0.z ? Math.min(h0.p, h1.p) : h0.p + ((h1.p - h0.p) * (z - h0.z)) / (h1.z - h0.z);
+    }
+  }
+  return hull[hull.length - 1].p;
+}
+
 /** Candidate first condensing surface when the Glaser line does not condense: in winter the
  * inner face of the first vapour-resisting layer (≤ 10 perm) outboard of the innermost
  * insulation; in summer the outer face of the first such layer inboard of the outermost
@@ -68,14 +85,13 @@ function interfaceLabels(a: ResolvedAssembly): string[] {
 function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number): number {
   const n = a.layers.length;
   const insulation = a.layers.filter(isInsulation).map((l) => l.index);
-  const resists = (l: ResolvedLayer): boolean => retarderClass(layerPermeance(l)) !== "permeable";
   if (season === "winter") {
     const innermost = insulation.length ? Math.max(...insulation) : n - 1;
-    for (let i = innermost - 1; i >= vapourStart; i--) if (resists(a.layers[i])) return i + 1; // inner face of layer i
+    for (let i = innermost - 1; i >= vapourStart; i--) if (resistsVapour(a.layers[i])) return i + 1; // inner face of layer i
     return Math.max(vapourStart, Math.min(innermost, n - 1));
   }
   const outermost = insulation.length ? Math.min(...insulation) : 0;
-  for (let i = outermost + 1; i < n; i++) if (resists(a.layers[i])) return i; // outer face of layer i
+  for (let i = outermost + 1; i < n; i++) if (resistsVapour(a.layers[i])) return i; // outer face of layer i
   return n - 1;
 }
 
@@ -123,28 +139,19 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
 
   // Glaser string: hull over (z, p_sat) with the two boundary vapour pressures; at equal z keep the
   // lowest pressure (surfaces share z with their air when films carry no vapour resistance).
-  const candidates: Point[] = [{ z: 0, p: pExt }, { z: zTot, p: c.interior.p_v_pa }];
-  for (let k = 0; k <= n; k++) candidates.push({ z: zCum[k], p: pSat[k] });
-  candidates.sort((p1, p2) => p1.z - p2.z || p1.p - p2.p);
+  const candidates: Point[] = [{ z: 0, p: pExt, k: -1 }, { z: zTot, p: c.interior.p_v_pa, k: -1 }];
+  for (let k = 0; k <= n; k++) candidates.push({ z: zCum[k], p: pSat[k], k });
+  // Ties: the boundary air state first, so a surface exactly at saturation is not a plane.
+  candidates.sort((p1, p2) => p1.z - p2.z || p1.p - p2.p || p1.k - p2.k);
   const unique: Point[] = [];
   for (const pt of candidates) if (!unique.length || pt.z > unique[unique.length - 1].z) unique.push(pt);
   const hull = lowerHull(unique);
-  const pAt = (z: number): number => {
-    for (let i = 1; i < hull.length; i++) {
-      if (z <= hull[i].z) {
-        const h0 = hull[i - 1];
-        const h1 = hull[i];
-        return h1.z === h0.z ? Math.min(h0.p, h1.p) : h0.p + ((h1.p - h0.p) * (z - h0.z)) / (h1.z - h0.z);
-      }
-    }
-    return hull[hull.length - 1].p;
-  };
 
   // Condensation planes: hull vertices that are saturation points below the straight line.
   const planes: CondensationPlane[] = [];
   for (let h = 0; h < hull.length; h++) {
     const v = hull[h];
-    const k = zCum.findIndex((z, i) => z === v.z && Math.abs(pSat[i] - v.p) <= 1e-9 * v.p);
+    const k = v.k;
     if (k < 0 || pLinear[k] <= pSat[k]) continue;
     // Flows in kg/(m²·s): from the interior side (higher z) and onward to the exterior side.
     const inflow = h + 1 < hull.length ? (hull[h + 1].p - v.p) / (hull[h + 1].z - v.z) : 0;
@@ -160,11 +167,13 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     });
   }
 
+  const condensing = new Array<boolean>(n + 1).fill(false);
+  for (const pl of planes) condensing[pl.interfaceIndex] = true;
   const interfaces: ProfileInterface[] = t.map((tc, k) => {
-    const pv = Math.min(pAt(zCum[k]), pLinear[k]);
+    const pv = Math.min(hullAt(hull, zCum[k]), pLinear[k]);
     return {
       position_mm: pos[k], label: labels[k], t_c: tc, t_f: cToF(tc), p_sat_pa: pSat[k], p_v_pa: pv,
-      rh: (100 * pv) / pSat[k], p_v_linear_pa: pLinear[k], condensing: planes.some((pl) => pl.interfaceIndex === k),
+      rh: (100 * pv) / pSat[k], p_v_linear_pa: pLinear[k], condensing: condensing[k],
     };
   });
 

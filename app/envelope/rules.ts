@@ -56,7 +56,6 @@ function ignitionBarrierInboard(a: ResolvedAssembly, from: number): boolean {
 export function evaluateRules(ctx: RuleContext): Flag[] {
   const { assembly: a, site, vapour, winter, summer } = ctx;
   const flags: Flag[] = [];
-  const add = (f: Flag): void => { flags.push(f); };
   const layers = a.layers;
   const inner = innermostInsulation(a);
   const outer = outermostInsulation(a);
@@ -69,7 +68,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     (isFoam(l) || l.material.family === "membrane" || l.material.family === "sheet-retarder") &&
     (classOf(l) === "I" || classOf(l) === "II"));
   if (interiorSheet && exteriorClosedLayer && !below && humidOrCooling(site)) {
-    add({
+    flags.push({
       id: "interior-sheet-with-closed-exterior",
       severity: "stop",
       title: "Vapour barrier on both sides in a humid climate",
@@ -77,7 +76,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
       source: "IRC 2021 Table R702.7(2) (Class I interior not permitted in zones 1–4 except marine 4), M; common practice",
     });
   } else if (vapour.bothSidesClosed && !below) {
-    add({
+    flags.push({
       id: "both-sides-closed",
       severity: "caution",
       title: "Closed to drying on both sides",
@@ -95,7 +94,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     if (!foam || !wrb) continue;
     const gapOutboard = layers.slice(0, Math.min(foam.index, wrb.index)).some(isDrainageGap);
     if (gapOutboard) continue;
-    add({
+    flags.push({
       id: "foam-against-wrb-no-gap",
       severity: reservoir ? "caution" : "note",
       title: "Rigid foam tight to the water-resistive barrier with no drainage gap",
@@ -110,7 +109,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     if (l.input.adhesive !== "solvent-based") continue;
     const touched = [layers[l.index - 1], l, layers[l.index + 1]].filter((x): x is ResolvedLayer => x !== undefined && x.material.solvent_sensitive);
     if (touched.length === 0) continue;
-    add({
+    flags.push({
       id: "solvent-adhesive-on-polystyrene",
       severity: "stop",
       title: "Solvent-based adhesive on polystyrene foam",
@@ -127,7 +126,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     const exposed = lastFoam.input.exposed === true || lastFoam.index === layers.length - 1;
     if (a.kind === "crawlspace-wall" || a.kind === "crawlspace-floor") {
       if (exposed || !ignitionBarrierInboard(a, lastFoam.index)) {
-        add({
+        flags.push({
           id: "foam-crawlspace-no-ignition-barrier",
           severity: "caution",
           title: "Foam plastic in a crawl space without an ignition barrier",
@@ -136,7 +135,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
         });
       }
     } else if (a.kind === "rim-joist" && exposed && lastFoam.thickness_mm <= 82.6) {
-      add({
+      flags.push({
         id: "foam-rim-joist-exposed",
         severity: "note",
         title: "Exposed foam at the rim joist",
@@ -144,7 +143,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
         source: "IRC 2018 R316.5.11, C",
       });
     } else if (a.kind !== "slab" && (exposed || !thermalBarrierInboard(a, lastFoam.index))) {
-      add({
+      flags.push({
         id: "foam-no-thermal-barrier",
         severity: "stop",
         title: "Foam plastic exposed to the interior",
@@ -160,7 +159,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     const wet = layers.find((l) => isInsulation(l) && l.material.water_sensitive);
     if (wet) {
       const touchesConcrete = [layers[wet.index - 1], layers[wet.index + 1]].some((l) => l && (l.material.family === "concrete" || l.material.family === "masonry"));
-      add({
+      flags.push({
         id: "below-grade-water-sensitive-insulation",
         severity: touchesConcrete || wet.index < structureIdx ? "stop" : "caution",
         title: "Insulation below grade that absorbs water",
@@ -172,7 +171,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     if (soilSideFoam) {
       const protectedBy = layers.slice(0, soilSideFoam.index).some((l) => l.input.role === "soil-side-protection");
       if (!protectedBy) {
-        add({
+        flags.push({
           id: "below-grade-foam-insects",
           severity: site.zoneNumber <= 4 ? "caution" : "note",
           title: "Foam on the soil side without protection",
@@ -185,7 +184,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     if (a.kind === "basement-wall" || a.kind === "crawlspace-wall") {
       const membrane = layers.find((l) => l.index < structureIdx && (l.material.family === "membrane" || l.material.family === "coating" || l.input.role === "soil-side-protection") && !isDrainageGap(l));
       if (membrane && !layers.slice(0, membrane.index).some((l) => isDrainageGap(l) || l.material.family === "aggregate")) {
-        add({
+        flags.push({
           id: "below-grade-membrane-no-drainage",
           severity: "caution",
           title: "Below-grade membrane without a drainage layer",
@@ -198,7 +197,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
 
   // 7. Class I interior retarder on a basement wall.
   if (a.kind === "basement-wall" && vapour.interiorClass === "I") {
-    add({
+    flags.push({
       id: "basement-class-i-interior",
       severity: "caution",
       title: "Class I vapour retarder on the inside of a basement wall",
@@ -210,7 +209,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
   // 8. Winter: condensing surface below the indoor dew point.
   if (!below && (winter.margin_c < 0 || winter.condensingPlanes.length > 0)) {
     const condensing = winter.condensingPlanes.length > 0;
-    add({
+    flags.push({
       id: "winter-condensing-surface",
       severity: condensing ? "caution" : "note",
       title: condensing ? "Winter condensation inside the assembly" : "Sheathing below the indoor dew point",
@@ -226,7 +225,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     const sheetPlane = summer.condensingPlanes.find((pl) => [layers[pl.interfaceIndex], layers[pl.interfaceIndex - 1]].some((l) => l !== undefined && l.index > inner && isSheetRetarder(l)));
     const onSheet = sheetPlane !== undefined;
     const plane = sheetPlane ?? summer.firstCondensingSurface;
-    add({
+    flags.push({
       id: onSheet ? "summer-condensation-interior-sheet" : "summer-inward-condensation",
       severity: onSheet ? "stop" : "caution",
       title: onSheet ? "Summer condensation on the interior vapour barrier" : "Summer inward vapour drive condenses inside",
@@ -239,11 +238,11 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
   for (const row of ctx.codeRows) {
     if (row.pass) continue;
     if (row.id === "irc-r702-7-3") {
-      add({ id: "exterior-foam-too-thin-for-class-iii", severity: "stop", title: "Exterior insulation too thin for a Class III interior", explanation: `${row.label}: requires ${row.required}; provided ${row.provided}. ${row.note}`, source: `${row.label}, C2/M` });
+      flags.push({ id: "exterior-foam-too-thin-for-class-iii", severity: "stop", title: "Exterior insulation too thin for a Class III interior", explanation: `${row.label}: requires ${row.required}; provided ${row.provided}. ${row.note}`, source: `${row.label}, C2/M` });
     } else if (row.id === "irc-r702-7-class") {
-      add({ id: "interior-retarder-not-permitted", severity: "stop", title: "Interior vapour retarder class not permitted here", explanation: `${row.label}: ${row.required}; provided ${row.provided}. ${row.note}`, source: `${row.label}, C/M` });
+      flags.push({ id: "interior-retarder-not-permitted", severity: "stop", title: "Interior vapour retarder class not permitted here", explanation: `${row.label}: ${row.required}; provided ${row.provided}. ${row.note}`, source: `${row.label}, C/M` });
     } else {
-      add({ id: `insufficient-r-${row.id}`, severity: "caution", title: "Less insulation than the code row", explanation: `${row.label}: requires ${row.required}; provided ${row.provided}. Use the performance path or add insulation.`, source: `${row.label}, C` });
+      flags.push({ id: `insufficient-r-${row.id}`, severity: "caution", title: "Less insulation than the code row", explanation: `${row.label}: requires ${row.required}; provided ${row.provided}. Use the performance path or add insulation.`, source: `${row.label}, C` });
     }
   }
 
@@ -254,7 +253,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     const extR = extFoam.reduce((t, l) => t + rsiToRip(materialRsi(l.material, l.thickness_mm)), 0);
     const totalR = s.cavity + s.ci;
     if (extR > 0 && totalR > 0 && extR < 0.1 * totalR) {
-      add({
+      flags.push({
         id: "hot-humid-exterior-foam-under-10pct",
         severity: "caution",
         title: "Exterior foam less than 10 % of the total R",
@@ -266,7 +265,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
 
   // 12. Sealed crawl space without a Class I ground cover.
   if (a.kind === "crawlspace-floor" && !layers.some((l) => classOf(l) === "I")) {
-    add({
+    flags.push({
       id: "crawlspace-no-class-i-ground-cover",
       severity: "stop",
       title: "No Class I ground cover in the crawl space",
@@ -280,7 +279,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     // Open-cell foam told from closed-cell by its permeability: above 10 perm per inch.
     const openCell = layers.find((l) => l.material.family === "spray-foam" && retarderClass(dryCupPermeance(l.material, 25.4)) === "permeable");
     if (openCell && (vapour.interiorClass === "III" || vapour.interiorClass === "none")) {
-      add({
+      flags.push({
         id: "open-cell-roof-no-retarder",
         severity: "stop",
         title: "Open-cell spray foam under a cold roof without a vapour retarder",

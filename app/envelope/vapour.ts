@@ -52,11 +52,14 @@ export function permeanceAtRh(m: Material, thickness_mm: number, rh: number): nu
 /** Permeance of a resolved layer; framed layers combine cavity and framing in parallel
  * (area-weighted permeance). rh undefined means dry cup. */
 export function layerPermeance(layer: ResolvedLayer, rh?: number): number {
-  const of = (m: Material): number =>
-    rh === undefined ? dryCupPermeance(m, layer.thickness_mm) : permeanceAtRh(m, layer.thickness_mm, rh);
-  if (!layer.framing) return of(layer.material);
+  const cavity = materialPermeance(layer.material, layer.thickness_mm, rh);
+  if (!layer.framing) return cavity;
   const f = layer.framing.fraction;
-  return (1 - f) * of(layer.material) + f * of(layer.framing.material);
+  return (1 - f) * cavity + f * materialPermeance(layer.framing.material, layer.thickness_mm, rh);
+}
+
+function materialPermeance(m: Material, thickness_mm: number, rh: number | undefined): number {
+  return rh === undefined ? dryCupPermeance(m, thickness_mm) : permeanceAtRh(m, thickness_mm, rh);
 }
 
 /** Class by the IRC definitions (dry-cup permeance in US perms). */
@@ -121,6 +124,18 @@ export function interiorRetarderClass(assembly: AssemblyInput, materials: Materi
   return interiorRetarderClassOf(resolveAssembly(assembly, materials));
 }
 
+function wetCupPermOf(layers: readonly ResolvedLayer[]): number | null {
+  return layers.length === 0 ? null : ngToPerm(seriesPermeance(layers.map((l) => layerPermeance(l, WET_CUP_MEAN_RH))));
+}
+
+function isOpen(perm: number | null): boolean {
+  return perm === null || perm > CLOSED_SIDE_PERM;
+}
+
+function formatSidePerm(p: number | null): string {
+  return p === null ? "nothing" : `${p < 1 ? p.toFixed(2) : p.toFixed(1)} perm`;
+}
+
 export function analyseVapour(a: ResolvedAssembly): VapourResult {
   const layers: VapourLayer[] = a.layers.map((l) => {
     const w = layerPermeance(l);
@@ -136,19 +151,15 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
     // A vented cavity connects to outdoor air: layers outboard of it do not hold drying back.
     const gap = outside.map((l) => l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)).lastIndexOf(true);
     if (gap >= 0) outside = outside.slice(gap + 1);
-    const wet = (ls: ResolvedLayer[]): number | null =>
-      ls.length === 0 ? null : ngToPerm(seriesPermeance(ls.map((l) => layerPermeance(l, WET_CUP_MEAN_RH))));
-    inwardPerm = wet(inside);
-    outwardPerm = wet(outside);
+    inwardPerm = wetCupPermOf(inside);
+    outwardPerm = wetCupPermOf(outside);
   }
-  const open = (perm: number | null): boolean => perm === null || perm > CLOSED_SIDE_PERM;
   const dryingDirections: ("inward" | "outward")[] = [];
-  if (core && open(inwardPerm)) dryingDirections.push("inward");
-  if (core && open(outwardPerm)) dryingDirections.push("outward");
-  const bothSidesClosed = core !== null && !open(inwardPerm) && !open(outwardPerm);
-  const fmt = (p: number | null): string => (p === null ? "nothing" : `${p < 1 ? p.toFixed(2) : p.toFixed(1)} perm`);
+  if (core && isOpen(inwardPerm)) dryingDirections.push("inward");
+  if (core && isOpen(outwardPerm)) dryingDirections.push("outward");
+  const bothSidesClosed = core !== null && !isOpen(inwardPerm) && !isOpen(outwardPerm);
   const explanation = core
-    ? `Layers inboard of the ${a.layers[core.last].material.name.toLowerCase()} pass ${fmt(inwardPerm)} and layers outboard of the ${a.layers[core.first].material.name.toLowerCase()} pass ${fmt(outwardPerm)} (wet cup, in series; a vented cavity and what lies outside it are not counted). A side at or below ${CLOSED_SIDE_PERM} perm is treated as closed to drying (common practice).`
+    ? `Layers inboard of the ${a.layers[core.last].material.name.toLowerCase()} pass ${formatSidePerm(inwardPerm)} and layers outboard of the ${a.layers[core.first].material.name.toLowerCase()} pass ${formatSidePerm(outwardPerm)} (wet cup, in series; a vented cavity and what lies outside it are not counted). A side at or below ${CLOSED_SIDE_PERM} perm is treated as closed to drying (common practice).`
     : "No structure or insulation layer: drying directions not assessed.";
   return {
     layers,
