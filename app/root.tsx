@@ -2,6 +2,7 @@ import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
 import { AppShell } from "~/components/app-shell";
 import { ErrorPage } from "~/components/error-page";
+import { loadRootData } from "~/auth/root-data.server";
 import "./app.css";
 
 export const middleware: Route.MiddlewareFunction[] = [
@@ -13,6 +14,11 @@ export const middleware: Route.MiddlewareFunction[] = [
     return replaceWithUnavailableIfDatabaseDown(request, response);
   },
 ];
+
+// The signed-in user's public fields (or null) and the CSRF token, for the shell and every form.
+export async function loader({ request }: Route.LoaderArgs) {
+  return loadRootData(request);
+}
 
 export const links: Route.LinksFunction = () => [{ rel: "icon", href: "/favicon.svg", type: "image/svg+xml" }];
 

@@ -1,4 +1,5 @@
 import { NavLink, Link } from "react-router";
+import { AccountMenu } from "./account-menu";
 
 const nav = [
   { to: "/details", label: "Catalogue" },
@@ -32,6 +33,7 @@ export function AppShell({ children }: { children: React.ReactNode }) {
               </NavLink>
             ))}
           </nav>
+          <AccountMenu />
         </div>
       </header>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-8">{children}</main>

@@ -1,0 +1,63 @@
+import type { Route } from "./+types/index";
+import { requireUser, type StaffRole } from "~/auth/guards.server";
+
+export const meta: Route.MetaFunction = () => [{ title: "Your account — Dryside" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const role: StaffRole = user.role;
+  return {
+    profile: {
+      email: user.email,
+      displayName: user.displayName,
+      role,
+      verifiedAt: user.emailVerifiedAt?.toISOString() ?? null,
+      memberSince: user.createdAt.toISOString(),
+    },
+  };
+}
+
+const ROLE_WORDS = {
+  member: "Member",
+  editor: "Editor — writes and revises details",
+  reviewer: "Reviewer — may approve others' submissions",
+  admin: "Admin",
+} as const;
+
+export default function Account({ loaderData }: Route.ComponentProps) {
+  const { profile } = loaderData;
+  return (
+    <div className="flex flex-col gap-10">
+      <header>
+        <h1 className="text-3xl" data-testid="account-heading">Your account</h1>
+        <p className="mt-2 text-graphite-soft">Signed in as {profile.displayName}.</p>
+      </header>
+      <section id="profile" aria-labelledby="profile-heading" className="rounded border border-rule bg-sheet p-6">
+        <h2 id="profile-heading" className="text-xl">Profile</h2>
+        <dl className="mt-4 grid grid-cols-[10rem_1fr] gap-y-2 text-sm">
+          <dt className="text-graphite-soft">E-mail</dt>
+          <dd data-testid="account-email">{profile.email}</dd>
+          <dt className="text-graphite-soft">Role</dt>
+          <dd data-testid="account-role">{ROLE_WORDS[profile.role]}</dd>
+          <dt className="text-graphite-soft">E-mail confirmed</dt>
+          <dd data-testid="account-verified">{profile.verifiedAt ? `Yes, on ${profile.verifiedAt.slice(0, 10)}` : "Not yet"}</dd>
+          <dt className="text-graphite-soft">Member since</dt>
+          <dd>{profile.memberSince.slice(0, 10)}</dd>
+        </dl>
+      </section>
+      {/* Filled by the payments work: the active plan or bought sets, pack downloads, saved details and jobs. */}
+      <section id="plan" aria-labelledby="plan-heading">
+        <h2 id="plan-heading" className="text-xl">Plan and sets</h2>
+        <p className="mt-2 text-sm text-graphite-soft">No plan yet. Premium details and pack downloads come with a plan or a bought set.</p>
+      </section>
+      <section id="downloads" aria-labelledby="downloads-heading">
+        <h2 id="downloads-heading" className="text-xl">Downloads</h2>
+        <p className="mt-2 text-sm text-graphite-soft">Packs you can download will be listed here.</p>
+      </section>
+      <section id="saved-details" aria-labelledby="saved-heading">
+        <h2 id="saved-heading" className="text-xl">Saved details</h2>
+        <p className="mt-2 text-sm text-graphite-soft">Details you save appear here, and you get an e-mail when one is revised.</p>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,91 @@
+import { parseWithZod } from "@conform-to/zod/v4";
+import { Form, data, useSearchParams } from "react-router";
+import type { Route } from "./+types/users";
+import { requireCsrf } from "~/auth/csrf.server";
+import { STAFF_ROLES, requireRole } from "~/auth/guards.server";
+import { userAdminSchema } from "~/auth/schemas";
+import { UserAdminError, changeRole, listUsers, revokeSessionsByAdmin } from "~/auth/user-admin.server";
+import { CsrfField } from "~/components/csrf-field";
+
+export const meta: Route.MetaFunction = () => [{ title: "Users — Dryside admin" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const admin = await requireRole(request, "admin");
+  const q = new URL(request.url).searchParams.get("q") ?? "";
+  return { users: await listUsers({ q }), selfId: admin.id };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const admin = await requireRole(request, "admin");
+  const formData = await requireCsrf(request);
+  const submission = parseWithZod(formData, { schema: userAdminSchema });
+  if (submission.status !== "success") return data({ message: "That change was not understood." }, { status: 400 });
+  const change = submission.value;
+  try {
+    if (change.intent === "change-role") {
+      await changeRole(admin.id, change.userId, change.role);
+      return { message: `Role changed to ${change.role}; that person signs in again to use it.` };
+    }
+    const count = await revokeSessionsByAdmin(admin.id, change.userId);
+    return { message: `Signed out of ${count} browser${count === 1 ? "" : "s"}.` };
+  } catch (error) {
+    if (error instanceof UserAdminError) return data({ message: error.message }, { status: 400 });
+    throw error;
+  }
+}
+
+export default function AdminUsers({ loaderData, actionData }: Route.ComponentProps) {
+  const [searchParams] = useSearchParams();
+  return (
+    <section>
+      <h1 className="text-3xl">Users and roles</h1>
+      <Form method="get" role="search" className="mt-4 flex max-w-md gap-2">
+        <label htmlFor="user-q" className="sr-only">Search by name or e-mail</label>
+        <input id="user-q" name="q" defaultValue={searchParams.get("q") ?? ""} placeholder="Name or e-mail" className="flex-1 rounded border border-rule bg-sheet px-3 py-2" />
+        <button className="rounded border border-rule px-3 py-2">Search</button>
+      </Form>
+      {actionData?.message && <p role="status" className="mt-4 text-sm">{actionData.message}</p>}
+      <table className="mt-6 w-full text-left text-sm">
+        <thead>
+          <tr className="border-b border-rule">
+            <th className="py-2">Name</th><th>E-mail</th><th>Confirmed</th><th>Browsers</th><th>Role</th><th><span className="sr-only">Sessions</span></th>
+          </tr>
+        </thead>
+        <tbody>
+          {loaderData.users.map((user) => (
+            <tr key={user.id} className="border-b border-rule/60 align-middle" data-testid={`user-${user.id}`}>
+              <td className="py-2">{user.displayName}</td>
+              <td>{user.email}</td>
+              <td>{user.verified ? "yes" : "no"}</td>
+              <td>{user.liveSessions}</td>
+              <td>
+                {user.id === loaderData.selfId ? (
+                  user.role
+                ) : (
+                  <Form method="post" className="flex gap-2">
+                    <CsrfField />
+                    <input type="hidden" name="intent" value="change-role" />
+                    <input type="hidden" name="userId" value={user.id} />
+                    <label className="sr-only" htmlFor={`role-${user.id}`}>Role of {user.displayName}</label>
+                    <select id={`role-${user.id}`} name="role" defaultValue={user.role} className="rounded border border-rule bg-sheet px-2 py-1">
+                      {STAFF_ROLES.map((role) => <option key={role} value={role}>{role}</option>)}
+                    </select>
+                    <button className="rounded border border-rule px-2 py-1">Change</button>
+                  </Form>
+                )}
+              </td>
+              <td>
+                <Form method="post">
+                  <CsrfField />
+                  <input type="hidden" name="intent" value="revoke-sessions" />
+                  <input type="hidden" name="userId" value={user.id} />
+                  <button className="text-stop underline-offset-2 hover:underline" disabled={user.liveSessions === 0}>Sign out everywhere</button>
+                </Form>
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </section>
+  );
+}
