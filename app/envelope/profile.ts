@@ -30,7 +30,8 @@ export interface CaseConditions {
 }
 
 const NG_TO_KG = 1e-12;
-const MAX_RH_ITERATIONS = 6;
+const MAX_RH_ITERATIONS = 8;
+const RH_SETTLED = 0.02;
 
 /** A point of the Glaser diagram; k is the interface index, or −1 for a boundary air state. */
 interface Point { z: number; p: number; k: number }
@@ -118,9 +119,12 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const pExt = c.saturatedSource ? pSat[c.vapourStart] : c.exterior.p_v_pa;
 
   // Permeances: RH-dependent layers are evaluated at the mean RH of their two faces, found by
-  // a few passes over the uncondensed profile (it settles quickly).
-  const dependent = a.layers.some((l) => isRhDependent(l.material) || (l.framing !== null && isRhDependent(l.framing.material)));
-  let perms = a.layers.map((l) => layerPermeance(l, (c.interior.rh + c.exterior.rh) / 2));
+  // a few passes over the uncondensed profile (it settles quickly; 2 % is far inside the
+  // spread of the published curves).
+  const dependent = a.layers.map((l) => isRhDependent(l.material) || (l.framing !== null && isRhDependent(l.framing.material)));
+  const anyDependent = dependent.includes(true);
+  const startRh = (c.interior.rh + c.exterior.rh) / 2;
+  const perms = a.layers.map((l, i) => (dependent[i] ? layerPermeance(l, startRh) : layerPermeance(l)));
   let zCum: number[] = [];
   let pLinear: number[] = [];
   for (let pass = 0; ; pass++) {
@@ -128,12 +132,18 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     for (let i = 0; i < n; i++) zCum.push(zCum[i] + (i < c.vapourStart ? 0 : 1 / (perms[i] * NG_TO_KG)));
     const zTot = zCum[n];
     pLinear = zCum.map((z) => pExt + ((c.interior.p_v_pa - pExt) * z) / zTot);
-    if (!dependent || pass + 1 >= MAX_RH_ITERATIONS) break;
-    const rhAt = pLinear.map((p, k) => Math.min(100, (100 * p) / pSat[k]));
-    const next = a.layers.map((l, i) => layerPermeance(l, (rhAt[i] + rhAt[i + 1]) / 2));
+    if (!anyDependent || pass + 1 >= MAX_RH_ITERATIONS) break;
+    let settled = true;
+    const next = perms.slice();
+    for (let i = 0; i < n; i++) {
+      if (!dependent[i]) continue;
+      const rh = (Math.min(100, (100 * pLinear[i]) / pSat[i]) + Math.min(100, (100 * pLinear[i + 1]) / pSat[i + 1])) / 2;
+      next[i] = layerPermeance(a.layers[i], rh);
+      if (Math.abs(next[i] - perms[i]) > RH_SETTLED * perms[i]) settled = false;
+    }
     // Stop when settled; the profile above was computed with the permeances reported.
-    if (next.every((w, i) => Math.abs(w - perms[i]) <= 0.005 * perms[i])) break;
-    perms = next;
+    if (settled) break;
+    for (let i = 0; i < n; i++) perms[i] = next[i];
   }
   const zTot = zCum[n];
 
