@@ -47,3 +47,13 @@ export async function downloadableSetIds(viewer: Viewer | null): Promise<Set<num
   if (rows.some((row) => row.kind === "plan")) return "all";
   return new Set(rows.map((row) => Number(row.set_id)));
 }
+
+/** Whether the viewer holds a live plan (not only bought sets): a second plan is not sold to them. */
+export async function hasLivePlan(viewer: Viewer | null): Promise<boolean> {
+  if (!viewer) return false;
+  const rows = await models().query(`SELECT 1 FROM entitlements e WHERE e.user_id = :userId AND e.kind = 'plan' AND ${LIVE_ENTITLEMENT} LIMIT 1`, {
+    type: QueryTypes.SELECT,
+    replacements: { userId: viewer.id },
+  });
+  return rows.length > 0;
+}

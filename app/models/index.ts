@@ -9,9 +9,14 @@ import { Session } from "./session";
 import { AuthToken } from "./auth-token";
 import { SignInAttempt } from "./sign-in-attempt";
 import { AuditEvent } from "./audit-event";
+import { Entitlement } from "./entitlement";
+import { PaymentEvent } from "./payment-event";
+import { Payment } from "./payment";
+import { Download } from "./download";
 
 export { Detail, DetailZone, DetailRevision, DetailSet, DetailSetMember, MaterialRecord, User };
 export { Session, AuthToken, SignInAttempt, AuditEvent };
+export { Entitlement, PaymentEvent, Payment, Download };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -29,6 +34,7 @@ export function initModels(sequelize: Sequelize): Sequelize {
   for (const model of [Session, AuthToken, SignInAttempt, AuditEvent]) model.initModel(sequelize);
   Session.belongsTo(User, { foreignKey: "userId", as: "user" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
+  for (const model of [Entitlement, PaymentEvent, Payment, Download]) model.initModel(sequelize);
   initialised.add(sequelize);
   return sequelize;
 }
