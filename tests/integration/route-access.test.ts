@@ -1,0 +1,132 @@
+// The role × route table, generated from app/routes.ts: every route must be listed here as public or
+// protected, so a new route without a decision fails this test. Protected routes are called as each role.
+import { resolve } from "node:path";
+import type { RouteConfigEntry } from "@react-router/dev/routes";
+import { beforeAll, expect, test } from "vitest";
+import { useMigratedDatabase } from "../helpers/database";
+import { useMailCatcher } from "../helpers/mail";
+import { RouteClient, type RouteResult } from "../helpers/route-client";
+import routeConfig from "~/routes";
+import { STAFF_ROLES, roleAtLeast, type StaffRole } from "~/auth/roles";
+
+useMailCatcher();
+useMigratedDatabase();
+
+type Access = "public" | { atLeast: StaffRole; params?: Record<string, string> };
+
+/** One decision per route path (as app/routes.ts spells it, "/" for the index). */
+const ACCESS: Record<string, Access> = {
+  "/": "public",
+  "/details": "public",
+  "/details/:slug": "public",
+  "/preferences/units": "public",
+  "/healthz": "public",
+  "/sign-up": "public",
+  "/sign-in": "public",
+  "/sign-out": "public",
+  "/verify-email/:token": "public",
+  "/forgot-password": "public",
+  "/reset-password/:token": "public",
+  "/account": { atLeast: "member" },
+  "/admin": { atLeast: "admin" },
+  "/admin/users": { atLeast: "admin" },
+  "/admin/outbox": { atLeast: "admin" },
+  "/admin/audit": { atLeast: "admin" },
+  "/api/details": "public",
+  "/api/details/:slug": "public",
+  "/api/details/:slug/check": "public",
+  "/api/materials": "public",
+  "/api/suggestions": "public",
+};
+
+interface FlatRoute {
+  path: string;
+  file: string;
+}
+
+function flatten(entries: RouteConfigEntry[], parent = ""): FlatRoute[] {
+  return entries.flatMap((entry) => {
+    const path = entry.path ? `${parent}/${entry.path}`.replace(/\/+/g, "/") : parent || "/";
+    const own = entry.path !== undefined || entry.index ? [{ path, file: entry.file }] : [];
+    return [...own, ...flatten(entry.children ?? [], entry.path ? path : parent)];
+  });
+}
+
+const routes = flatten(routeConfig);
+
+test("every route in app/routes.ts is listed as public or protected", () => {
+  const unlisted = routes.filter((route) => !(route.path in ACCESS)).map((route) => `${route.path} (${route.file})`);
+  expect(unlisted, "add these to ACCESS in tests/integration/route-access.test.ts").toEqual([]);
+});
+
+test("the table lists no route that app/routes.ts no longer has", () => {
+  const paths = new Set(routes.map((route) => route.path));
+  expect(Object.keys(ACCESS).filter((path) => !paths.has(path))).toEqual([]);
+});
+
+const browsers = new Map<StaffRole, RouteClient>();
+const password = "role table passphrase"; // our own minimum is 12 characters
+
+beforeAll(async () => {
+  const { User, models } = await import("~/models");
+  const { hashPassword } = await import("~/auth/password.server");
+  const signIn = await import("~/routes/auth/sign-in");
+  models();
+  const passwordHash = await hashPassword(password);
+  for (const role of STAFF_ROLES) {
+    await User.create({ email: `${role}@example.test`, displayName: `Table ${role}`, passwordHash, role, emailVerifiedAt: new Date() });
+    const browser = new RouteClient();
+    const result = await browser.submit(signIn.action, "/sign-in", { email: `${role}@example.test`, password });
+    if (result.status !== 302) throw new Error(`could not sign in as ${role}`);
+    browsers.set(role, browser);
+  }
+});
+
+type RouteFunction = (args: never) => unknown;
+interface RouteModule {
+  loader?: RouteFunction;
+  action?: RouteFunction;
+}
+
+function urlFor(path: string, params: Record<string, string> = {}): string {
+  return path.replace(/:(\w+)/g, (_, name: string) => params[name] ?? "x");
+}
+
+function expectRefused(result: RouteResult, path: string, who: string) {
+  const where = `${who} on ${path}`;
+  if (who === "visitor") {
+    if (path.startsWith("/api/")) expect(result.status, where).toBe(401);
+    else {
+      expect(result.status, where).toBe(302);
+      expect(result.headers.get("Location"), where).toMatch(/^\/sign-in\?next=/);
+    }
+  } else {
+    expect(result.status, where).toBe(403);
+  }
+}
+
+const protectedRoutes = routes.filter((route) => ACCESS[route.path] && ACCESS[route.path] !== "public");
+
+test.each(protectedRoutes.map((route) => [route.path, route] as const))("%s: refused below its role, served at or above it", async (path, route) => {
+  const access = ACCESS[path] as Exclude<Access, "public">;
+  const module = (await import(/* @vite-ignore */ resolve("app", route.file))) as RouteModule;
+  expect(module.loader ?? module.action, `${path} has neither loader nor action`).toBeDefined();
+  const url = urlFor(path, access.params);
+
+  const visitor = new RouteClient();
+  if (module.loader) expectRefused(await visitor.call(module.loader, url, access.params ?? {}), path, "visitor");
+  if (module.action) expectRefused(await visitor.submit(module.action, url, {}, access.params ?? {}), path, "visitor");
+
+  for (const role of STAFF_ROLES) {
+    const browser = browsers.get(role)!;
+    if (roleAtLeast(role, access.atLeast)) {
+      if (module.loader) {
+        const result = await browser.call(module.loader, url, access.params ?? {});
+        expect(result.status, `${role} on ${path}`).toBeLessThan(400);
+      }
+    } else {
+      if (module.loader) expectRefused(await browser.call(module.loader, url, access.params ?? {}), path, role);
+      if (module.action) expectRefused(await browser.submit(module.action, url, {}, access.params ?? {}), path, role);
+    }
+  }
+});
