@@ -112,7 +112,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const dT = c.interior.t_c - c.exterior.t_c;
   for (let k = 0; k <= n; k++) {
     t.push(c.exterior.t_c + (dT * r) / total);
-    pos.push(x);
+    pos.push(Math.round(x * 1e6) / 1e6); // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
     if (k < n) { r += series.layers[k]; x += a.layers[k].thickness_mm; }
   }
   const pSat = t.map(saturationPressure);

@@ -220,18 +220,31 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     });
   }
 
-  // 9. Summer inward drive condensing on an interior sheet.
+  // 9. Summer inward drive condensing on an interior sheet. Below grade the cool soil side can
+  // instead collect indoor vapour driven outward; that is reported in its own words.
   if (summer.condensingPlanes.length > 0) {
     const sheetPlane = summer.condensingPlanes.find((pl) => [layers[pl.interfaceIndex], layers[pl.interfaceIndex - 1]].some((l) => l !== undefined && l.index > inner && isSheetRetarder(l)));
     const onSheet = sheetPlane !== undefined;
     const plane = sheetPlane ?? summer.firstCondensingSurface;
-    flags.push({
-      id: onSheet ? "summer-condensation-interior-sheet" : "summer-inward-condensation",
-      severity: onSheet ? "stop" : "caution",
-      title: onSheet ? "Summer condensation on the interior vapour barrier" : "Summer inward vapour drive condenses inside",
-      explanation: `${summer.description}: ${plane?.label} reaches ${formatTemperature(plane?.t_c ?? 0, "si")}, below the dew point of the incoming vapour, collecting ${summer.rate_g_m2_day.toFixed(1)} g/(m²·day). ${onSheet ? "Remove the interior sheet or replace it with a variable-permeance retarder." : "Add a drainage/ventilation gap behind absorptive cladding or a vapour-resistant layer outboard."}`,
-      source: "steady-state dew-point method, M; common practice (inward drive behind reservoir cladding)",
-    });
+    const where = `${plane?.label} reaches ${formatTemperature(plane?.t_c ?? 0, "si")}`;
+    const rate = `${summer.rate_g_m2_day.toFixed(1)} g/(m²·day)`;
+    if (below && summer.interior.p_v_pa > summer.exterior.p_v_pa) {
+      flags.push({
+        id: "below-grade-summer-condensation",
+        severity: "note",
+        title: "Summer indoor humidity condenses toward the cool ground",
+        explanation: `${summer.description}: ${where}, below the dew point of the indoor air, so indoor vapour diffusing outward collects there (${rate} on the design basis). Keep the basement dehumidified in summer, or close the interior face of the insulation.`,
+        source: "steady-state dew-point method, M; common practice",
+      });
+    } else {
+      flags.push({
+        id: onSheet ? "summer-condensation-interior-sheet" : "summer-inward-condensation",
+        severity: onSheet ? "stop" : "caution",
+        title: onSheet ? "Summer condensation on the interior vapour barrier" : "Summer inward vapour drive condenses inside",
+        explanation: `${summer.description}: ${where}, below the dew point of the incoming vapour, collecting ${rate}. ${onSheet ? "Remove the interior sheet or replace it with a variable-permeance retarder." : "Add a drainage/ventilation gap behind absorptive cladding or a vapour-resistant layer outboard."}`,
+        source: "steady-state dew-point method, M; common practice (inward drive behind reservoir cladding)",
+      });
+    }
   }
 
   // 10/14. Failed code rows.

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { runSiteCheck } from "~/envelope";
+import { interiorRetarderClass, profileChartSeries, runSiteCheck } from "~/envelope";
 import type { AssemblyInput, LayerInput, SiteInput } from "~/envelope/types";
 import { loadLibrary } from "./library";
 
@@ -114,7 +114,7 @@ test("every result carries the caution deferring to the local code and a license
   for (const f of r.flags) expect(f.source.length).toBeGreaterThan(0);
 });
 
-test("a 2×6 wall with kraft facing dries both ways; a foil-faced exterior closes the outside", () => {
+test("a 2×6 wall with kraft facing (Class II) still dries both ways at wet-cup humidity", () => {
   const open: AssemblyInput = { kind: "above-grade-wall", layers: [
     layer("cladding", "fibre-cement-lap-siding", 8), layer("water-resistive-barrier", "polymeric-housewrap", 0.2), layer("sheathing", "osb", 11.1),
     batt140, layer("vapour-retarder", "kraft-facing", 0.1), gyp, paint,
@@ -122,4 +122,26 @@ test("a 2×6 wall with kraft facing dries both ways; a foil-faced exterior close
   const r = runSiteCheck(open, { zone: "5A" }, lib);
   expect(r.vapour.interiorClass).toBe("II");
   expect(r.vapour.dryingDirections).toEqual(["inward", "outward"]);
+});
+
+test("a variable-permeance retarder opens in the summer case where 6-mil poly collects water — common practice; curve REFERENCES §5.2 (M — from memory)", () => {
+  const wallWith = (retarder: string): AssemblyInput => ({ kind: "above-grade-wall", layers: [
+    layer("cladding", "brick-veneer", 101.6), layer("water-resistive-barrier", "building-paper-grade-d", 0.5), layer("sheathing", "fibreboard-sheathing", 12.7), batt140,
+    layer("vapour-retarder", retarder, 0.15), gyp, paint,
+  ] });
+  const site = { zone: "5A", summer: { t_c: 30, rh: 70 } };
+  const poly = runSiteCheck(wallWith("polyethylene-sheet-6mil"), site, lib).profiles.summer;
+  const variable = runSiteCheck(wallWith("variable-permeance-retarder"), site, lib).profiles.summer;
+  const vrIndex = 4;
+  expect(variable.vapourLayers[vrIndex].case_perm_ng).toBeGreaterThan(variable.vapourLayers[vrIndex].perm_ng);
+  expect(variable.rate_g_m2_day).toBeLessThan(poly.rate_g_m2_day);
+  expect(interiorRetarderClass(wallWith("variable-permeance-retarder"), lib)).toBe("II");
+});
+
+test("profileChartSeries gives one point per interface with the local dew point", () => {
+  const r = runSiteCheck({ kind: "above-grade-wall", layers: [layer("sheathing", "osb", 11.1), batt140, gyp] }, { zone: "6A" }, lib);
+  const series = profileChartSeries(r.profiles.winter);
+  expect(series).toHaveLength(4);
+  for (const p of series) expect(p.dew_point_c).toBeLessThanOrEqual(p.t_c + 1e-9);
+  expect(series.map((p) => p.position_mm)).toEqual([0, 11.1, 150.8, 163.5]);
 });
