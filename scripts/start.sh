@@ -40,6 +40,7 @@ export APP_URL="http://127.0.0.1:$APP_PORT"
 export STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT=$PAYMENTS_PORT STRIPE_API_PROTOCOL=http
 export STRIPE_SECRET_KEY=${STRIPE_SECRET_KEY:-sk_test_standin} STRIPE_WEBHOOK_SECRET=${STRIPE_WEBHOOK_SECRET:-whsec_standin_local}
 export SMTP_HOST=127.0.0.1 SMTP_PORT=$SMTP_PORT_LOCAL
+export MAIL_OUTBOX_DIR=${MAIL_OUTBOX_DIR:-.data/outbox}  # the app reads it for /admin/outbox
 
 log "migrating"
 npx tsx db/migrate.ts up
@@ -48,6 +49,7 @@ if [ -f scripts/content-import.ts ]; then
   npx tsx scripts/content-import.ts
 fi
 
+npx tsx scripts/demo-accounts.ts
 if [ -f dev/payments-standin/cli.ts ]; then
   log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
   PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
