@@ -2,8 +2,7 @@
 // IRC N1102.1.3; 2018 Table R402.1.2), IRC R702.7 interior vapour-retarder rows, and Table
 // R702.7(3) (continuous insulation that lets a Class III interior retarder serve).
 // Values: REFERENCES §6.1 and §6.2 (status C from DOE/PNNL tables, R702.7(3) C2 + M).
-import { isInsulation, type ResolvedAssembly, type ResolvedLayer } from "./layers";
-import { materialRsi } from "./layers";
+import { isInsulation, materialRsi, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { CodeEdition, CodeRow, InteriorClass, ResolvedSite } from "./types";
 import { rsiToRip } from "./units";
 

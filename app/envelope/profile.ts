@@ -4,12 +4,11 @@
 // from the outdoor to the indoor vapour pressure that stays at or below saturation: the lower
 // convex hull of the saturation points. Each bend of the string is a condensation plane; the
 // condensation rate there is the vapour flow arriving minus the flow leaving.
-import type { ResolvedAssembly, ResolvedLayer } from "./layers";
+import { isInsulation, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import { dewPointFromVapourPressure, saturationPressure } from "./psychrometrics";
 import { filmsFor, isBelowGrade, seriesRsi, type Season } from "./thermal";
 import type { CondensationPlane, ProfileCase, ProfileInterface, VapourLayer } from "./types";
-import { cToF, kgPerSToGPerDay } from "./units";
-import { isInsulation } from "./layers";
+import { cToF, kgPerSToGPerDay, ngToPerm } from "./units";
 import { isRhDependent, layerPermeance, retarderClass } from "./vapour";
 
 /** Boundary conditions of one case. */
@@ -193,7 +192,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart);
   const vapourLayers: VapourLayer[] = a.layers.map((l, i) => {
     const dry = layerPermeance(l);
-    return { index: i, material: l.material.slug, perm_ng: dry, perm_us: dry / 57.2135, class: retarderClass(dry), case_perm_ng: perms[i] };
+    return { index: i, material: l.material.slug, perm_ng: dry, perm_us: ngToPerm(dry), class: retarderClass(dry), case_perm_ng: perms[i] };
   });
 
   return {
