@@ -14,11 +14,17 @@ export default [
   route("forgot-password", "routes/auth/forgot-password.tsx"),
   route("reset-password/:token", "routes/auth/reset-password.tsx"),
   route("account", "routes/account/index.tsx"),
+  route("account/billing", "routes/account/billing.tsx"),
+  route("account/checkout/return", "routes/account/checkout-return.tsx"),
+  route("pricing", "routes/pricing/index.tsx"),
+  route("sets", "routes/sets/index.tsx"),
+  route("sets/:slug/pack", "routes/sets/pack.ts"),
   ...prefix("admin", [
     index("routes/admin/index.tsx"),
     route("users", "routes/admin/users.tsx"),
     route("outbox", "routes/admin/outbox.tsx"),
     route("audit", "routes/admin/audit.tsx"),
+    route("payments", "routes/admin/payments.tsx"),
   ]),
 
   ...prefix("api", [
@@ -27,5 +33,6 @@ export default [
     route("details/:slug/check", "routes/api/detail-check.ts"),
     route("materials", "routes/api/materials.ts"),
     route("suggestions", "routes/api/suggestions.ts"),
+    route("payments/webhook", "routes/api/payments-webhook.ts"),
   ]),
 ] satisfies RouteConfig;

@@ -1,0 +1,64 @@
+import { Op } from "sequelize";
+import { DetailSet, Download, Entitlement, type User, models } from "~/models";
+import { findPlan } from "./catalogue.server";
+import { receiptsFor, type ReceiptRow } from "./receipts.server";
+import { stripe } from "./stripe.server";
+
+export interface PlanSummary {
+  name: string;
+  status: "active" | "past_due" | "canceled" | "expired";
+  renewsOrEndsAt: string | null;
+  cancelAtPeriodEnd: boolean;
+}
+
+export interface BillingOverview {
+  plan: PlanSummary | null;
+  sets: { slug: string; title: string; boughtAt: string }[];
+  receipts: ReceiptRow[];
+  downloads: { setTitle: string; at: string }[];
+}
+
+async function currentPlan(userId: number): Promise<Entitlement | null> {
+  // The newest plan row: a canceled one still tells the person when it ended.
+  return Entitlement.findOne({ where: { userId, kind: "plan" }, order: [["updatedAt", "DESC"]] });
+}
+
+/** What the billing page shows, read from the entitlements the webhooks wrote. */
+export async function billingOverview(user: User): Promise<BillingOverview> {
+  models();
+  const [plan, sets, receipts, downloads] = await Promise.all([
+    currentPlan(user.id),
+    Entitlement.findAll({ where: { userId: user.id, kind: "set", status: { [Op.in]: ["active", "past_due"] } }, order: [["createdAt", "DESC"]] }),
+    receiptsFor(user.id),
+    Download.findAll({ where: { userId: user.id }, order: [["createdAt", "DESC"]], limit: 20 }),
+  ]);
+  const setRows = await DetailSet.findAll({ where: { id: [...new Set([...sets.map((s) => s.setId), ...downloads.map((d) => d.setId)].filter((id): id is number => id !== null))] } });
+  const setById = new Map(setRows.map((set) => [set.id, set]));
+  return {
+    plan: plan
+      ? {
+          name: findPlan(plan.planSlug ?? "")?.name ?? "Plan",
+          status: plan.status,
+          renewsOrEndsAt: plan.currentPeriodEnd?.toISOString() ?? null,
+          cancelAtPeriodEnd: plan.cancelAtPeriodEnd,
+        }
+      : null,
+    sets: sets.map((e) => ({ slug: setById.get(e.setId ?? 0)?.slug ?? "", title: setById.get(e.setId ?? 0)?.title ?? "A set", boughtAt: e.createdAt.toISOString() })),
+    receipts,
+    downloads: downloads.map((d) => ({ setTitle: setById.get(d.setId)?.title ?? "A set", at: d.createdAt.toISOString() })),
+  };
+}
+
+export type PlanChange = { ok: true; cancelAtPeriodEnd: boolean } | { ok: false; message: string };
+
+/**
+ * Asks the payments service to stop the plan at the end of the paid period, or to keep it running.
+ * The entitlement changes when the service's webhook confirms, like every other change.
+ */
+export async function requestPlanEnd(user: User, cancelAtPeriodEnd: boolean): Promise<PlanChange> {
+  models();
+  const plan = await Entitlement.findOne({ where: { userId: user.id, kind: "plan", status: { [Op.in]: ["active", "past_due"] } } });
+  if (!plan?.stripeSubscriptionId) return { ok: false, message: "You have no running plan to change." };
+  await stripe().subscriptions.update(plan.stripeSubscriptionId, { cancel_at_period_end: cancelAtPeriodEnd });
+  return { ok: true, cancelAtPeriodEnd };
+}

@@ -1,0 +1,198 @@
+import { createHash } from "node:crypto";
+import { PassThrough, type Readable } from "node:stream";
+import { ZipArchive } from "archiver";
+import { Op } from "sequelize";
+import { downloadableSetIds, type Viewer } from "~/access/premium.server";
+import { exportDetailMarkdown } from "~/catalogue/export-markdown";
+import { materialLibrary } from "~/catalogue/materials.server";
+import { plainText } from "~/catalogue/search-text";
+import { checkAssemblyForSite } from "~/catalogue/site-check.server";
+import type { DetailFrontMatter } from "~/content/detail-schema";
+import { CLIMATE_ZONE_IDS, type ClimateZoneId } from "~/content/zones";
+import type { Material } from "~/envelope";
+import type { UnitSystem } from "~/envelope/units";
+import { markdownSection } from "~/markdown/render.server";
+import { Detail, DetailRevision, DetailSet, Download, MaterialRecord, models } from "~/models";
+import { blobStorage } from "~/storage/storage.server";
+import { renderDetailSheet } from "~/packs/sheet-pdf.server";
+
+// A pack is a set's download: one PDF sheet and one Markdown source file per published detail.
+// Packs are built once per (set, published revisions, material library, units, zone) and kept in blob
+// storage; the key changes when any of those change, so a stale pack is never served.
+
+/** Raise when the pack layout or the sheet changes, so cached packs are rebuilt. */
+const PACK_FORMAT = 1;
+
+export type PackZone = ClimateZoneId | "own";
+
+export interface PackRequest {
+  units: UnitSystem;
+  /** One zone for every sheet, or "own": each detail checked for the first zone it is written for. */
+  zone: PackZone;
+}
+
+export function parsePackRequest(search: URLSearchParams, fallbackUnits: UnitSystem): PackRequest | null {
+  const units = search.get("units") ?? fallbackUnits;
+  const zone = search.get("zone") ?? "own";
+  if (units !== "si" && units !== "ip") return null;
+  if (zone !== "own" && !(CLIMATE_ZONE_IDS as readonly string[]).includes(zone)) return null;
+  return { units, zone: zone as PackZone };
+}
+
+interface PackMember {
+  slug: string;
+  revisionId: number;
+  revisionNumber: number;
+  contentHash: string;
+  frontMatter: DetailFrontMatter;
+  body: string;
+  publishedAt: Date | null;
+  authorName: string;
+  reviewerName: string | null;
+  changeNote: string | null;
+}
+
+async function packMembers(setId: number): Promise<PackMember[]> {
+  const details = await Detail.findAll({
+    attributes: ["id", "slug", "publishedRevisionId"],
+    where: { publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null },
+    include: [{ model: DetailSet, as: "sets", attributes: [], where: { id: setId }, required: true }],
+    order: [["slug", "ASC"]],
+  });
+  const revisions = await DetailRevision.findAll({ where: { id: details.map((d) => d.publishedRevisionId ?? 0) } });
+  const byId = new Map(revisions.map((r) => [r.id, r]));
+  return details.flatMap((detail) => {
+    const revision = byId.get(detail.publishedRevisionId ?? 0);
+    if (!revision) return [];
+    return [{ slug: detail.slug, revisionId: revision.id, revisionNumber: revision.number, contentHash: revision.contentHash, frontMatter: revision.frontMatter as DetailFrontMatter, body: revision.bodyMd, publishedAt: revision.publishedAt, authorName: revision.authorName, reviewerName: revision.reviewerName, changeNote: revision.changeNote }];
+  });
+}
+
+async function materialsVersion(): Promise<string> {
+  const newest = await MaterialRecord.max("updatedAt");
+  const count = await MaterialRecord.count();
+  return `${count}:${newest instanceof Date ? newest.toISOString() : String(newest ?? "none")}`;
+}
+
+/** The cache key: readable prefix for people, hash of everything the content depends on. */
+export function packKey(setSlug: string, request: PackRequest, members: Pick<PackMember, "slug" | "revisionId" | "contentHash">[], materials: string): string {
+  const fingerprint = createHash("sha256")
+    .update(JSON.stringify({ format: PACK_FORMAT, set: setSlug, units: request.units, zone: request.zone, materials, members: members.map((m) => [m.slug, m.revisionId, m.contentHash]) }))
+    .digest("hex")
+    .slice(0, 20);
+  return `packs/${setSlug}/${request.units}-${request.zone.toLowerCase()}-${fingerprint}.zip`;
+}
+
+const PACK_README = (setTitle: string, request: PackRequest, members: PackMember[]) =>
+  [
+    `Dryside pack: ${setTitle}`,
+    "",
+    `Units: ${request.units === "si" ? "SI" : "inch-pound"}. Site check: ${request.zone === "own" ? "each detail at the first climate zone it is written for" : `climate zone ${request.zone}`}.`,
+    "",
+    "Contents (one PDF sheet and the Markdown source per detail):",
+    ...members.map((m) => `  ${m.slug}.pdf / ${m.slug}.md (revision ${m.revisionNumber})`),
+    "",
+    "Caution: these are reference designs, not approvals. Check each detail against the code adopted where you build,",
+    "the manufacturers' instructions for each product, and a licensed design professional where one is required.",
+    "",
+  ].join("\n");
+
+/** The "## Cautions" list of a body as plain sentences, one per bullet. */
+export function cautionsOf(body: string): string[] {
+  const items: string[] = [];
+  for (const line of markdownSection(body, "Cautions").split("\n")) {
+    const bullet = /^\s*(?:[-*+]|\d+[.)])\s+(.*)$/.exec(line);
+    if (bullet) items.push(bullet[1]);
+    else if (line.trim() && items.length > 0) items[items.length - 1] += ` ${line.trim()}`;
+    else if (line.trim()) items.push(line.trim());
+  }
+  return items.map((item) => plainText(item)).filter(Boolean);
+}
+
+async function sheetPdf(member: PackMember, request: PackRequest, library: ReadonlyMap<string, Material>): Promise<Buffer> {
+  const zone = request.zone === "own" ? member.frontMatter.zones[0] : request.zone;
+  const check = await checkAssemblyForSite(member.frontMatter, { units: request.units, zone });
+  if (!check.ok) throw new Error(`site check for ${member.slug} at ${zone} failed: ${JSON.stringify(check.fieldErrors)}`);
+  const front = member.frontMatter;
+  return renderDetailSheet({
+    title: front.title,
+    slug: member.slug,
+    revision: {
+      number: member.revisionNumber,
+      publishedAt: member.publishedAt ?? front.revised ?? "unpublished",
+      authorName: member.authorName,
+      reviewerName: member.reviewerName ?? front.reviewer,
+      changeNote: member.changeNote,
+    },
+    summary: front.summary,
+    kind: front.assembly,
+    layers: front.layers.map((layer) => ({
+      role: layer.role,
+      family: library.get(layer.material)?.family ?? "unknown",
+      materialName: library.get(layer.material)?.name ?? layer.material,
+      thickness_mm: layer.thickness_mm,
+      ...(layer.framing
+        ? { framing: { fraction: layer.framing.fraction, family: library.get(layer.framing.material)?.family ?? "lumber", materialName: library.get(layer.framing.material)?.name } }
+        : {}),
+    })),
+    units: request.units,
+    siteCheck: check.result,
+    cautions: cautionsOf(member.body),
+    references: front.references,
+  });
+}
+
+async function buildPack(setTitle: string, members: PackMember[], request: PackRequest): Promise<Readable> {
+  const archive = new ZipArchive({ zlib: { level: 6 } });
+  const out = new PassThrough();
+  archive.on("error", (error) => out.destroy(error));
+  archive.pipe(out);
+  archive.append(PACK_README(setTitle, request, members), { name: "README.txt" });
+  // Sheets one after another: each PDF render is CPU-bound and the machine is shared.
+  const library = await materialLibrary();
+  for (const member of members) {
+    archive.append(await sheetPdf(member, request, library), { name: `${member.slug}.pdf` });
+    archive.append(exportDetailMarkdown(member.frontMatter, member.body), { name: `${member.slug}.md` });
+  }
+  void archive.finalize();
+  return out;
+}
+
+// Concurrent first downloads of the same pack share one build.
+const building = new Map<string, Promise<void>>();
+
+async function ensurePack(key: string, build: () => Promise<Readable>): Promise<void> {
+  const storage = blobStorage();
+  if (await storage.exists(key)) return;
+  let pending = building.get(key);
+  if (!pending) {
+    pending = (async () => storage.put(key, await build()))().finally(() => building.delete(key));
+    building.set(key, pending);
+  }
+  await pending;
+}
+
+export type PackDownload =
+  | { ok: true; key: string; fileName: string; body: Readable; size: number; built: boolean }
+  | { ok: false; status: 403 | 404; message: string };
+
+/**
+ * Checks access again (a plan can have lapsed since the page was drawn), builds or reuses the pack,
+ * logs the download and returns the stream.
+ */
+export async function downloadPack(viewer: Viewer, setSlug: string, request: PackRequest): Promise<PackDownload> {
+  models();
+  const set = await DetailSet.findOne({ where: { slug: setSlug } });
+  if (!set) return { ok: false, status: 404, message: `No set called “${setSlug}”.` };
+  const allowed = await downloadableSetIds(viewer);
+  if (allowed !== "all" && !allowed.has(set.id)) return { ok: false, status: 403, message: `A plan or the “${set.title}” set is needed to download this pack.` };
+  const members = await packMembers(set.id);
+  if (members.length === 0) return { ok: false, status: 404, message: `“${set.title}” has no published details yet.` };
+  const key = packKey(set.slug, request, members, await materialsVersion());
+  const existed = await blobStorage().exists(key);
+  await ensurePack(key, () => buildPack(set.title, members, request));
+  const stored = await blobStorage().get(key);
+  if (!stored) throw new Error(`pack ${key} vanished after it was built`);
+  await Download.create({ userId: viewer.id, setId: set.id, packKey: key });
+  return { ok: true, key, fileName: `dryside-${set.slug}-${request.units}-${request.zone.toLowerCase()}.zip`, body: stored.body, size: stored.size, built: !existed };
+}

@@ -1,0 +1,134 @@
+import { data, Form, Link, redirect } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/billing";
+import { requireCsrf } from "~/auth/csrf.server";
+import { requireUser } from "~/auth/guards.server";
+import { CsrfField } from "~/components/csrf-field";
+import { billingOverview, requestPlanEnd } from "~/payments/billing.server";
+
+export const meta: Route.MetaFunction = () => [{ title: "Billing — Dryside" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const requested = new URL(request.url).searchParams.get("requested");
+  const overview = await billingOverview(user);
+  // After a change request the page refreshes itself until the service's webhook has confirmed it.
+  const waiting =
+    (requested === "end" && overview.plan?.cancelAtPeriodEnd === false) || (requested === "keep" && overview.plan?.cancelAtPeriodEnd === true);
+  return { ...overview, waiting };
+}
+
+const planChangeSchema = z.object({ intent: z.enum(["end-at-period-end", "keep-running"]) });
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  const form = await requireCsrf(request);
+  const parsed = planChangeSchema.safeParse(Object.fromEntries(form));
+  if (!parsed.success) return data({ message: "That change was not understood." }, { status: 400 });
+  const ending = parsed.data.intent === "end-at-period-end";
+  const result = await requestPlanEnd(user, ending);
+  if (!result.ok) return data({ message: result.message }, { status: 409 });
+  return redirect(`/account/billing?requested=${ending ? "end" : "keep"}`, { status: 303 });
+}
+
+function day(iso: string | null): string {
+  return iso ? iso.slice(0, 10) : "—";
+}
+
+const STATUS_WORDS = {
+  active: "Active",
+  past_due: "Renewal payment failed: update your card soon",
+  canceled: "Ended",
+  expired: "Paused",
+} as const;
+
+export default function Billing({ loaderData, actionData }: Route.ComponentProps) {
+  const { plan, sets, receipts, downloads, waiting } = loaderData;
+  const running = plan && (plan.status === "active" || plan.status === "past_due");
+  return (
+    <div className="flex flex-col gap-10">
+      {waiting && <meta httpEquiv="refresh" content="2" />}
+      <header>
+        <h1 className="text-3xl">Billing</h1>
+        <p className="mt-2 text-graphite-soft"><Link to="/account">Back to your account</Link></p>
+      </header>
+      {actionData?.message && <p role="alert" className="text-sm">{actionData.message}</p>}
+      {waiting && <p role="status" className="text-sm" data-testid="billing-waiting">Change sent to the payments service; this page updates when it confirms.</p>}
+
+      <section aria-labelledby="plan-heading" className="rounded border border-rule bg-sheet p-6" data-testid="billing-plan">
+        <h2 id="plan-heading" className="text-xl">Plan</h2>
+        {plan ? (
+          <>
+            <dl className="mt-4 grid grid-cols-[12rem_1fr] gap-y-2 text-sm">
+              <dt className="text-graphite-soft">Plan</dt>
+              <dd>{plan.name}</dd>
+              <dt className="text-graphite-soft">State</dt>
+              <dd data-testid="plan-status">{STATUS_WORDS[plan.status]}</dd>
+              <dt className="text-graphite-soft">{running && !plan.cancelAtPeriodEnd ? "Renews on" : "Access until"}</dt>
+              <dd data-testid="plan-date">{day(plan.renewsOrEndsAt)}</dd>
+            </dl>
+            {running && (
+              <Form method="post" className="mt-4">
+                <CsrfField />
+                {plan.cancelAtPeriodEnd ? (
+                  <button name="intent" value="keep-running" className="rounded border border-rule px-3 py-2" data-testid="plan-resume">Keep my plan running</button>
+                ) : (
+                  <button name="intent" value="end-at-period-end" className="rounded border border-rule px-3 py-2" data-testid="plan-cancel">Stop at the end of this period</button>
+                )}
+              </Form>
+            )}
+          </>
+        ) : (
+          <p className="mt-2 text-sm text-graphite-soft">No plan. <Link to="/pricing">See the plans</Link>.</p>
+        )}
+      </section>
+
+      <section aria-labelledby="sets-heading">
+        <h2 id="sets-heading" className="text-xl">Sets you bought</h2>
+        {sets.length === 0 ? (
+          <p className="mt-2 text-sm text-graphite-soft">None yet.</p>
+        ) : (
+          <ul className="mt-2 text-sm">
+            {sets.map((set) => (
+              <li key={set.slug}>
+                <Link to={`/sets#${set.slug}`}>{set.title}</Link> — bought {day(set.boughtAt)} · <a href={`/sets/${set.slug}/pack`} download>download the pack</a>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
+      <section aria-labelledby="receipts-heading">
+        <h2 id="receipts-heading" className="text-xl">Receipts</h2>
+        {receipts.length === 0 ? (
+          <p className="mt-2 text-sm text-graphite-soft">No payments yet.</p>
+        ) : (
+          <table className="mt-2 w-full text-left text-sm" data-testid="receipts">
+            <thead><tr className="border-b border-rule"><th className="py-2">Date</th><th>For</th><th>Amount</th><th>E-mailed</th></tr></thead>
+            <tbody>
+              {receipts.map((receipt) => (
+                <tr key={receipt.id} className="border-b border-rule/60">
+                  <td className="py-2">{day(receipt.paidAt)}</td>
+                  <td>{receipt.description}</td>
+                  <td className="font-mono">{receipt.amount}</td>
+                  <td>{receipt.emailed ? "yes" : "not yet"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+      </section>
+
+      <section aria-labelledby="downloads-heading">
+        <h2 id="downloads-heading" className="text-xl">Recent downloads</h2>
+        {downloads.length === 0 ? (
+          <p className="mt-2 text-sm text-graphite-soft">No packs downloaded yet.</p>
+        ) : (
+          <ul className="mt-2 text-sm">
+            {downloads.map((d, i) => <li key={i}>{d.setTitle} — {d.at.slice(0, 16).replace("T", " ")} UTC</li>)}
+          </ul>
+        )}
+      </section>
+    </div>
+  );
+}
