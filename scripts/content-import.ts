@@ -19,7 +19,7 @@ try {
   const { materials, sets, details } = summary;
   console.log(
     `imported in ${summary.ms} ms: materials ${materials.created} new, ${materials.updated} updated, ${materials.unchanged} unchanged; ` +
-      `sets ${sets.created} new, ${sets.updated} refreshed; details ${details.created} new, ${details.revised} revised, ${details.unchanged} unchanged`,
+      `sets ${sets.created} new, ${sets.updated} updated, ${sets.unchanged} unchanged; details ${details.created} new, ${details.revised} revised, ${details.unchanged} unchanged`,
   );
   for (const kept of details.kept) console.log(`  kept ${kept.slug}: ${kept.reason}`);
 } catch (error) {

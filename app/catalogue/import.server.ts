@@ -17,7 +17,7 @@ export class ImportRejected extends Error {
 
 export interface ImportSummary {
   materials: { created: number; updated: number; unchanged: number };
-  sets: { created: number; updated: number };
+  sets: { created: number; updated: number; unchanged: number };
   details: { created: number; revised: number; unchanged: number; kept: { slug: string; reason: string }[] };
   ms: number;
 }
@@ -53,7 +53,7 @@ export async function importContent(root: string, options: ImportOptions = {}): 
   const sequelize = models();
   const summary: ImportSummary = {
     materials: { created: 0, updated: 0, unchanged: 0 },
-    sets: { created: 0, updated: 0 },
+    sets: { created: 0, updated: 0, unchanged: 0 },
     details: { created: 0, revised: 0, unchanged: 0, kept: [] },
     ms: 0,
   };
@@ -80,8 +80,9 @@ export async function importContent(root: string, options: ImportOptions = {}): 
     for (const set of content.sets) {
       const values = { title: set.title, summary: set.summary, priceCents: set.price_cents, currency: set.currency };
       const [record, created] = await DetailSet.findOrCreate({ where: { slug: set.slug }, defaults: { slug: set.slug, ...values }, transaction });
-      if (!created) await record.update(values, { transaction });
-      summary.sets[created ? "created" : "updated"]++;
+      const changed = !created && (record.title !== values.title || record.summary !== values.summary || record.priceCents !== values.priceCents || record.currency !== values.currency);
+      if (changed) await record.update(values, { transaction });
+      summary.sets[created ? "created" : changed ? "updated" : "unchanged"]++;
       setIds.set(set.slug, record.id);
       tick(`set ${set.slug}`);
     }

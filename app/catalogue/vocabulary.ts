@@ -58,9 +58,29 @@ export const VALUE_LABELS: Record<string, string> = {
   premium: "Premium",
 };
 
-export function labelFor(value: string): string {
-  return VALUE_LABELS[value] ?? value;
+// Values whose label depends on the facet they belong to.
+const FACET_VALUE_LABELS: Partial<Record<FacetKey, Record<string, string>>> = {
+  interiorClass: { none: "No interior retarder" },
+};
+
+export function labelFor(value: string, facet?: FacetKey): string {
+  return (facet && FACET_VALUE_LABELS[facet]?.[value]) ?? VALUE_LABELS[value] ?? value;
 }
+
+/** Plain words for the site values the engine filled in from zone defaults. */
+export const SITE_DEFAULT_LABELS: Record<string, string> = {
+  "winter.t_c": "winter design temperature",
+  "winter.rh": "winter outdoor humidity",
+  "summer.t_c": "summer design temperature",
+  "summer.rh": "summer outdoor humidity",
+  "summer.cladding_t_c": "sun-warmed cladding temperature",
+  ground_t_c: "ground temperature",
+  "indoor.t_c": "indoor winter temperature",
+  "indoor.rh": "indoor winter humidity",
+  "indoor.summer_t_c": "indoor summer temperature",
+  "indoor.summer_rh": "indoor summer humidity",
+  edition: "code edition (2021)",
+};
 
 /** Trade words people type, mapped to the words details are written with. */
 export const SEARCH_SYNONYMS: Record<string, string[]> = {

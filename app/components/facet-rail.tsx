@@ -32,7 +32,7 @@ export function FacetRail({ query, facets }: { query: CatalogueQuery; facets: Re
                       defaultChecked={selected.has(value)}
                       className="accent-ochre"
                     />
-                    <span className="flex-1">{key === "zone" ? value : labelFor(value)}</span>
+                    <span className="flex-1">{key === "zone" ? value : labelFor(value, key)}</span>
                     <span className="tabular-nums text-xs text-graphite-soft" data-facet-count={`${key}:${value}`}>{count}</span>
                   </label>
                 </li>

@@ -1,6 +1,7 @@
 import type { Flag, ProfileCase, SiteCheckResult } from "~/envelope";
 import { formatR, formatTemperature, formatTemperatureDifference, formatU, formatRate, type UnitSystem } from "~/envelope/units";
 import { ProfileChart } from "./profile-chart";
+import { SITE_DEFAULT_LABELS } from "~/catalogue/vocabulary";
 
 const SEVERITY_STYLE: Record<Flag["severity"], { label: string; className: string }> = {
   stop: { label: "Stop", className: "border-stop bg-stop/5 text-stop" },
@@ -43,7 +44,7 @@ export function SiteCheckResults({ result, units }: { result: SiteCheckResult; u
           {formatTemperature(site.indoor.t_c, units, 0)} at {Math.round(site.indoor.rh)} % RH
         </p>
       </div>
-      {site.defaulted.length ? <p className="text-xs text-graphite-soft">Assumed for this zone: {site.defaulted.join(", ")}.</p> : null}
+      {site.defaulted.length ? <p className="text-xs text-graphite-soft">Assumed from the zone: {site.defaulted.map((key) => SITE_DEFAULT_LABELS[key] ?? key).join(", ")}.</p> : null}
 
       <div className="grid gap-3 md:grid-cols-2">
         <CaseSummary profile={profiles.winter} units={units} />

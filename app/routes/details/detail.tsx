@@ -75,7 +75,7 @@ export default function DetailPage({ loaderData }: Route.ComponentProps) {
 
       <section className="grid gap-8 lg:grid-cols-[3fr_2fr]">
         <figure className="rounded border border-rule bg-sheet p-3">
-          <SectionDrawing kind={detail.assembly} layers={detail.drawing} units={units} />
+          <SectionDrawing assembly={{ kind: detail.assembly, layers: detail.drawing }} units={units} title={detail.title} />
         </figure>
         <dl className="grid grid-cols-[auto_1fr] content-start gap-x-4 gap-y-2 text-sm">
           {facts.map(([term, value]) => (
