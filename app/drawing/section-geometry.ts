@@ -247,7 +247,7 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
     shapes.push({ type: "circle", cx: target, cy: top + 14, r: 1.6, fill: INK.graphite, tag });
     shapes.push({ type: "circle", cx, cy: CALLOUT_Y, r: CALLOUT_R, fill: INK.sheet, stroke: INK.graphite, strokeWidth: 0.9, tag });
     shapes.push(text(cx, CALLOUT_Y + 3.6, String(band.number), { anchor: "middle", weight: "bold", size: 10, tag }));
-    if (band.drawnWiderThanScale) shapes.push(text(cx + CALLOUT_R + 1, CALLOUT_Y - 4, "*", { size: 9, fill: INK.ochre, weight: "bold", tag }));
+    if (band.drawnWiderThanScale) shapes.push(text(cx, CALLOUT_Y - CALLOUT_R - 2, "*", { size: 9, fill: INK.ochre, weight: "bold", anchor: "middle", tag }));
   });
 
   // Side labels under the section.

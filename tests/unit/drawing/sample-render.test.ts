@@ -35,8 +35,8 @@ const basementWall: SectionInput = {
 };
 
 function page(svgs: string[]): string {
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="760" height="${svgs.length * 470}" style="background:#f7f2e8">${svgs
-    .map((s, i) => `<g transform="translate(20 ${10 + i * 470})">${s.replace("<svg", '<svg width="720" height="450"')}</g>`)
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="760" height="${svgs.length * 540}" style="background:#f7f2e8">${svgs
+    .map((s, i) => `<g transform="translate(20 ${10 + i * 540})">${s.replace("<svg", '<svg width="720" height="520"')}</g>`)
     .join("")}</svg>`;
 }
 
