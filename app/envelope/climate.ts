@@ -93,7 +93,16 @@ const SUMMER_RH: Record<MoistureRegime | "none", number> = { A: 60, B: 25, C: 55
 /** Sun-warmed wet cladding sits well above air temperature (common practice: +15 K or more
  * on a sunny face after rain). */
 export const CLADDING_SOLAR_RISE_K = 15;
-export const DEFAULT_INDOOR = { t_c: 21, rh: 40, summer_t_c: 24, summer_rh: 50 } as const;
+export const DEFAULT_INDOOR = { t_c: 21, summer_t_c: 24, summer_rh: 50 } as const;
+
+/** Default winter indoor RH by ASHRAE 160's simplified method: 25 % at or below −10 °C outdoors,
+ * 70 % at or above 20 °C, linear between (REFERENCES §7.2 note, M). Drier indoor air in cold
+ * weather is what houses actually see; a fixed 40 % overstates design-day condensation. */
+export function ashrae160IndoorRh(outdoorC: number): number {
+  if (outdoorC <= -10) return 25;
+  if (outdoorC >= 20) return 70;
+  return 25 + ((outdoorC + 10) * 45) / 30;
+}
 
 /** The given value, or the default (recorded as defaulted so the page can say "assumed"). */
 function pick(defaulted: string[], value: number | undefined, fallback: number, name: string): number {
@@ -184,6 +193,7 @@ export function resolveSite(site: SiteInput): ResolvedSite {
   const winterT = WINTER_T_C[zn] + (regime === "C" ? 8 : 0);
   const summerT = SUMMER_T_C[zn] - (regime === "C" ? 6 : 0);
   const summer_t_c = pick(defaulted, site.summer?.t_c, summerT, "summer.t_c");
+  const winter_t_c = pick(defaulted, site.winter?.t_c, winterT, "winter.t_c");
   const edition: CodeEdition = site.edition ?? "IECC/IRC 2021";
   if (site.edition === undefined) defaulted.push("edition");
 
@@ -195,7 +205,7 @@ export function resolveSite(site: SiteInput): ResolvedSite {
     hdd18: hdd18 ?? null,
     cdd10: cdd10 ?? null,
     nbcZone: hdd18 !== undefined ? nbcZoneFromHdd(hdd18) : null,
-    winter: { t_c: pick(defaulted, site.winter?.t_c, winterT, "winter.t_c"), rh: pick(defaulted, site.winter?.rh, 80, "winter.rh") },
+    winter: { t_c: winter_t_c, rh: pick(defaulted, site.winter?.rh, 80, "winter.rh") },
     summer: {
       t_c: summer_t_c,
       rh: pick(defaulted, site.summer?.rh, SUMMER_RH[regime ?? "none"], "summer.rh"),
@@ -204,7 +214,7 @@ export function resolveSite(site: SiteInput): ResolvedSite {
     ground_t_c: pick(defaulted, site.ground_t_c, GROUND_T_C[zn], "ground_t_c"),
     indoor: {
       t_c: pick(defaulted, site.indoor?.t_c, DEFAULT_INDOOR.t_c, "indoor.t_c"),
-      rh: pick(defaulted, site.indoor?.rh, DEFAULT_INDOOR.rh, "indoor.rh"),
+      rh: pick(defaulted, site.indoor?.rh, ashrae160IndoorRh(winter_t_c), "indoor.rh"),
       summer_t_c: pick(defaulted, site.indoor?.summer_t_c, DEFAULT_INDOOR.summer_t_c, "indoor.summer_t_c"),
       summer_rh: pick(defaulted, site.indoor?.summer_rh, DEFAULT_INDOOR.summer_rh, "indoor.summer_rh"),
     },

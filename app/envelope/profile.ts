@@ -21,6 +21,10 @@ export interface CaseConditions {
   fixedSurface: boolean;
   /** Layers before this index hold the vapour source (wet cladding): they add no resistance. */
   vapourStart: number;
+  /** Layers before this index lie outside a ventilated cavity: they add no thermal resistance in the
+   * profile, and the cavity's still-air film replaces the outdoor film (ASHRAE practice for
+   * well-ventilated spaces). 0 when there is no ventilated cavity. */
+  thermalStart?: number;
   /** True: the vapour source is saturated at the temperature of interface `vapourStart` (the inner
    * face of rain-wet cladding); exterior.p_v_pa is then replaced by that saturation pressure. */
   saturatedSource?: boolean;
@@ -100,8 +104,10 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const labels = interfaceLabels(a);
   const series = seriesRsi(a, c.name);
   const films = filmsFor(a.kind, c.name);
-  const extFilm = c.fixedSurface ? 0 : films.exterior ? series.exterior : 0;
-  const total = extFilm + series.interior + series.layers.reduce((s, r) => s + r, 0);
+  const thermalStart = c.thermalStart ?? 0;
+  const extFilm = c.fixedSurface ? 0 : thermalStart > 0 ? films.interior.rsi : films.exterior ? series.exterior : 0;
+  const layerR = series.layers.map((rsi, i) => (i < thermalStart ? 0 : rsi));
+  const total = extFilm + series.interior + layerR.reduce((s, rsi) => s + rsi, 0);
 
   // Temperatures and positions at the n + 1 interfaces.
   const t: number[] = [];
@@ -112,7 +118,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   for (let k = 0; k <= n; k++) {
     t.push(c.exterior.t_c + (dT * r) / total);
     pos.push(Math.round(x * 1e6) / 1e6); // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
-    if (k < n) { r += series.layers[k]; x += a.layers[k].thickness_mm; }
+    if (k < n) { r += layerR[k]; x += a.layers[k].thickness_mm; }
   }
   const pSat = t.map(saturationPressure);
   const pExt = c.saturatedSource ? pSat[c.vapourStart] : c.exterior.p_v_pa;
@@ -198,6 +204,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   return {
     name: c.name,
     description: c.description,
+    boundaryIndex: c.vapourStart,
     exterior: { t_c: c.exterior.t_c, rh: c.exterior.rh, p_v_pa: pExt, label: c.exterior.label },
     interior: { t_c: c.interior.t_c, rh: c.interior.rh, p_v_pa: c.interior.p_v_pa },
     interfaces,

@@ -7,6 +7,10 @@ import { formatTemperature, rsiToRip } from "./units";
 import { coreRange, dryCupPermeance, layerPermeance, retarderClass } from "./vapour";
 import { summariseInsulation } from "./code-tables";
 
+/** Design-day condensation below this rate is reported as a note: wood sheathing buffers a few
+ * grams per square metre a day (Dryside screening threshold, common practice). */
+export const SCREENING_RATE_G_M2_DAY = 1;
+
 export interface RuleContext {
   assembly: ResolvedAssembly;
   site: ResolvedSite;
@@ -40,17 +44,19 @@ function thermalBarrierInboard(a: ResolvedAssembly, from: number): boolean {
     ((l.material.family === "concrete" || l.material.family === "masonry") && l.thickness_mm >= 25.4));
 }
 
+/** IRC R316.5.3/R316.5.4 ignition-barrier alternatives (REFERENCES §8): 3/8 in gypsum, 1/4 in wood
+ * structural panel, fibre-cement or hardboard, 1½ in mineral fibre, a listed coating. */
+function isIgnitionBarrier(l: ResolvedLayer): boolean {
+  const m = l.material;
+  if (m.slug === "ignition-barrier-coating" || l.input.role === "thermal-barrier") return true;
+  if (m.family === "gypsum") return l.thickness_mm >= 9.5 - 0.2;
+  if (m.family === "wood-panel" || m.family === "cladding") return l.thickness_mm >= 6.35 - 0.2;
+  if (m.family === "fibrous-insulation") return l.thickness_mm >= 38 - 0.5;
+  return m.family === "concrete" || m.family === "masonry" || m.family === "metal";
+}
+
 function ignitionBarrierInboard(a: ResolvedAssembly, from: number): boolean {
-  // IRC R316.5.3/R316.5.4 alternatives (REFERENCES §8): 3/8 in gypsum, 1/4 in wood structural panel
-  // or fibre-cement or hardboard, 1½ in mineral fibre, a listed ignition-barrier coating.
-  return a.layers.slice(from + 1).some((l) => {
-    const m = l.material;
-    if (m.slug === "ignition-barrier-coating" || l.input.role === "thermal-barrier") return true;
-    if (m.family === "gypsum") return l.thickness_mm >= 9.5 - 0.2;
-    if (m.family === "wood-panel" || m.family === "cladding") return l.thickness_mm >= 6.35 - 0.2;
-    if (m.family === "fibrous-insulation") return l.thickness_mm >= 38 - 0.5;
-    return m.family === "concrete" || m.family === "masonry" || m.family === "metal";
-  });
+  return a.layers.slice(from + 1).some(isIgnitionBarrier);
 }
 
 export function evaluateRules(ctx: RuleContext): Flag[] {
@@ -142,6 +148,30 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
         explanation: `Foam up to 3¼ in thick may stay exposed at rim joists when its density is 0.5–2.0 lb/ft³ and its flame spread is 25 or less; check the product's listing.`,
         source: "IRC 2018 R316.5.11, C",
       });
+    } else if (a.kind === "floor") {
+      // Floor over a crawl space or garage: the walking side is covered by the subfloor (a 1/2 in
+      // wood structural panel stands in for the thermal barrier); the underside faces the crawl space.
+      const covered = a.layers.slice(lastFoam.index + 1).some((l) => (l.material.family === "wood-panel" && l.thickness_mm >= 11.9) || l.material.family === "gypsum");
+      const firstFoam = layers.find(isFoam) as ResolvedLayer;
+      const undersideBarrier = layers.slice(0, firstFoam.index).some(isIgnitionBarrier);
+      if (!covered) {
+        flags.push({
+          id: "foam-floor-not-covered",
+          severity: "stop",
+          title: "Foam in a floor without a covering panel",
+          explanation: `The ${lastFoam.material.name.toLowerCase()} needs at least a 1/2 in wood structural panel (or a thermal barrier) between it and the room above.`,
+          source: "IRC 2021 R316.5.13 (floors), M; R316.4, C2",
+        });
+      }
+      if (!undersideBarrier) {
+        flags.push({
+          id: "foam-crawlspace-no-ignition-barrier",
+          severity: "caution",
+          title: "Foam under the floor without an ignition barrier",
+          explanation: `The underside of the ${firstFoam.material.name.toLowerCase()} faces the crawl space. Cover it with an ignition barrier (e.g. 3/8 in gypsum, 1/4 in wood structural panel, 1½ in mineral fibre, or a listed coating) unless the foam is tested for exposure.`,
+          source: "IRC 2021 R316.5.4; alternatives per R316.5.3 (REFERENCES §8), C",
+        });
+      }
     } else if (a.kind !== "slab" && (exposed || !thermalBarrierInboard(a, lastFoam.index))) {
       flags.push({
         id: "foam-no-thermal-barrier",
@@ -206,17 +236,21 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
     });
   }
 
-  // 8. Winter: condensing surface below the indoor dew point.
+  // 8. Winter: condensing surface below the indoor dew point. A design day overstates the season,
+  // so small rates, and walls that meet IRC R702.7 (which rests on seasonal conditions), are notes.
   if (!below && (winter.margin_c < 0 || winter.condensingPlanes.length > 0)) {
     const condensing = winter.condensingPlanes.length > 0;
+    const codeOk = ctx.codeRows.some((r) => r.id === "irc-r702-7-3" && r.pass);
+    const serious = condensing && !codeOk && winter.rate_g_m2_day >= SCREENING_RATE_G_M2_DAY;
+    const surface = winter.firstCondensingSurface;
     flags.push({
       id: "winter-condensing-surface",
-      severity: condensing ? "caution" : "note",
+      severity: serious ? "caution" : "note",
       title: condensing ? "Winter condensation inside the assembly" : "Sheathing below the indoor dew point",
       explanation: condensing
-        ? `At the winter design condition the ${winter.firstCondensingSurface?.label} is at ${formatTemperature(winter.firstCondensingSurface?.t_c ?? 0, "ip")} / ${formatTemperature(winter.firstCondensingSurface?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(winter.sourceDewPoint_c, "si")}), and the diffusion calculation collects ${winter.rate_g_m2_day.toFixed(1)} g/(m²·day) there. Add exterior insulation to warm it, or a tighter interior retarder; a design day overstates the seasonal total.`
+        ? `At the winter design condition the ${surface?.label} is at ${formatTemperature(surface?.t_c ?? 0, "ip")} / ${formatTemperature(surface?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(winter.sourceDewPoint_c, "si")}), and the diffusion calculation collects ${winter.rate_g_m2_day.toFixed(1)} g/(m²·day) there on that day. ${codeOk ? "The wall meets IRC R702.7, whose limits rest on seasonal conditions; a design day overstates the seasonal total." : "Warm that surface with exterior insulation, or add a tighter interior retarder; a design day overstates the seasonal total, so a hygrothermal analysis can settle it."}`
         : `The ${winter.marginSurface} is ${(-winter.margin_c).toFixed(1)} K below the indoor dew point at the winter design condition; the interior retarder keeps diffusion below saturation, so this depends on that retarder and on air-tightness.`,
-      source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; REFERENCES §7.1 (JLC) and §8 (BSC first condensing surface), C/C2",
+      source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; REFERENCES §7.1 (JLC) and §8 (first condensing surface), C/C2",
     });
   }
 

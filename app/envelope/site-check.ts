@@ -11,6 +11,14 @@ import { analyseThermal, isBelowGrade } from "./thermal";
 import type { AssemblyInput, ResolvedSite, SiteCheckResult, SiteInput } from "./types";
 import { analyseVapour } from "./vapour";
 
+/** Innermost ventilated cavity (a vented air space used as a drainage gap), or −1. */
+function ventedCavityIndex(a: ResolvedAssembly): number {
+  let idx = -1;
+  for (const l of a.layers) if (l.material.family === "air-space" && l.input.role === "drainage-gap") idx = l.index;
+  // A cavity with nothing inboard of it leaves no stack to analyse: ignore it.
+  return idx < a.layers.length - 1 ? idx : -1;
+}
+
 export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
   const indoor = { t_c: site.indoor.t_c, rh: site.indoor.rh, p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100 };
   if (isBelowGrade(a.kind)) {
@@ -24,7 +32,7 @@ export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   return {
     name: "winter", description: `Winter design: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
     exterior: { t_c: site.winter.t_c, rh: site.winter.rh, p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100, label: "outdoor air" },
-    interior: indoor, fixedSurface: false, vapourStart: 0, source: "interior",
+    interior: indoor, fixedSurface: false, vapourStart: ventedCavityIndex(a) + 1, thermalStart: ventedCavityIndex(a) + 1, source: "interior",
   };
 }
 
@@ -42,7 +50,8 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
     };
   }
   const cladIdx = a.layers.findIndex(isReservoirCladding);
-  const ventedBehind = cladIdx >= 0 && a.layers.slice(cladIdx + 1).some((l, i) => i === 0 && (l.input.role === "drainage-gap" || l.material.family === "air-space"));
+  const vent = ventedCavityIndex(a);
+  const ventedBehind = cladIdx >= 0 && vent > cladIdx;
   // Needs something inboard of the cladding for the drive to reach.
   if (cladIdx >= 0 && cladIdx < a.layers.length - 1 && !ventedBehind && a.kind !== "floor") {
     const t = site.summer.cladding_t_c;
@@ -55,7 +64,7 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   return {
     name: "summer", description: `Summer inward drive: outdoor ${site.summer.t_c} °C / ${site.summer.rh} %, ${indoorText}`,
     exterior: { t_c: site.summer.t_c, rh: site.summer.rh, p_v_pa: (saturationPressure(site.summer.t_c) * site.summer.rh) / 100, label: "outdoor air" },
-    interior: indoor, fixedSurface: false, vapourStart: 0, source: "exterior",
+    interior: indoor, fixedSurface: false, vapourStart: vent + 1, thermalStart: vent + 1, source: "exterior",
   };
 }
 

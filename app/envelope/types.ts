@@ -168,6 +168,9 @@ export interface VapourLayer {
 export interface ProfileCase {
   name: "winter" | "summer";
   description: string;
+  /** Interface where the outdoor (soil, wet-cladding) vapour condition applies; layers outboard of
+   * it sit in a ventilated cavity or hold the vapour source, and resist nothing in this case. */
+  boundaryIndex: number;
   exterior: { t_c: number; rh: number; p_v_pa: number; label: string };
   interior: { t_c: number; rh: number; p_v_pa: number };
   interfaces: ProfileInterface[];

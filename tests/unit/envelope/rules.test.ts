@@ -145,3 +145,24 @@ test("profileChartSeries gives one point per interface with the local dew point"
   for (const p of series) expect(p.dew_point_c).toBeLessThanOrEqual(p.t_c + 1e-9);
   expect(series.map((p) => p.position_mm)).toEqual([0, 11.1, 150.8, 163.5]);
 });
+
+test("floor over a crawl space: foam under a 3/4 in subfloor needs only an underside ignition barrier — IRC R316.5.13 (M — from memory), R316.5.4 (C)", () => {
+  const floor: AssemblyInput = { kind: "floor", layers: [
+    layer("insulation", "closed-cell-spray-foam", 89, { framing: { material: "softwood-lumber", fraction: 0.13 } }), layer("subfloor", "wood-subfloor", 19),
+  ] };
+  expect(ids(floor, { zone: "3A" })).toContain("foam-crawlspace-no-ignition-barrier:caution");
+  expect(ids(floor, { zone: "3A" }).some((f) => f.startsWith("foam-no-thermal-barrier") || f.startsWith("foam-floor-not-covered"))).toBe(false);
+  const coated = { ...floor, layers: [layer("thermal-barrier", "ignition-barrier-coating", 0.5), ...floor.layers] };
+  expect(ids(coated, { zone: "3A" }).some((f) => f.startsWith("foam-"))).toBe(false);
+});
+
+test("a vented cavity takes the cladding out of the winter profile: its interfaces sit at the cavity condition", () => {
+  const a: AssemblyInput = { kind: "above-grade-wall", layers: [
+    layer("cladding", "wood-bevel-siding", 12.7), layer("drainage-gap", "vented-air-space", 19), layer("water-resistive-barrier", "polymeric-housewrap", 0.2),
+    layer("sheathing", "osb", 11.1), batt140, gyp, paint,
+  ] };
+  const w = runSiteCheck(a, { zone: "6A" }, lib).profiles.winter;
+  expect(w.boundaryIndex).toBe(2);
+  expect(w.interfaces[0].t_c).toBeCloseTo(w.interfaces[2].t_c, 9);
+  expect(w.condensingPlanes.every((p) => p.interfaceIndex >= 2)).toBe(true);
+});
