@@ -50,6 +50,15 @@ const IECC_2018: Record<string, ZoneRow> = {
   "7-8": { ceiling: 49, wall: ["20+5", "13+10"], mass: [19, 21], floor: 38, basement: B5_2021, slab: { r: 10, depth: "4 ft" }, crawl: B5_2021 },
 };
 
+/** IRC Table R806.5: rigid board above the deck of an unvented roof with air-permeable insulation
+ * below it (REFERENCES §8: zone 1A R-5 C; the other zones M). Keys as r702Key plus 1–4. */
+const R806_5: Record<string, number> = { "1": 5, "2": 5, "3": 5, "4C": 10, "4": 15, "5": 20, "6": 25, "7": 30, "8": 35 };
+
+function r8065Key(site: ResolvedSite): string {
+  if (site.zoneNumber === 4 && site.moisture === "C") return "4C";
+  return String(Math.max(1, site.zoneNumber));
+}
+
 /** Row key: marine 4 reads with zone 5 (IECC footnote). */
 export function iecczoneKey(site: Pick<ResolvedSite, "zoneNumber" | "moisture">): string {
   const n = site.zoneNumber;
@@ -182,9 +191,24 @@ export function codeRows(a: ResolvedAssembly, site: ResolvedSite, interiorClass:
       }
       break;
     }
-    case "roof":
+    case "roof": {
       rows.push(simpleRow("iecc-ceiling", `${iecc}, ceiling, ${zoneLabel}`, row.ceiling, s.cavity + s.ci, edition));
+      // Unvented roof with air-permeable fill below rigid board: the board must keep the deck warm.
+      const framedFill = a.layers.find((l) => l.framing && (l.material.family === "fibrous-insulation" || l.material.family === "loose-fill"));
+      const vented = a.layers.some((l) => l.input.role === "drainage-gap" && l.material.family === "air-space");
+      const board = framedFill ? a.layers.filter((l) => l.index < framedFill.index && !l.framing && isInsulation(l)) : [];
+      if (framedFill && !vented && board.length > 0) {
+        const above = board.reduce((t, l) => t + rsiToRip(materialRsi(l.material, l.thickness_mm)), 0);
+        const key = r8065Key(site);
+        const irc = edition === "IECC/IRC 2021" ? "IRC 2021" : "IRC 2018";
+        rows.push({
+          id: "irc-r806-5", label: `${irc} Table R806.5, rigid board above an unvented roof deck, zone ${site.zone}`,
+          required: r(R806_5[key]), provided: r(above), pass: above >= R806_5[key] - 0.05,
+          note: `Board above the deck keeps the underside of the board above the dew point with air-permeable insulation below (${key === "1" ? "C" : "M, verify against the printed table"}).`,
+        });
+      }
       break;
+    }
     case "floor":
       rows.push(simpleRow("iecc-floor", `${iecc}, floor, ${zoneLabel}`, row.floor, s.cavity + s.ci, edition));
       break;

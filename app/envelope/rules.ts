@@ -240,7 +240,11 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
   // so small rates, and walls that meet IRC R702.7 (which rests on seasonal conditions), are notes.
   if (!below && (winter.margin_c < 0 || winter.condensingPlanes.length > 0)) {
     const condensing = winter.condensingPlanes.length > 0;
-    const codeOk = ctx.codeRows.some((r) => r.id === "irc-r702-7-3" && r.pass);
+    // The code's vapour rows rest on seasonal conditions: a wall or roof that meets them is a note here.
+    const failingVapourRow = ctx.codeRows.some((r) => r.id.startsWith("irc-r") && !r.pass);
+    const passingCiRow = ctx.codeRows.some((r) => (r.id === "irc-r702-7-3" || r.id === "irc-r806-5") && r.pass);
+    const classIIIPermittedWithoutCi = a.kind === "above-grade-wall" && (site.zoneNumber <= 3 || (site.zoneNumber === 4 && site.moisture !== "C"));
+    const codeOk = !failingVapourRow && (passingCiRow || classIIIPermittedWithoutCi);
     const serious = condensing && !codeOk && winter.rate_g_m2_day >= SCREENING_RATE_G_M2_DAY;
     const surface = winter.firstCondensingSurface;
     flags.push({
@@ -248,7 +252,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
       severity: serious ? "caution" : "note",
       title: condensing ? "Winter condensation inside the assembly" : "Sheathing below the indoor dew point",
       explanation: condensing
-        ? `At the winter design condition the ${surface?.label} is at ${formatTemperature(surface?.t_c ?? 0, "ip")} / ${formatTemperature(surface?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(winter.sourceDewPoint_c, "si")}), and the diffusion calculation collects ${winter.rate_g_m2_day.toFixed(1)} g/(m²·day) there on that day. ${codeOk ? "The wall meets IRC R702.7, whose limits rest on seasonal conditions; a design day overstates the seasonal total." : "Warm that surface with exterior insulation, or add a tighter interior retarder; a design day overstates the seasonal total, so a hygrothermal analysis can settle it."}`
+        ? `At the winter design condition the ${surface?.label} is at ${formatTemperature(surface?.t_c ?? 0, "ip")} / ${formatTemperature(surface?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(winter.sourceDewPoint_c, "si")}), and the diffusion calculation collects ${winter.rate_g_m2_day.toFixed(1)} g/(m²·day) there on that day. ${codeOk ? "The assembly meets the code's vapour-retarder and continuous-insulation rows, whose limits rest on seasonal conditions; a design day overstates the seasonal total." : "Warm that surface with exterior insulation, or add a tighter interior retarder; a design day overstates the seasonal total, so a hygrothermal analysis can settle it."}`
         : `The ${winter.marginSurface} is ${(-winter.margin_c).toFixed(1)} K below the indoor dew point at the winter design condition; the interior retarder keeps diffusion below saturation, so this depends on that retarder and on air-tightness.`,
       source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; REFERENCES §7.1 (JLC) and §8 (first condensing surface), C/C2",
     });

@@ -92,9 +92,13 @@ function isWaterSensitiveCore(layer: ResolvedLayer): boolean {
 /** Index range of the part of the stack that must dry: the water-sensitive layers (sheathing,
  * framing, fibrous fill), or else the structure and insulation. */
 export function coreRange(a: ResolvedAssembly): { first: number; last: number } | null {
-  let idx = a.layers.filter(isWaterSensitiveCore).map((l) => l.index);
+  // Layers outboard of a ventilated cavity (a vented attic, a rainscreen) are outdoors for drying.
+  let vent = -1;
+  for (const l of a.layers) if (l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)) vent = l.index;
+  const inboard = vent < a.layers.length - 1 ? a.layers.slice(vent + 1) : a.layers;
+  let idx = inboard.filter(isWaterSensitiveCore).map((l) => l.index);
   if (idx.length === 0) {
-    idx = a.layers.filter((l) => l.input.role === "structure" || isInsulation(l)).map((l) => l.index);
+    idx = inboard.filter((l) => l.input.role === "structure" || isInsulation(l)).map((l) => l.index);
   }
   if (idx.length === 0) return null;
   return { first: Math.min(...idx), last: Math.max(...idx) };

@@ -124,3 +124,20 @@ test("Class I interior is not permitted in zone 3 — IRC 2021 Table R702.7(2) (
   const r = runSiteCheck(withPoly, { zone: "3A" }, lib);
   expect(r.code.rows.find((x) => x.id === "irc-r702-7-class")?.pass).toBe(false);
 });
+
+test("unvented roof, board above the deck over batts: R-20 needed in zone 5, R-5 in zone 1A — IRC 2021 Table R806.5 (zone 1A C via DOE/PNNL BASC; zone 5 M — from memory)", () => {
+  const roof = (boardMm: number): AssemblyInput => ({ kind: "roof", layers: [
+    { role: "roofing", material: "asphalt-shingles", thickness_mm: 6 },
+    { role: "underlayment", material: "synthetic-roof-underlayment", thickness_mm: 0.5 },
+    { role: "sheathing", material: "osb", thickness_mm: 11.1 },
+    { role: "insulation", material: "polyiso-foil-faced", thickness_mm: boardMm },
+    { role: "structure", material: "plywood", thickness_mm: 15.9 },
+    { role: "insulation", material: "fibreglass-batt", thickness_mm: 235, framing: { material: "softwood-lumber", fraction: 0.1 } },
+    { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
+  ] });
+  const row = (mm: number, zone: string) => runSiteCheck(roof(mm), { zone }, lib).code.rows.find((x) => x.id === "irc-r806-5");
+  expect(row(76.2, "5A")?.required).toBe("R-20");
+  expect(row(76.2, "5A")?.pass).toBe(false); // 3 in polyiso ≈ R-18
+  expect(row(88.9, "5A")?.pass).toBe(true); // 3.5 in ≈ R-21
+  expect(row(25.4, "1A")?.pass).toBe(true);
+});

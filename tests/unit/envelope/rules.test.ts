@@ -166,3 +166,15 @@ test("a vented cavity takes the cladding out of the winter profile: its interfac
   expect(w.interfaces[0].t_c).toBeCloseTo(w.interfaces[2].t_c, 9);
   expect(w.condensingPlanes.every((p) => p.interfaceIndex >= 2)).toBe(true);
 });
+
+test("a vented attic is outdoors for drying: the ceiling below it is not 'closed on both sides'", () => {
+  const attic: AssemblyInput = { kind: "roof", layers: [
+    layer("roofing", "asphalt-shingles", 6), layer("underlayment", "synthetic-roof-underlayment", 0.5), layer("sheathing", "osb", 11.1),
+    layer("drainage-gap", "vented-air-space", 600), layer("insulation", "loose-fill-cellulose", 380),
+    layer("insulation", "loose-fill-cellulose", 89, { framing: { material: "softwood-lumber", fraction: 0.1 } }), gyp,
+    layer("vapour-retarder", "vapour-retarder-primer", 0.1),
+  ] };
+  const r = runSiteCheck(attic, { zone: "6A" }, lib);
+  expect(r.vapour.bothSidesClosed).toBe(false);
+  expect(r.vapour.dryingDirections).toContain("outward");
+});
