@@ -84,8 +84,10 @@ const CLOSED_SIDE_PERM = 1.0;
 
 const VENTED_GAP_FAMILIES = new Set(["air-space", "drainage"]);
 
+const CORE_ROLES = new Set(["sheathing", "structure", "insulation", "subfloor"]);
+
 function isWaterSensitiveCore(layer: ResolvedLayer): boolean {
-  if (["cladding", "interior-finish", "drainage-gap", "thermal-barrier", "roofing"].includes(layer.input.role)) return false;
+  if (!CORE_ROLES.has(layer.input.role) && !layer.framing) return false;
   return layer.material.water_sensitive || (layer.framing?.material.water_sensitive ?? false);
 }
 
@@ -106,9 +108,13 @@ export function coreRange(a: ResolvedAssembly): { first: number; last: number } 
 
 /** Layers inboard of the innermost insulation layer (else of the core): the interior retarder. */
 function interiorSide(a: ResolvedAssembly): ResolvedLayer[] {
+  // Slabs and crawl-space ground covers: the vapour control is the ground retarder in the stack.
+  if (a.kind === "slab" || a.kind === "crawlspace-floor") return a.layers.slice();
+  // Inboard of both the innermost insulation and the structure it insulates (exterior-insulated
+  // basement walls keep their dampproofing and concrete out of the "interior" retarder).
   let innermost = -1;
   for (const l of a.layers) if (isInsulation(l)) innermost = l.index;
-  if (innermost < 0) innermost = coreRange(a)?.last ?? -1;
+  innermost = Math.max(innermost, coreRange(a)?.last ?? -1);
   return innermost < 0 ? [] : a.layers.slice(innermost + 1);
 }
 

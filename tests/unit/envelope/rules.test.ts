@@ -178,3 +178,14 @@ test("a vented attic is outdoors for drying: the ceiling below it is not 'closed
   expect(r.vapour.bothSidesClosed).toBe(false);
   expect(r.vapour.dryingDirections).toContain("outward");
 });
+
+test("exterior-insulated basement wall: dampproofing and concrete are not the interior retarder; a slab's retarder is its ground sheet", () => {
+  const wall: AssemblyInput = { kind: "basement-wall", layers: [
+    layer("insulation", "drainage-board-mineral-wool", 100), layer("soil-side-protection", "bituminous-dampproofing", 1.5),
+    layer("structure", "cast-concrete", 200), layer("interior-finish", "latex-paint", 0.1),
+  ] };
+  expect(interiorRetarderClass(wall, lib)).toBe("III");
+  expect(ids(wall).some((f) => f.startsWith("basement-class-i-interior"))).toBe(false);
+  const slab: AssemblyInput = { kind: "slab", layers: [layer("capillary-break", "crushed-stone", 100), layer("insulation", "xps-board", 50.8), layer("vapour-retarder", "polyethylene-sheet-10mil", 0.25), layer("structure", "cast-concrete", 100)] };
+  expect(interiorRetarderClass(slab, lib)).toBe("I");
+});
