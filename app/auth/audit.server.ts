@@ -10,12 +10,14 @@ export type AuditAction =
   | "user.role_changed"
   | "user.sessions_revoked"
   | "detail.published"
-  | "detail.withdrawn";
+  | "detail.withdrawn"
+  | "detail.superseded"
+  | "material.updated";
 
 export interface AuditEntry {
   actorId: number | null;
   action: AuditAction;
-  subjectType: "user" | "detail" | "set";
+  subjectType: "user" | "detail" | "set" | "material";
   subjectId: string | number;
   details?: AuditDetails;
 }

@@ -3,10 +3,9 @@ import type { Transaction } from "sequelize";
 import { loadContent } from "~/content/load-content";
 import type { ContentProblem } from "~/content/content-error";
 import type { ParsedDetail } from "~/content/parse-detail";
-import { moistureRegime, zoneNumber } from "~/content/zones";
-import { assemblyRValue, interiorRetarderClass, type Material } from "~/envelope";
-import { Detail, DetailRevision, DetailSet, DetailSetMember, DetailZone, MaterialRecord, User, models } from "~/models";
-import { buildSearchText } from "./search-text";
+import type { Material } from "~/envelope";
+import { Detail, DetailRevision, DetailSet, MaterialRecord, User, models } from "~/models";
+import { buildProjection, publishRevision } from "./publish.server";
 
 export class ImportRejected extends Error {
   constructor(readonly problems: readonly ContentProblem[]) {
@@ -38,12 +37,11 @@ export async function importContent(root: string, options: ImportOptions = {}): 
   if (content.errors.length > 0) throw new ImportRejected(content.errors);
 
   const library = new Map<string, Material>(content.materials!.map((entry) => [entry.slug, entry.material]));
-  const derived = new Map<string, { interiorClass: string; rsi: number }>();
   const problems: ContentProblem[] = [];
   for (const detail of content.details) {
+    // Building the projection runs the engine over the layers: a bad stack is refused before any write.
     try {
-      const assembly = { kind: detail.assembly, layers: detail.layers };
-      derived.set(detail.slug, { interiorClass: interiorRetarderClass(assembly, library), rsi: assemblyRValue(assembly, library).rsi });
+      buildProjection(detail, detail.body, library);
     } catch (error) {
       problems.push({ file: detail.file, line: 2, field: "layers", message: error instanceof Error ? error.message : String(error) });
     }
@@ -76,20 +74,18 @@ export async function importContent(root: string, options: ImportOptions = {}): 
       tick(`material ${slug}`);
     }
 
-    const setIds = new Map<string, number>();
     for (const set of content.sets) {
       const values = { title: set.title, summary: set.summary, priceCents: set.price_cents, currency: set.currency };
       const [record, created] = await DetailSet.findOrCreate({ where: { slug: set.slug }, defaults: { slug: set.slug, ...values }, transaction });
       const changed = !created && (record.title !== values.title || record.summary !== values.summary || record.priceCents !== values.priceCents || record.currency !== values.currency);
       if (changed) await record.update(values, { transaction });
       summary.sets[created ? "created" : changed ? "updated" : "unchanged"]++;
-      setIds.set(set.slug, record.id);
       tick(`set ${set.slug}`);
     }
 
     const staff = await staffByName(transaction);
     for (const detail of content.details) {
-      const outcome = await importDetail(detail, derived.get(detail.slug)!, library, staff, setIds, transaction);
+      const outcome = await importDetail(detail, library, staff, transaction);
       if (outcome.kind === "kept") summary.details.kept.push({ slug: detail.slug, reason: outcome.reason });
       else summary.details[outcome.kind]++;
       tick(`detail ${detail.slug}`);
@@ -103,32 +99,17 @@ type DetailOutcome = { kind: "created" | "revised" | "unchanged" } | { kind: "ke
 
 async function importDetail(
   detail: ParsedDetail,
-  derived: { interiorClass: string; rsi: number },
   library: ReadonlyMap<string, Material>,
   staff: ReadonlyMap<string, number>,
-  setIds: ReadonlyMap<string, number>,
   transaction: Transaction,
 ): Promise<DetailOutcome> {
   const { body, bodyStartLine: _line, file: _file, ...frontMatter } = detail;
   const contentHash = createHash("sha256").update(JSON.stringify({ frontMatter, body })).digest("hex");
   const publishedAt = new Date(`${detail.revised ?? "2026-01-15"}T12:00:00Z`);
-  const projection = {
-    title: detail.title,
-    summary: detail.summary,
-    searchText: buildSearchText(detail, (slug) => library.get(slug)?.name ?? slug),
-    assembly: detail.assembly,
-    substrate: detail.substrate,
-    belowGrade: detail.below_grade,
-    strategy: detail.strategy,
-    interiorClass: derived.interiorClass,
-    tier: detail.tier,
-    rValueRsi: Math.round(derived.rsi * 1000) / 1000,
-    layerStrip: detail.layers.map((layer) => ({ role: layer.role, family: library.get(layer.material)?.family ?? "unknown", thickness_mm: layer.thickness_mm })),
-    zonesLabel: detail.zones.join(" "),
-  };
+  // Written as reviewed by the file's reviewer; publishRevision (shared with the desk) makes it live.
   const revisionValues = {
     number: detail.revision,
-    state: "published" as const,
+    state: "in_review" as const,
     title: detail.title,
     summary: detail.summary,
     bodyMd: body,
@@ -140,46 +121,24 @@ async function importDetail(
     reviewerName: detail.reviewer,
     reviewedAt: publishedAt,
     submittedAt: publishedAt,
-    publishedAt,
     contentHash,
   };
 
   let record = await Detail.findOne({ where: { slug: detail.slug }, transaction });
   let outcome: DetailOutcome;
   if (!record) {
-    record = await Detail.create({ slug: detail.slug, ...projection, publishedRevisionId: null, publishedAt }, { transaction });
-    const revision = await DetailRevision.create({ detailId: record.id, ...revisionValues }, { transaction });
-    await record.update({ publishedRevisionId: revision.id }, { transaction });
+    record = await Detail.create({ slug: detail.slug, ...buildProjection(frontMatter, body, library), publishedRevisionId: null, publishedAt: null }, { transaction });
     outcome = { kind: "created" };
   } else {
     const latest = await DetailRevision.findOne({ where: { detailId: record.id }, order: [["number", "DESC"]], transaction });
     const current = record.publishedRevisionId ? await DetailRevision.findByPk(record.publishedRevisionId, { transaction }) : null;
-    if (current && current.contentHash === contentHash) {
-      outcome = { kind: "unchanged" };
-    } else if (latest && latest.number >= detail.revision) {
-      // The web desk has a newer (or equal) revision: the file must be re-exported or its revision raised.
-      return { kind: "kept", reason: `database has revision ${latest.number}; raise \`revision\` above it to import this file` };
-    } else {
-      if (current) await current.update({ state: "superseded" }, { transaction });
-      const revision = await DetailRevision.create({ detailId: record.id, ...revisionValues }, { transaction });
-      await record.update({ ...projection, publishedRevisionId: revision.id, publishedAt, withdrawnAt: null }, { transaction });
-      outcome = { kind: "revised" };
-    }
+    if (current && current.contentHash === contentHash) return { kind: "unchanged" };
+    // The web desk has a newer (or equal) revision: the file must be re-exported or its revision raised.
+    if (latest && latest.number >= detail.revision) return { kind: "kept", reason: `database has revision ${latest.number}; raise \`revision\` above it to import this file` };
+    outcome = { kind: "revised" };
   }
-
-  if (outcome.kind !== "unchanged") {
-    await record.update(projection, { transaction });
-  }
-  await DetailZone.destroy({ where: { detailId: record.id }, transaction });
-  await DetailZone.bulkCreate(
-    detail.zones.map((zone) => ({ detailId: record.id, zone, zoneNumber: zoneNumber(zone), regime: moistureRegime(zone) })),
-    { transaction },
-  );
-  await DetailSetMember.destroy({ where: { detailId: record.id }, transaction });
-  await DetailSetMember.bulkCreate(
-    detail.sets.map((slug) => ({ detailId: record.id, setId: setIds.get(slug)! })),
-    { transaction },
-  );
+  const revision = await DetailRevision.create({ detailId: record.id, ...revisionValues }, { transaction });
+  await publishRevision(revision.id, null, { transaction, at: publishedAt, library });
   return outcome;
 }
 

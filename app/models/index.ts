@@ -13,10 +13,14 @@ import { Entitlement } from "./entitlement";
 import { PaymentEvent } from "./payment-event";
 import { Payment } from "./payment";
 import { Download } from "./download";
+import { ReviewComment } from "./review-comment";
+import { SavedDetail } from "./saved-detail";
+import { Upload } from "./upload";
 
 export { Detail, DetailZone, DetailRevision, DetailSet, DetailSetMember, MaterialRecord, User };
 export { Session, AuthToken, SignInAttempt, AuditEvent };
 export { Entitlement, PaymentEvent, Payment, Download };
+export { ReviewComment, SavedDetail, Upload };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -35,6 +39,8 @@ export function initModels(sequelize: Sequelize): Sequelize {
   Session.belongsTo(User, { foreignKey: "userId", as: "user" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
   for (const model of [Entitlement, PaymentEvent, Payment, Download]) model.initModel(sequelize);
+  // The desk: review comments, members' saved details, revision uploads.
+  for (const model of [ReviewComment, SavedDetail, Upload]) model.initModel(sequelize);
   initialised.add(sequelize);
   return sequelize;
 }

@@ -1,0 +1,31 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+/** The parts of a revision a reviewer comments on, in page order. */
+export const REVIEW_SECTIONS = ["metadata", "layers", "why-it-works", "install-sequence", "cautions", "references"] as const;
+export type ReviewSection = (typeof REVIEW_SECTIONS)[number];
+
+/** A reviewer's note on one section of a submitted revision (table from the catalogue migration). */
+export class ReviewComment extends Model<InferAttributes<ReviewComment>, InferCreationAttributes<ReviewComment>> {
+  declare id: CreationOptional<number>;
+  declare revisionId: number;
+  declare authorId: number | null;
+  declare section: ReviewSection;
+  declare body: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    ReviewComment.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        revisionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        authorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        section: { type: DataTypes.STRING(60), allowNull: false },
+        body: { type: DataTypes.TEXT, allowNull: false },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: "review_comments" },
+    );
+  }
+}
