@@ -2,6 +2,11 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { createServer } from "node:net";
 import type { TestProject } from "vitest/node";
 import { createEmptyDatabase, dropDatabase } from "../helpers/database";
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { startMailCatcher, type MailCatcher } from "../../dev/mail-catcher/server";
+import { startPaymentsStandin, type PaymentsStandin } from "../../dev/payments-standin/server";
 
 async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -37,12 +42,22 @@ function run(command: string, args: string[], env: NodeJS.ProcessEnv): Promise<v
 
 const children: ChildProcess[] = [];
 let database = "";
+let mailCatcher: MailCatcher | undefined;
+let payments: PaymentsStandin | undefined;
 
 export async function setup(project: TestProject) {
   database = await createEmptyDatabase("e2e");
   const appPort = await freePort();
   const appUrl = `http://127.0.0.1:${appPort}`;
-  const env: NodeJS.ProcessEnv = { ...process.env, DB_NAME: database, NODE_ENV: "production", APP_URL: appUrl };
+  // The app mails through the local catcher; tests read what it caught from outboxDir.
+  mailCatcher = await startMailCatcher({ port: 0, outboxDir: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "e2e-outbox-")) });
+  const mail = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(mailCatcher.port), MAIL_OUTBOX_DIR: mailCatcher.outboxDir };
+  // The payments stand-in on a free port, sending its signed webhooks to the app under test.
+  const webhookSecret = "whsec_e2e_standin";
+  payments = await startPaymentsStandin({ port: 0, host: "127.0.0.1", webhookUrl: `${appUrl}/api/payments/webhook`, webhookSecret });
+  const stripe = { STRIPE_SECRET_KEY: "sk_test_e2e", STRIPE_API_HOST: "127.0.0.1", STRIPE_API_PORT: String(payments.port), STRIPE_API_PROTOCOL: "http", STRIPE_WEBHOOK_SECRET: webhookSecret };
+  const storage = { STORAGE_DIR: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "e2e-storage-")) };
+  const env: NodeJS.ProcessEnv = { ...process.env, ...mail, ...stripe, ...storage, DB_NAME: database, NODE_ENV: "production", APP_URL: appUrl };
 
   await run("npx", ["tsx", "db/migrate.ts", "up"], env);
   await run("npx", ["tsx", "scripts/content-import.ts"], env).catch((error) => {
@@ -56,15 +71,19 @@ export async function setup(project: TestProject) {
   children.push(server);
   await waitFor(`${appUrl}/healthz`, server);
   project.provide("baseUrl", appUrl);
+  project.provide("outboxDir", mailCatcher.outboxDir);
 }
 
 export async function teardown() {
   for (const child of children) child.kill("SIGTERM");
+  await mailCatcher?.close();
+  await payments?.close();
   await dropDatabase(database);
 }
 
 declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
+    outboxDir: string;
   }
 }
