@@ -23,4 +23,3 @@ npx tsx scripts/content-import.ts
 log "building"
 npx react-router build >/dev/null
 npx tsx scripts/bench/catalogue.ts
-if [ -f scripts/bench/bundle-size.ts ]; then npx tsx scripts/bench/bundle-size.ts; fi

@@ -23,7 +23,7 @@ export interface SearchableDetail {
 
 /** Everything a builder might type to find a detail besides its title and summary. */
 export function buildSearchText(detail: SearchableDetail, materialName: (slug: string) => string): string {
-  const facets = [detail.assembly, detail.substrate, detail.below_grade, detail.strategy].map(labelFor);
+  const facets = [detail.assembly, detail.substrate, detail.below_grade, detail.strategy].map((value) => labelFor(value));
   const layers = detail.layers.map((layer) => `${materialName(layer.material)} ${layer.role.replaceAll("-", " ")}`);
   return [...facets, ...layers, ...detail.references, plainText(detail.body)].join(" · ");
 }

@@ -23,7 +23,10 @@ export async function checkAssemblyForSite(front: Pick<DetailFrontMatter, "assem
     const result = runSiteCheck({ kind: front.assembly, layers: front.layers }, siteInputFromForm(parsed.data), library);
     return { ok: true, result, units: parsed.data.units };
   } catch (error) {
-    if (error instanceof SiteCheckInputError) return { ok: false, fieldErrors: { [error.field]: [error.message] } };
+    if (error instanceof SiteCheckInputError) {
+      const message = error.message.replace(`${error.field}: `, "");
+      return { ok: false, fieldErrors: { [error.field]: [message.charAt(0).toUpperCase() + message.slice(1)] } };
+    }
     throw error;
   }
 }

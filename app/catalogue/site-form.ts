@@ -17,7 +17,8 @@ export const siteFormSchema = z
     zone: z.union([z.enum(CLIMATE_ZONE_IDS), z.literal("")]).optional(),
     hdd: optionalNumber("Heating degree-days").pipe(z.number().min(0, "Heating degree-days cannot be negative").max(20000, "Heating degree-days above 20,000 are outside every climate zone").optional()),
     cdd: optionalNumber("Cooling degree-days").pipe(z.number().min(0, "Cooling degree-days cannot be negative").max(20000, "Cooling degree-days look too high").optional()),
-    indoorRh: optionalNumber("Indoor relative humidity").pipe(z.number().min(5, "Indoor RH below 5 % is not a realistic design value").max(95, "Indoor RH above 95 % is not a design condition").optional()),
+    moisture: z.union([z.enum(["A", "B", "C"]), z.literal("")]).optional(),
+    indoorRh: optionalNumber("Indoor relative humidity").pipe(z.number().min(5, "Indoor relative humidity below 5 % is not a realistic design value").max(95, "Indoor relative humidity above 95 % is not a design condition").optional()),
     indoorT: optionalNumber("Indoor temperature").optional(),
     winterT: optionalNumber("Winter design temperature").optional(),
   })
@@ -37,6 +38,7 @@ export function siteInputFromForm(form: SiteForm): SiteInput {
   if (form.zone) site.zone = form.zone;
   else if (ip) Object.assign(site, { hdd65: form.hdd, cdd50: form.cdd });
   else Object.assign(site, { hdd18: form.hdd, cdd10: form.cdd });
+  if (!form.zone && form.moisture) site.moisture = form.moisture;
   if (form.indoorRh !== undefined || form.indoorT !== undefined) site.indoor = { rh: form.indoorRh, t_c: temperature(form.indoorT) };
   if (form.winterT !== undefined) site.winter = { t_c: temperature(form.winterT) };
   return site;

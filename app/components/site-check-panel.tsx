@@ -11,6 +11,7 @@ export interface SiteValues {
   zone: string;
   hdd: string;
   cdd: string;
+  moisture: string;
   indoorRh: string;
 }
 
@@ -47,7 +48,7 @@ export function SiteCheckPanel({
       <Form
         method="get"
         preventScrollReset
-        className="mt-3 grid gap-3 sm:grid-cols-[repeat(4,minmax(0,1fr))_auto] sm:items-end"
+        className="mt-3 grid gap-3 sm:grid-cols-[repeat(5,minmax(0,1fr))_auto] sm:items-end"
         onSubmit={(event) => {
           event.preventDefault();
           const data = new FormData(event.currentTarget);
@@ -74,6 +75,15 @@ export function SiteCheckPanel({
         <label className="text-sm">
           <span className="block text-xs text-graphite-soft">Cooling degree-days</span>
           <input name="cdd" inputMode="decimal" defaultValue={values.cdd} placeholder={units === "ip" ? "e.g. 2200" : "e.g. 1200"} title={degreeDayUnit} className="mt-1 w-full rounded border border-rule bg-sheet px-2 py-1.5" aria-invalid={Boolean(fieldErrors.cdd)} />
+        </label>
+        <label className="text-sm">
+          <span className="block text-xs text-graphite-soft">Moisture regime</span>
+          <select name="moisture" defaultValue={values.moisture} title="Needed with degree-days below zone 7" className="mt-1 w-full rounded border border-rule bg-sheet px-2 py-1.5" aria-invalid={Boolean(fieldErrors.moisture)}>
+            <option value="">—</option>
+            <option value="A">A, moist</option>
+            <option value="B">B, dry</option>
+            <option value="C">C, marine</option>
+          </select>
         </label>
         <label className="text-sm">
           <span className="block text-xs text-graphite-soft">Indoor RH in winter, %</span>

@@ -24,6 +24,8 @@ export const payments: Migration = {
     await qi.addIndex("downloads", ["user_id", "created_at"]);
   },
   async down({ queryInterface: qi }) {
+    // The new index also serves downloads.user_id's foreign key; give the key its own index back first.
+    await qi.addIndex("downloads", ["user_id"]);
     await qi.removeIndex("downloads", ["user_id", "created_at"]);
     await qi.dropTable("payments");
   },

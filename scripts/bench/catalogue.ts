@@ -4,6 +4,7 @@ import { spawn } from "node:child_process";
 import { createServer } from "node:net";
 import autocannon from "autocannon";
 import { createSequelize } from "../../app/db/sequelize.server.ts";
+import { measureFirstLoad } from "./first-load.ts";
 import { seedLargeCatalogue } from "./seed-catalogue.ts";
 
 const TARGET = Number(process.env.BENCH_DETAILS ?? 10000);
@@ -60,6 +61,8 @@ for (const [name, path] of targets) {
   const result = await autocannon({ url: base + path, connections: 10, duration: DURATION });
   rows.push({ name, rps: Math.round(result.requests.average), p50: result.latency.p50, p95: result.latency.p97_5 ?? result.latency.p99, errors: result.errors + result.non2xx });
 }
+const slug = ((await (await fetch(`${base}/api/details?tier=free`)).json()) as { cards: { slug: string }[] }).cards[0]?.slug;
+const firstLoad = await measureFirstLoad(base, ["/", "/details", `/details/${slug}`]);
 server.kill("SIGTERM");
 
 console.log(`\nCatalogue over ${total} details, loopback, 10 connections, ${DURATION} s each (p95 column is autocannon's p97.5)`);
@@ -68,3 +71,6 @@ const trivial = rows[0].rps;
 for (const row of rows) {
   console.log(row.name.padEnd(44), String(row.rps).padStart(7), String(row.p50).padStart(7), String(row.p95).padStart(7), String(row.errors).padStart(7), `${Math.round((row.rps / trivial) * 100)} %`.padStart(11));
 }
+
+console.log("\nFirst page load, gzipped JavaScript (fresh browser profile per page)");
+for (const row of firstLoad) console.log(`  ${row.path.padEnd(60)} ${row.gzipKb.toFixed(1).padStart(7)} KB in ${row.files} files`);

@@ -36,7 +36,7 @@ test("a builder narrows the catalogue by facet and by text, and the URL keeps th
   expect(Number(facetCount)).toBe(inZone);
 
   // Text: typing offers suggestions; Enter searches.
-  const box = page.getByRole("combobox");
+  const box = page.locator('input[type="search"]');
   await box.fill("crawl");
   await page.getByTestId("suggestions").waitFor();
   await box.fill("crawlspace");
@@ -95,6 +95,10 @@ test("a free detail opens with its drawing, layer table and site check; the chec
   expect(await page.getByTestId("site-errors").textContent()).toMatch(/humidity/i);
   expect(await page.locator('input[name="hdd"]').inputValue()).toBe("7000");
   await page.locator('input[name="indoorRh"]').fill("35");
+  // Degree-days give the zone number; the moisture regime must be said (IECC R301.3).
+  await page.getByTestId("run-check").click();
+  await page.waitForFunction(() => /moisture/i.test(document.querySelector('[data-testid="site-errors"]')?.textContent ?? ""));
+  await page.locator('select[name="moisture"]').selectOption("A");
   await page.getByTestId("run-check").click();
   await page.waitForFunction(() => document.querySelector('[data-testid="site-check-results"]')?.textContent?.includes("from degree-days"));
 

@@ -26,6 +26,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     zone: search.get("zone") ?? (search.get("hdd") ? "" : detail.zones[0] ?? ""),
     hdd: search.get("hdd") ?? "",
     cdd: search.get("cdd") ?? "",
+    moisture: search.get("moisture") ?? "",
     indoorRh: search.get("indoorRh") ?? "",
   };
   let initialCheck = null;

@@ -96,7 +96,9 @@ test("property: without condensation the straight-line vapour flow is the same t
     const p = runSiteCheck(a, { zone: "5A" }, lib).profiles.winter;
     // Layers outboard of the boundary (a ventilated cavity) carry no vapour resistance in the case.
     const flows = p.vapourLayers.filter((_, i) => i >= p.boundaryIndex).map((v) => (p.interfaces[v.index + 1].p_v_linear_pa - p.interfaces[v.index].p_v_linear_pa) * v.case_perm_ng);
-    for (const f of flows) expect(Math.abs(f - flows[0])).toBeLessThanOrEqual(1e-7 * Math.abs(flows[0]) + 1e-9);
+    // Relative 1e-6: a 0.05 mm layer's pressure drop is a tiny difference of ~1000 Pa values, so
+    // floating-point cancellation alone reaches ~1e-7.
+    for (const f of flows) expect(Math.abs(f - flows[0])).toBeLessThanOrEqual(1e-6 * Math.abs(flows[0]) + 1e-9);
   }), { numRuns: 150 });
 });
 
