@@ -30,6 +30,7 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string[]
 /** Starts the catcher on 127.0.0.1 (port 0 picks a free one). Messages land in outboxDir as <date>-<id>.json. */
 export async function startMailCatcher({ port, outboxDir }: { port: number; outboxDir: string }): Promise<MailCatcher> {
   await mkdir(outboxDir, { recursive: true });
+  let arrivals = 0;
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ["STARTTLS", "AUTH"],
@@ -48,8 +49,9 @@ export async function startMailCatcher({ port, outboxDir }: { port: number; outb
             html: typeof parsed.html === "string" ? parsed.html : null,
             date: date.toISOString(),
           };
-          // The date prefix keeps a plain directory listing in arrival order.
-          const name = `${date.toISOString().replaceAll(":", "-")}-${message.id}.json`;
+          // Arrival time (ms) plus a counter keeps a sorted listing in arrival order; the Date header only has seconds.
+          arrivals += 1;
+          const name = `${new Date().toISOString().replaceAll(":", "-")}-${String(arrivals).padStart(6, "0")}-${message.id}.json`;
           await writeFile(join(outboxDir, name), JSON.stringify(message, null, 2));
           callback();
         })

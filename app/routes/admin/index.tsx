@@ -13,6 +13,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 export default function AdminIndex({ loaderData }: Route.ComponentProps) {
   const links = [
     { to: "/admin/users", label: "Users and roles", text: "Find people, change roles, sign them out everywhere." },
+    { to: "/admin/payments", label: "Payments", text: "Checkout sessions, entitlements and the webhook event log." },
     { to: "/admin/audit", label: "Audit log", text: "Role changes, sign-ins, publications: who did what and when." },
     ...(loaderData.outbox ? [{ to: "/admin/outbox", label: "Mail outbox", text: "Mail caught by the local mail catcher (development only)." }] : []),
   ];
