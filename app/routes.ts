@@ -27,6 +27,23 @@ export default [
     route("payments", "routes/admin/payments.tsx"),
   ]),
 
+  ...prefix("desk", [
+    index("routes/desk/index.tsx"),
+    route("new", "routes/desk/new.tsx"),
+    route("details/:slug/edit", "routes/desk/start-revision.tsx"),
+    route("details/:slug/withdraw", "routes/desk/withdraw.tsx"),
+    route("revisions/:id", "routes/desk/revision.tsx"),
+    route("revisions/:id/export", "routes/desk/export.ts"),
+    route("revisions/:id/uploads", "routes/desk/uploads.ts"),
+    route("review/:id", "routes/desk/review.tsx"),
+    route("materials", "routes/desk/materials.tsx"),
+    route("materials/:slug", "routes/desk/material.tsx"),
+    route("api/check", "routes/desk/api-check.ts"),
+    route("api/preview", "routes/desk/api-preview.ts"),
+  ]),
+  route("uploads/:id", "routes/uploads/file.ts"),
+  route("details/:slug/save", "routes/details/save.ts"),
+
   ...prefix("api", [
     route("details", "routes/api/details.ts"),
     route("details/:slug", "routes/api/detail.ts"),

@@ -1,8 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
-/** The parts of a revision a reviewer comments on, in page order. */
-export const REVIEW_SECTIONS = ["metadata", "layers", "why-it-works", "install-sequence", "cautions", "references"] as const;
-export type ReviewSection = (typeof REVIEW_SECTIONS)[number];
+import type { ReviewSection } from "~/desk/review-sections";
 
 /** A reviewer's note on one section of a submitted revision (table from the catalogue migration). */
 export class ReviewComment extends Model<InferAttributes<ReviewComment>, InferCreationAttributes<ReviewComment>> {

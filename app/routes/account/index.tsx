@@ -1,5 +1,7 @@
 import type { Route } from "./+types/index";
+import { Link } from "react-router";
 import { requireUser, type StaffRole } from "~/auth/guards.server";
+import { listSaved } from "~/desk/saved.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Your account — Dryside" }];
 
@@ -14,6 +16,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       verifiedAt: user.emailVerifiedAt?.toISOString() ?? null,
       memberSince: user.createdAt.toISOString(),
     },
+    saved: await listSaved(user.id),
   };
 }
 
@@ -25,7 +28,7 @@ const ROLE_WORDS = {
 } as const;
 
 export default function Account({ loaderData }: Route.ComponentProps) {
-  const { profile } = loaderData;
+  const { profile, saved } = loaderData;
   return (
     <div className="flex flex-col gap-10">
       <header>
@@ -56,7 +59,18 @@ export default function Account({ loaderData }: Route.ComponentProps) {
       </section>
       <section id="saved-details" aria-labelledby="saved-heading">
         <h2 id="saved-heading" className="text-xl">Saved details</h2>
-        <p className="mt-2 text-sm text-graphite-soft">Details you save appear here, and you get an e-mail when one is revised.</p>
+        {saved.length ? (
+          <ul className="mt-2 space-y-1 text-sm" data-testid="saved-details">
+            {saved.map((row) => (
+              <li key={row.slug}>
+                {row.live ? <Link to={`/details/${row.slug}`}>{row.title}</Link> : <span>{row.title} <span className="text-graphite-soft">(withdrawn)</span></span>}{" "}
+                <span className="text-xs text-graphite-soft">{row.tier} · saved {row.savedAt.slice(0, 10)}</span>
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="mt-2 text-sm text-graphite-soft">Details you save appear here, and you get an e-mail when one is revised.</p>
+        )}
       </section>
     </div>
   );

@@ -9,6 +9,8 @@ import { SectionDrawing } from "~/components/section-drawing";
 import { SiteCheckPanel } from "~/components/site-check-panel";
 import { UnitsToggle } from "~/components/units-toggle";
 import { STANDING_CAUTION } from "~/components/app-shell";
+import { SaveDetailButton } from "~/components/save-detail-button";
+import { isSaved } from "~/desk/saved.server";
 import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
@@ -34,7 +36,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     const outcome = await checkAssemblyForSite({ assembly: detail.assembly, layers: detail.full.layers }, { ...siteValues, units });
     initialCheck = outcome.ok ? { result: outcome.result } : { fieldErrors: outcome.fieldErrors };
   }
-  return { detail, units, siteValues, initialCheck };
+  const saved = viewer ? await isSaved(viewer.id, detail.id) : null;
+  return { detail, units, siteValues, initialCheck, saved };
 }
 
 function formatDate(iso: string | null): string {
@@ -42,7 +45,7 @@ function formatDate(iso: string | null): string {
 }
 
 export default function DetailPage({ loaderData }: Route.ComponentProps) {
-  const { detail, units, siteValues, initialCheck } = loaderData;
+  const { detail, units, siteValues, initialCheck, saved } = loaderData;
   const facts = [
     ["Assembly", labelFor(detail.assembly)],
     ["Substrate", labelFor(detail.substrate)],
@@ -67,6 +70,7 @@ export default function DetailPage({ loaderData }: Route.ComponentProps) {
         </div>
         <div className="flex flex-col items-start gap-3 lg:items-end">
           <UnitsToggle units={units} />
+          <SaveDetailButton slug={detail.slug} saved={saved} />
           <span className={`rounded-sm border px-2 py-0.5 text-xs font-semibold uppercase tracking-wide ${detail.tier === "premium" ? "border-ochre text-ochre-deep" : "border-vapour/50 text-vapour"}`}>
             {detail.tier}
           </span>

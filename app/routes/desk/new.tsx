@@ -1,0 +1,41 @@
+import { data, redirect } from "react-router";
+import type { Route } from "./+types/new";
+import { requireCsrf } from "~/auth/csrf.server";
+import { requireRole } from "~/auth/guards.server";
+import { DraftEditor } from "~/components/desk/draft-editor";
+import { BLANK_LAYER } from "~/components/desk/layer-editor";
+import { valuesFromFormData, type DraftFormValues, type FieldErrors } from "~/desk/draft-form";
+import { editorChoices } from "~/desk/editor-data.server";
+import { createDetailDraft } from "~/desk/revisions.server";
+import { unitsFor } from "~/preferences/units.server";
+
+export const meta: Route.MetaFunction = () => [{ title: "New detail — Desk — Dryside" }];
+
+const STARTER_BODY = "## Why it works\n\n\n## Install sequence\n\n1. \n\n## Cautions\n\n- Confirm with the code adopted where you build and a licensed professional where one is required.\n";
+
+const EMPTY: DraftFormValues = {
+  slug: "", title: "", summary: "", assembly: "", substrate: "", below_grade: "none", strategy: "", tier: "free",
+  zones: [], sets: [], references: "", change_note: "", body: STARTER_BODY,
+  layers: [{ ...BLANK_LAYER, role: "cladding" }, { ...BLANK_LAYER, role: "structure" }],
+};
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireRole(request, "editor");
+  const [choices, units] = await Promise.all([editorChoices(), unitsFor(request)]);
+  return { ...choices, units, values: EMPTY };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireRole(request, "editor");
+  const form = await requireCsrf(request);
+  const values = valuesFromFormData(form);
+  const outcome = await createDetailDraft(user, values);
+  if (!outcome.ok) return data({ values, errors: outcome.errors }, { status: 400 });
+  return redirect(`/desk/revisions/${outcome.revisionId}?saved=1`);
+}
+
+export default function NewDetail({ loaderData, actionData }: Route.ComponentProps) {
+  const values = actionData?.values ?? loaderData.values;
+  const errors: FieldErrors = actionData?.errors ?? {};
+  return <DraftEditor mode="new" heading="New detail: the first save creates revision 1 as a draft." values={values} errors={errors} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable />;
+}

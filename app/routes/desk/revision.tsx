@@ -1,0 +1,85 @@
+import { Link, data, redirect } from "react-router";
+import type { Route } from "./+types/revision";
+import { requireCsrf } from "~/auth/csrf.server";
+import { requireRole } from "~/auth/guards.server";
+import type { DetailFrontMatter } from "~/content/detail-schema";
+import { DraftEditor } from "~/components/desk/draft-editor";
+import { UploadPanel } from "~/components/desk/upload-panel";
+import { valuesFromFormData, valuesFromFrontMatter, type FieldErrors } from "~/desk/draft-form";
+import { editorChoices } from "~/desk/editor-data.server";
+import { DeskError, commentsOn, loadRevision, saveRevision } from "~/desk/revisions.server";
+import { uploadsOf } from "~/desk/uploads.server";
+import { REVIEW_SECTION_LABELS } from "~/desk/review-sections";
+import { unitsFor } from "~/preferences/units.server";
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.values.title ?? "Revision"} — Desk — Dryside` }];
+
+const STATE_WORDS = { draft: "draft", in_review: "in review", changes_requested: "changes requested", published: "published", superseded: "superseded", withdrawn: "withdrawn" } as const;
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireRole(request, "editor");
+  const found = await loadRevision(Number(params.id) || 0);
+  if (!found) throw data({ message: "No such revision." }, { status: 404 });
+  const { revision, detail } = found;
+  const [choices, units, comments, uploads] = await Promise.all([editorChoices(), unitsFor(request), commentsOn(revision.id), uploadsOf(revision.id)]);
+  const editable = revision.authorId === user.id && (revision.state === "draft" || revision.state === "changes_requested");
+  return {
+    ...choices,
+    units,
+    comments,
+    uploads,
+    editable,
+    revision: { id: revision.id, number: revision.number, state: revision.state, authorName: revision.authorName, mine: revision.authorId === user.id },
+    slug: detail.slug,
+    published: Boolean(detail.publishedRevisionId && !detail.withdrawnAt),
+    values: valuesFromFrontMatter(revision.frontMatter as DetailFrontMatter, revision.bodyMd),
+    notice: new URL(request.url).searchParams.get("saved") ? "Saved." : new URL(request.url).searchParams.get("submitted") ? "Submitted for review." : null,
+  };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "editor");
+  const form = await requireCsrf(request);
+  const values = valuesFromFormData(form);
+  const submit = form.get("intent") === "submit";
+  try {
+    const outcome = await saveRevision(user, Number(params.id) || 0, values, submit);
+    if (!outcome.ok) return data({ values, errors: outcome.errors }, { status: 400 });
+    return redirect(`/desk/revisions/${outcome.revisionId}?${submit ? "submitted" : "saved"}=1`);
+  } catch (error) {
+    if (error instanceof DeskError) return data({ values, errors: { form: [error.message] } as FieldErrors }, { status: error.status });
+    throw error;
+  }
+}
+
+export default function RevisionEditor({ loaderData, actionData }: Route.ComponentProps) {
+  const { revision, comments, uploads, editable, notice } = loaderData;
+  const values = actionData?.values ?? loaderData.values;
+  const errors: FieldErrors = actionData?.errors ?? {};
+  const heading = `Revision ${revision.number} · ${STATE_WORDS[revision.state]} · written by ${revision.authorName}`;
+  return (
+    <div className="space-y-10">
+      {notice && !actionData ? <p role="status" className="rounded border border-vapour/40 bg-vapour/5 px-3 py-2 text-sm text-vapour" data-testid="desk-notice">{notice}</p> : null}
+      {errors.form ? <p role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop">{errors.form.join(" ")}</p> : null}
+      {!editable ? (
+        <p className="rounded border border-rule bg-sheet px-3 py-2 text-sm" data-testid="read-only-note">
+          {revision.state === "in_review" ? "Waiting for review: the form is read-only until a reviewer answers." : revision.mine ? `This revision is ${STATE_WORDS[revision.state]}.` : `Only ${revision.authorName} edits this revision.`}{" "}
+          {loaderData.published ? <Link to={`/desk/details/${loaderData.slug}/edit`}>Start or open the next revision</Link> : null}
+        </p>
+      ) : null}
+      {comments.length ? (
+        <section aria-labelledby="comments-heading" className="rounded border border-caution/50 bg-caution/5 p-4">
+          <h2 id="comments-heading" className="text-xl">Reviewers' comments</h2>
+          <ul className="mt-2 space-y-2 text-sm" data-testid="review-comments">
+            {comments.map((comment) => (
+              <li key={comment.id}><span className="font-semibold">{REVIEW_SECTION_LABELS[comment.section as keyof typeof REVIEW_SECTION_LABELS] ?? comment.section}:</span> {comment.body} <span className="text-xs text-graphite-soft">— {comment.authorName}, {comment.at.slice(0, 10)}</span></li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+      <DraftEditor key={revision.id} mode="revision" heading={heading} values={values} errors={errors} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable={editable} />
+      <UploadPanel revisionId={revision.id} uploads={uploads} editable={editable} />
+      <p className="text-sm"><a href={`/desk/revisions/${revision.id}/export`} download>Export as Markdown</a> <span className="text-graphite-soft">(the content-file form of this revision)</span></p>
+    </div>
+  );
+}

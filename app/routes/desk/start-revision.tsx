@@ -1,0 +1,63 @@
+import { Form, Link, data, redirect } from "react-router";
+import { Op } from "sequelize";
+import type { Route } from "./+types/start-revision";
+import { requireCsrf } from "~/auth/csrf.server";
+import { requireRole } from "~/auth/guards.server";
+import { CsrfField } from "~/components/csrf-field";
+import { DeskError, startRevision } from "~/desk/revisions.server";
+import { Detail, DetailRevision, models } from "~/models";
+
+export const meta: Route.MetaFunction = () => [{ title: "Revise a detail — Desk — Dryside" }];
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  await requireRole(request, "editor");
+  models();
+  const detail = await Detail.findOne({ where: { slug: params.slug }, attributes: ["id", "slug", "title", "publishedRevisionId"] });
+  if (!detail) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
+  const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: ["draft", "in_review", "changes_requested"] } }, attributes: ["id", "number", "state", "authorName"] });
+  const published = detail.publishedRevisionId ? await DetailRevision.findByPk(detail.publishedRevisionId, { attributes: ["number"] }) : null;
+  return {
+    slug: detail.slug,
+    title: detail.title,
+    publishedNumber: published?.number ?? null,
+    open: open ? { id: open.id, number: open.number, state: open.state, authorName: open.authorName } : null,
+  };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "editor");
+  await requireCsrf(request);
+  try {
+    const { revisionId } = await startRevision(user, params.slug);
+    return redirect(`/desk/revisions/${revisionId}`);
+  } catch (error) {
+    if (error instanceof DeskError) return data({ message: error.message }, { status: error.status });
+    throw error;
+  }
+}
+
+export default function StartRevision({ loaderData, actionData }: Route.ComponentProps) {
+  const { slug, title, publishedNumber, open } = loaderData;
+  return (
+    <div className="max-w-prose space-y-4">
+      <h1 className="text-3xl">Revise “{title}”</h1>
+      {actionData?.message ? <p role="alert" className="text-stop">{actionData.message}</p> : null}
+      {open ? (
+        <p>
+          Revision {open.number} is already open ({open.state.replace("_", " ")}, by {open.authorName}).{" "}
+          <Link to={`/desk/revisions/${open.id}`}>Open it</Link>.
+        </p>
+      ) : (
+        <Form method="post" className="space-y-3">
+          <CsrfField />
+          <p>
+            This starts revision {(publishedNumber ?? 0) + 1} as your draft, copied from the published revision {publishedNumber ?? "—"}.
+            The published page stays as it is until a reviewer approves the new one.
+          </p>
+          <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Start a new revision</button>
+        </Form>
+      )}
+      <p className="text-sm"><Link to={`/details/${slug}`}>Back to the published page</Link></p>
+    </div>
+  );
+}
