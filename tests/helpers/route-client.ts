@@ -55,7 +55,7 @@ export class RouteClient {
     return (await this.root()).csrfToken;
   }
 
-  request(path: string, init: { method?: string; form?: Record<string, string>; headers?: Record<string, string> } = {}): Request {
+  request(path: string, init: { method?: string; form?: Record<string, string> | [string, string][]; headers?: Record<string, string> } = {}): Request {
     const headers = new Headers(init.headers);
     if (this.cookie) headers.set("Cookie", this.cookie);
     if (init.form) {
@@ -84,6 +84,11 @@ export class RouteClient {
   /** Posts a form with this browser's CSRF token added. */
   async submit(fn: RouteFunction, path: string, form: Record<string, string>, params: Record<string, string> = {}): Promise<RouteResult> {
     return this.call(fn, path, params, { form: { csrf: await this.csrfToken(), ...form } });
+  }
+
+  /** Posts a form whose fields repeat (checkbox groups, table rows), with this browser's CSRF token added. */
+  async submitPairs(fn: RouteFunction, path: string, pairs: [string, string][], params: Record<string, string> = {}): Promise<RouteResult> {
+    return this.call(fn, path, params, { form: [["csrf", await this.csrfToken()], ...pairs] });
   }
 
   private absorb(headers: Headers) {

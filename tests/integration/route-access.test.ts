@@ -55,7 +55,7 @@ const ACCESS: Record<string, Access> = {
   "/desk": { atLeast: "editor" },
   "/desk/new": { atLeast: "editor" },
   "/desk/details/:slug/edit": { atLeast: "editor", params: { slug: "no-such-detail" } },
-  "/desk/details/:slug/withdraw": { atLeast: "editor", params: { slug: "no-such-detail" } },
+  "/desk/details/:slug/withdraw": { atLeast: "reviewer", params: { slug: "no-such-detail" } }, // withdrawing is a reviewer's call
   "/desk/revisions/:id": { atLeast: "editor", params: { id: "999999" } },
   "/desk/revisions/:id/export": { atLeast: "editor", params: { id: "999999" } },
   "/desk/revisions/:id/uploads": { atLeast: "editor", params: { id: "999999" } },
