@@ -7,6 +7,7 @@ import { Detail, DetailRevision, DetailSet, DetailSetMember, DetailZone, models 
 import type { LayerStripEntry, Tier } from "~/models/detail";
 import { materialLibrary } from "./materials.server";
 import { buildSearchText } from "./search-text";
+import { regimeMask, zoneMask } from "./zone-mask";
 
 // The one path by which a revision becomes the published one, shared by the content importer and the
 // web desk so the two can never build the searchable projection differently.
@@ -24,6 +25,8 @@ export interface DetailProjection {
   rValueRsi: number;
   layerStrip: LayerStripEntry[];
   zonesLabel: string;
+  zoneMask: number;
+  regimeMask: number;
 }
 
 /** The `details` columns derived from one revision's front matter and body (throws on unknown materials). */
@@ -42,6 +45,8 @@ export function buildProjection(front: DetailFrontMatter, body: string, library:
     rValueRsi: Math.round(assemblyRValue(assembly, library).rsi * 1000) / 1000,
     layerStrip: front.layers.map((layer) => ({ role: layer.role, family: library.get(layer.material)?.family ?? "unknown", thickness_mm: layer.thickness_mm })),
     zonesLabel: front.zones.join(" "),
+    zoneMask: zoneMask(front.zones),
+    regimeMask: regimeMask(front.zones),
   };
 }
 

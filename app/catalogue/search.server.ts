@@ -2,7 +2,9 @@ import { QueryTypes } from "sequelize";
 import { models } from "~/models";
 import type { LayerStripEntry } from "~/models/detail";
 import { toBooleanQuery } from "./fulltext";
+import { CLIMATE_ZONE_IDS, type ClimateZoneId } from "~/content/zones";
 import { effectiveSort, FILTER_KEYS, PER_PAGE, type CatalogueQuery, type FilterKey, type Sort } from "./query";
+import { regimeBit, REGIMES, zoneBit, zoneMask } from "./zone-mask";
 
 export interface DetailCard {
   slug: string;
@@ -35,8 +37,9 @@ export interface CatalogueResult {
   ms: number;
 }
 
-// Facets on plain columns of `details`; zone and regime live in detail_zones.
-const COLUMN: Partial<Record<FilterKey, string>> = {
+// Facets on plain columns of `details`; zones and regimes are bit masks on the same row
+// (app/catalogue/zone-mask.ts), so one scan of the covering index `details_facets` counts them all.
+const COLUMN: Record<Exclude<FilterKey, "zone" | "regime">, string> = {
   assembly: "d.assembly",
   substrate: "d.substrate",
   belowGrade: "d.below_grade",
@@ -44,33 +47,89 @@ const COLUMN: Partial<Record<FilterKey, string>> = {
   interiorClass: "d.interior_class",
   tier: "d.tier",
 };
-const ZONE_COLUMN: Partial<Record<FilterKey, string>> = { zone: "z.zone", regime: "z.regime" };
 
 interface Filter {
-  key: FilterKey | "q";
+  key: FilterKey;
   sql: string;
 }
 
-function buildFilters(query: CatalogueQuery, booleanQuery: string): Filter[] {
+function buildFilters(query: CatalogueQuery): Filter[] {
   const filters: Filter[] = [];
-  if (booleanQuery) filters.push({ key: "q", sql: "MATCH (d.title, d.summary, d.search_text) AGAINST (:booleanQuery IN BOOLEAN MODE)" });
   for (const key of FILTER_KEYS) {
-    if (query[key].length === 0) continue;
-    const column = COLUMN[key];
-    filters.push({
-      key,
-      sql: column
-        ? `${column} IN (:${key})`
-        : `EXISTS (SELECT 1 FROM detail_zones fz WHERE fz.detail_id = d.id AND fz.${key} IN (:${key}))`,
-    });
+    const values = query[key] as readonly string[];
+    if (values.length === 0) continue;
+    if (key === "zone") filters.push({ key, sql: `(d.zone_mask & ${zoneMask(values as ClimateZoneId[])}) <> 0` });
+    else if (key === "regime") filters.push({ key, sql: `(d.regime_mask & ${regimeMaskOf(values)}) <> 0` });
+    else filters.push({ key, sql: `${COLUMN[key]} IN (:${key})` });
   }
   return filters;
 }
 
-const LIVE = "d.published_revision_id IS NOT NULL AND d.withdrawn_at IS NULL";
+const regimeMaskOf = (values: readonly string[]) => values.reduce((mask, v) => mask | regimeBit(v as (typeof REGIMES)[number]), 0);
 
-function whereClause(filters: Filter[], except?: FilterKey): string {
-  return [LIVE, ...filters.filter((filter) => filter.key !== except).map((filter) => filter.sql)].join(" AND ");
+const LIVE = "d.published_revision_id IS NOT NULL AND d.withdrawn_at IS NULL";
+const MATCH = "MATCH (d.title, d.summary, d.search_text) AGAINST (:booleanQuery IN BOOLEAN MODE)";
+
+function conjunction(filters: Filter[]): string {
+  return filters.length ? filters.map((filter) => `(${filter.sql})`).join(" AND ") : "TRUE";
+}
+
+/** One combination of facet values and how many live details have it. */
+interface FacetCombination {
+  tier: string;
+  assembly: string;
+  substrate: string;
+  below_grade: string;
+  strategy: string;
+  interior_class: string;
+  zone_mask: number;
+  regime_mask: number;
+  n: number | bigint;
+}
+
+const ROW_FIELD: Record<Exclude<FilterKey, "zone" | "regime">, keyof FacetCombination> = {
+  assembly: "assembly",
+  substrate: "substrate",
+  belowGrade: "below_grade",
+  strategy: "strategy",
+  interiorClass: "interior_class",
+  tier: "tier",
+};
+
+/** The values of one facet a combination carries (zones and regimes can be several). */
+function valuesOf(row: FacetCombination, key: FilterKey): string[] {
+  if (key === "zone") return CLIMATE_ZONE_IDS.filter((zone) => (row.zone_mask & zoneBit(zone)) !== 0);
+  if (key === "regime") return REGIMES.filter((regime) => (row.regime_mask & regimeBit(regime)) !== 0);
+  return [String(row[ROW_FIELD[key]])];
+}
+
+/**
+ * Counts per facet value under all the other active filters (so a facet shows what choosing each of
+ * its values would give), and the total under all of them, from the grouped combinations.
+ */
+export function countFacets(combinations: FacetCombination[], query: CatalogueQuery): { total: number; facets: Record<FilterKey, FacetCount[]> } {
+  const active = FILTER_KEYS.filter((key) => query[key].length > 0);
+  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<Record<FilterKey, Set<string>>>;
+  const tallies = Object.fromEntries(FILTER_KEYS.map((key) => [key, new Map<string, number>()])) as Record<FilterKey, Map<string, number>>;
+  let total = 0;
+  for (const row of combinations) {
+    const n = Number(row.n);
+    const failing = active.filter((key) => !valuesOf(row, key).some((value) => selected[key]!.has(value)));
+    if (failing.length === 0) total += n;
+    if (failing.length > 1) continue;
+    for (const key of FILTER_KEYS) {
+      // A row counts for facet `key` when every filter other than `key` accepts it.
+      if (failing.length === 1 && failing[0] !== key) continue;
+      for (const value of valuesOf(row, key)) tallies[key].set(value, (tallies[key].get(value) ?? 0) + n);
+    }
+  }
+  const facets = Object.fromEntries(
+    FILTER_KEYS.map((key) => [
+      key,
+      [...tallies[key]].map(([value, count]) => ({ value, count })).sort((a, b) => a.value.localeCompare(b.value, "en", { numeric: true })),
+    ]),
+  ) as Record<FilterKey, FacetCount[]>;
+  return { total, facets };
 }
 
 const ORDER: Record<Sort, string> = {
@@ -104,39 +163,30 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
   const started = performance.now();
   const sequelize = models();
   const booleanQuery = toBooleanQuery(query.q);
-  const filters = buildFilters(query, booleanQuery);
+  const filters = buildFilters(query);
   const replacements: Record<string, unknown> = { booleanQuery };
   for (const key of FILTER_KEYS) if (query[key].length) replacements[key] = query[key];
   const sort = effectiveSort(query);
   const orderSql = sort === "relevance" && !booleanQuery ? ORDER.revised : ORDER[sort];
-  const scoreSql = booleanQuery ? "MATCH (d.title, d.summary, d.search_text) AGAINST (:booleanQuery IN BOOLEAN MODE)" : "0";
+  const scope = booleanQuery ? `${LIVE} AND ${MATCH}` : LIVE;
   const offset = (query.page - 1) * PER_PAGE;
 
-  const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
-
-  const rowsPromise = select<CardRow>(
-    `SELECT d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
-            d.r_value_rsi, d.zones_label, d.layer_strip, d.published_at, ${scoreSql} AS score
-       FROM details d WHERE ${whereClause(filters)} ORDER BY ${orderSql} LIMIT ${PER_PAGE} OFFSET ${offset}`,
-  );
-  const totalPromise = select<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM details d WHERE ${whereClause(filters)}`);
-  const facetPromises = FILTER_KEYS.map((key) => {
-    const column = COLUMN[key];
-    const sql = column
-      ? `SELECT ${column} AS value, COUNT(*) AS n FROM details d WHERE ${whereClause(filters, key)} GROUP BY ${column}`
-      : `SELECT ${ZONE_COLUMN[key]} AS value, COUNT(DISTINCT d.id) AS n FROM details d JOIN detail_zones z ON z.detail_id = d.id
-          WHERE ${whereClause(filters, key)} AND ${ZONE_COLUMN[key]} IS NOT NULL GROUP BY ${ZONE_COLUMN[key]}`;
-    return select<{ value: string; n: number | bigint }>(sql);
-  });
-
-  const [rows, [totalRow], ...facetRows] = await Promise.all([rowsPromise, totalPromise, ...facetPromises]);
-  const total = Number(totalRow?.n ?? 0);
-  const facets = Object.fromEntries(
-    FILTER_KEYS.map((key, i) => [
-      key,
-      facetRows[i].map((row) => ({ value: row.value, count: Number(row.n) })).sort((a, b) => a.value.localeCompare(b.value, "en", { numeric: true })),
-    ]),
-  ) as Record<FilterKey, FacetCount[]>;
+  const grouping = "d.tier, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.zone_mask, d.regime_mask";
+  const [rows, combinations] = await Promise.all([
+    sequelize.query<CardRow>(
+      `SELECT d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
+              d.r_value_rsi, d.zones_label, d.layer_strip, d.published_at, ${booleanQuery ? MATCH : "0"} AS score
+         FROM details d WHERE ${scope} AND ${conjunction(filters)} ORDER BY ${orderSql} LIMIT ${PER_PAGE} OFFSET ${offset}`,
+      { type: QueryTypes.SELECT, replacements },
+    ),
+    // Without text the facet index is walked in its own order (no temporary table); with text the
+    // FULLTEXT index picks the rows first.
+    sequelize.query<FacetCombination>(
+      `SELECT ${grouping}, COUNT(*) AS n FROM details d ${booleanQuery ? "" : "FORCE INDEX (details_facets)"} WHERE ${scope} GROUP BY ${grouping}`,
+      { type: QueryTypes.SELECT, replacements },
+    ),
+  ]);
+  const { total, facets } = countFacets(combinations, query);
 
   return {
     total,

@@ -12,11 +12,4 @@ export function renderMarkdown(markdown: string): string {
   return purify.sanitize(html, { USE_PROFILES: { html: true }, FORBID_TAGS: ["style", "form", "input"], FORBID_ATTR: ["style"] });
 }
 
-/** The text of one `## Heading` section of a body, or "" when the body has no such section. */
-export function markdownSection(markdown: string, heading: string): string {
-  const lines = markdown.split("\n");
-  const start = lines.findIndex((line) => line.trim().toLowerCase() === `## ${heading.toLowerCase()}`);
-  if (start < 0) return "";
-  const end = lines.findIndex((line, i) => i > start && /^##\s/.test(line));
-  return lines.slice(start + 1, end < 0 ? undefined : end).join("\n").trim();
-}
+export { markdownSection } from "./sections";

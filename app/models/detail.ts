@@ -25,6 +25,9 @@ export class Detail extends Model<InferAttributes<Detail>, InferCreationAttribut
   /** Role, material family and thickness of each layer, for the card's section strip. */
   declare layerStrip: LayerStripEntry[];
   declare zonesLabel: string;
+  /** Bit masks of the zones and moisture regimes (app/catalogue/zone-mask.ts), for facet counting. */
+  declare zoneMask: CreationOptional<number>;
+  declare regimeMask: CreationOptional<number>;
   declare publishedRevisionId: number | null;
   declare publishedAt: Date | null;
   declare withdrawnAt: CreationOptional<Date | null>;
@@ -56,6 +59,8 @@ export class Detail extends Model<InferAttributes<Detail>, InferCreationAttribut
         },
         layerStrip: { type: DataTypes.JSON, allowNull: false },
         zonesLabel: { type: DataTypes.STRING(120), allowNull: false },
+        zoneMask: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        regimeMask: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false, defaultValue: 0 },
         publishedRevisionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         publishedAt: { type: DataTypes.DATE(3), allowNull: true },
         withdrawnAt: { type: DataTypes.DATE(3), allowNull: true },

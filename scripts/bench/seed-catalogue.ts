@@ -1,5 +1,7 @@
 // Multiplies the imported demo library into a large catalogue for benchmarks (never for the app's data).
 import { QueryTypes, type Sequelize } from "sequelize";
+import type { ClimateZoneId } from "../../app/content/zones.ts";
+import { regimeBit, zoneBit } from "../../app/catalogue/zone-mask.ts";
 
 const VARIANTS = ["coastal", "upland", "prairie", "river", "lakeside", "ridge", "valley", "harbour", "forest", "mesa"];
 const ZONE_POOL = ["2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
@@ -13,12 +15,12 @@ export async function seedLargeCatalogue(sequelize: Sequelize, target: number): 
     const variant = VARIANTS[copy % VARIANTS.length];
     await sequelize.query(
       `INSERT INTO details (slug, title, summary, search_text, assembly, substrate, below_grade, strategy, interior_class, tier,
-                            r_value_rsi, layer_strip, zones_label, published_revision_id, published_at, created_at, updated_at)
-       SELECT CONCAT(slug, '-v', :copy), CONCAT(title, ' (', :variant, ' variant ', :copy, ')'), summary,
+                            r_value_rsi, layer_strip, zones_label, zone_mask, regime_mask, published_revision_id, published_at, created_at, updated_at)
+       SELECT CONCAT(slug, '--g', :copy), CONCAT(title, ' (', :variant, ' variant ', :copy, ')'), summary,
               CONCAT(search_text, ' ', :variant), assembly, substrate, below_grade, strategy, interior_class,
-              IF((id + :copy) % 3 = 0, 'free', 'premium'), r_value_rsi * (0.9 + ((id + :copy) % 5) / 20), layer_strip, zones_label,
+              IF((id + :copy) % 3 = 0, 'free', 'premium'), r_value_rsi * (0.9 + ((id + :copy) % 5) / 20), layer_strip, zones_label, zone_mask, regime_mask,
               published_revision_id, DATE_SUB(published_at, INTERVAL :copy HOUR), NOW(3), NOW(3)
-         FROM details WHERE slug NOT LIKE '%-v%' ORDER BY id`,
+         FROM details WHERE slug NOT LIKE '%--g%' ORDER BY id`,
       { replacements: { copy, variant } },
     );
     // Spread zones so facet counts vary across the generated copies.
@@ -27,12 +29,21 @@ export async function seedLargeCatalogue(sequelize: Sequelize, target: number): 
     for (const zone of new Set([zoneA, zoneB])) {
       await sequelize.query(
         `INSERT INTO detail_zones (detail_id, zone, zone_number, regime)
-         SELECT id, :zone, :zoneNumber, :regime FROM details WHERE slug LIKE CONCAT('%-v', :copy)`,
+         SELECT id, :zone, :zoneNumber, :regime FROM details WHERE slug LIKE CONCAT('%--g', :copy)`,
         { replacements: { zone, zoneNumber: Number.parseInt(zone, 10), regime: zone.length > 1 ? zone.slice(1) : null, copy } },
+      );
+      const regime = zone.length > 1 ? (zone.slice(1) as "A" | "B" | "C") : null;
+      await sequelize.query(
+        `UPDATE details SET zone_mask = zone_mask | :zoneBit, regime_mask = regime_mask | :regimeBit, zones_label = CONCAT(zones_label, ' ', :zone)
+          WHERE slug LIKE CONCAT('%--g', :copy) AND (zone_mask & :zoneBit) = 0`,
+        { replacements: { zoneBit: zoneBit(zone as ClimateZoneId), regimeBit: regime ? regimeBit(regime) : 0, zone, copy } },
       );
     }
   }
-  await sequelize.query(`DELETE FROM details WHERE id > (SELECT m FROM (SELECT MIN(id) + :target - 1 AS m FROM details) t)`, { replacements: { target } });
+  // Auto-increment ids have gaps after INSERT … SELECT, so trim by count, newest generated rows first.
+  const [{ now }] = await sequelize.query<{ now: number }>("SELECT COUNT(*) AS now FROM details", { type: QueryTypes.SELECT });
+  const excess = Number(now) - target;
+  if (excess > 0) await sequelize.query(`DELETE FROM details WHERE slug LIKE '%--g%' ORDER BY id DESC LIMIT ${excess}`);
   await sequelize.query("ANALYZE TABLE details, detail_zones");
   const [{ total }] = await sequelize.query<{ total: number }>("SELECT COUNT(*) AS total FROM details", { type: QueryTypes.SELECT });
   return Number(total);
