@@ -142,38 +142,56 @@ async function sheetPdf(member: PackMember, request: PackRequest, library: Reado
   });
 }
 
-async function buildPack(setTitle: string, members: PackMember[], request: PackRequest): Promise<Readable> {
+/** Starts writing the ZIP and returns its stream at once; sheets are rendered as the stream is read. */
+function buildPack(setTitle: string, members: PackMember[], request: PackRequest): Readable {
   const archive = new ZipArchive({ zlib: { level: 6 } });
   const out = new PassThrough();
   archive.on("error", (error) => out.destroy(error));
   archive.pipe(out);
-  archive.append(PACK_README(setTitle, request, members), { name: "README.txt" });
-  // Sheets one after another: each PDF render is CPU-bound and the machine is shared.
-  const library = await materialLibrary();
-  for (const member of members) {
-    archive.append(await sheetPdf(member, request, library), { name: `${member.slug}.pdf` });
-    archive.append(exportDetailMarkdown(member.frontMatter, member.body), { name: `${member.slug}.md` });
-  }
-  void archive.finalize();
+  void (async () => {
+    archive.append(PACK_README(setTitle, request, members), { name: "README.txt" });
+    const library = await materialLibrary();
+    // Sheets one after another: each PDF render is CPU-bound and the machine is shared.
+    for (const member of members) {
+      archive.append(await sheetPdf(member, request, library), { name: `${member.slug}.pdf` });
+      archive.append(exportDetailMarkdown(member.frontMatter, member.body), { name: `${member.slug}.md` });
+    }
+    await archive.finalize();
+  })().catch((error: unknown) => out.destroy(error instanceof Error ? error : new Error(String(error))));
   return out;
 }
 
-// Concurrent first downloads of the same pack share one build.
+// A pack being written to storage right now; later requests for the same key wait for it.
 const building = new Map<string, Promise<void>>();
 
-async function ensurePack(key: string, build: () => Promise<Readable>): Promise<void> {
+/**
+ * The pack's bytes: from storage when built before, otherwise built now and streamed to the first
+ * downloader while the same bytes are stored (so a first download starts at once instead of after
+ * every sheet is rendered).
+ */
+async function openPack(key: string, build: () => Readable): Promise<{ body: Readable; size: number | null; built: boolean }> {
   const storage = blobStorage();
-  if (await storage.exists(key)) return;
-  let pending = building.get(key);
-  if (!pending) {
-    pending = (async () => storage.put(key, await build()))().finally(() => building.delete(key));
-    building.set(key, pending);
-  }
-  await pending;
+  const pending = building.get(key);
+  if (pending) await pending;
+  const stored = await storage.get(key);
+  if (stored) return { ...stored, built: false };
+  const source = build();
+  const toClient = new PassThrough();
+  const toStorage = new PassThrough();
+  source.on("error", (error) => {
+    toClient.destroy(error);
+    toStorage.destroy(error);
+  });
+  source.pipe(toClient);
+  source.pipe(toStorage);
+  const write = storage.put(key, toStorage).finally(() => building.delete(key));
+  building.set(key, write);
+  write.catch((error: unknown) => console.error(`pack ${key} was not stored:`, error instanceof Error ? error.message : error));
+  return { body: toClient, size: null, built: true };
 }
 
 export type PackDownload =
-  | { ok: true; key: string; fileName: string; body: Readable; size: number; built: boolean }
+  | { ok: true; key: string; fileName: string; body: Readable; size: number | null; built: boolean }
   | { ok: false; status: 403 | 404; message: string };
 
 /**
@@ -189,10 +207,7 @@ export async function downloadPack(viewer: Viewer, setSlug: string, request: Pac
   const members = await packMembers(set.id);
   if (members.length === 0) return { ok: false, status: 404, message: `“${set.title}” has no published details yet.` };
   const key = packKey(set.slug, request, members, await materialsVersion());
-  const existed = await blobStorage().exists(key);
-  await ensurePack(key, () => buildPack(set.title, members, request));
-  const stored = await blobStorage().get(key);
-  if (!stored) throw new Error(`pack ${key} vanished after it was built`);
+  const pack = await openPack(key, () => buildPack(set.title, members, request));
   await Download.create({ userId: viewer.id, setId: set.id, packKey: key });
-  return { ok: true, key, fileName: `dryside-${set.slug}-${request.units}-${request.zone.toLowerCase()}.zip`, body: stored.body, size: stored.size, built: !existed };
+  return { ok: true, key, fileName: `dryside-${set.slug}-${request.units}-${request.zone.toLowerCase()}.zip`, ...pack };
 }

@@ -16,7 +16,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return new Response(Readable.toWeb(result.body) as ReadableStream, {
     headers: {
       "Content-Type": "application/zip",
-      "Content-Length": String(result.size),
+      // Unknown on a first download: the pack is streamed while it is built.
+      ...(result.size !== null ? { "Content-Length": String(result.size) } : {}),
       "Content-Disposition": `attachment; filename="${result.fileName}"`,
       "Cache-Control": "private, no-store",
       "X-Pack-Key": result.key,
