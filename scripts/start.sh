@@ -44,31 +44,24 @@ export MAIL_OUTBOX_DIR=${MAIL_OUTBOX_DIR:-.data/outbox}  # the app reads it for 
 
 log "migrating"
 npx tsx db/migrate.ts up
-if [ -f scripts/content-import.ts ]; then
-  log "importing content/"
-  npx tsx scripts/content-import.ts
-fi
-
+log "importing content/"
+npx tsx scripts/content-import.ts
 npx tsx scripts/demo-accounts.ts
-if [ -f dev/payments-standin/cli.ts ]; then
-  log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
-  PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
-    PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE_FILE=.data/payments-standin.json \
-    npx tsx dev/payments-standin/cli.ts &
-  children+=($!)
-fi
-if [ -f dev/mail-catcher/cli.ts ]; then
-  log "starting the mail catcher on 127.0.0.1:$SMTP_PORT_LOCAL (messages in .data/outbox)"
-  MAIL_CATCHER_PORT=$SMTP_PORT_LOCAL MAIL_OUTBOX_DIR=.data/outbox npx tsx dev/mail-catcher/cli.ts &
-  children+=($!)
-fi
-if [ -f scripts/sync-payments-catalogue.ts ]; then
-  npx tsx scripts/sync-payments-catalogue.ts
-fi
+
+log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
+PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
+  PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE_FILE=.data/payments-standin.json \
+  node --import tsx dev/payments-standin/cli.ts &
+children+=($!)
+log "starting the mail catcher on 127.0.0.1:$SMTP_PORT_LOCAL (messages in .data/outbox)"
+MAIL_CATCHER_PORT=$SMTP_PORT_LOCAL MAIL_OUTBOX_DIR=.data/outbox node --import tsx dev/mail-catcher/cli.ts &
+children+=($!)
+wait_for_http "http://127.0.0.1:$PAYMENTS_PORT/healthz" "the payments stand-in"
+npx tsx scripts/sync-payments-catalogue.ts
 
 log "building"
 npx react-router build >/dev/null
 log "serving on $APP_URL"
-HOST=127.0.0.1 PORT=$APP_PORT npx react-router-serve ./build/server/index.js &
+HOST=127.0.0.1 PORT=$APP_PORT node node_modules/@react-router/serve/bin.js ./build/server/index.js &
 children+=($!)
 wait -n "${children[@]}" "$MARIADB_PID" || true

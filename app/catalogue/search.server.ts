@@ -4,6 +4,7 @@ import type { LayerStripEntry } from "~/models/detail";
 import { toBooleanQuery } from "./fulltext";
 import { CLIMATE_ZONE_IDS, type ClimateZoneId } from "~/content/zones";
 import { effectiveSort, FILTER_KEYS, PER_PAGE, type CatalogueQuery, type FilterKey, type Sort } from "./query";
+import { catalogueVersion, VersionedCache } from "./search-cache.server";
 import { regimeBit, REGIMES, zoneBit, zoneMask } from "./zone-mask";
 
 export interface DetailCard {
@@ -159,8 +160,21 @@ interface CardRow {
  * The catalogue search: results for one page and, for every facet, counts under all the other
  * active filters (so a facet shows what choosing each of its values would give).
  */
+const cache = new VersionedCache<Omit<CatalogueResult, "ms">>();
+
+/** The catalogue search, answered from the per-process cache while the catalogue is unchanged. */
 export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueResult> {
   const started = performance.now();
+  const version = await catalogueVersion();
+  const key = JSON.stringify(query);
+  const cached = cache.get(key, version);
+  if (cached) return { ...cached, ms: Math.round(performance.now() - started) };
+  const result = await searchUncached(query);
+  cache.set(key, version, result);
+  return { ...result, ms: Math.round(performance.now() - started) };
+}
+
+async function searchUncached(query: CatalogueQuery): Promise<Omit<CatalogueResult, "ms">> {
   const sequelize = models();
   const booleanQuery = toBooleanQuery(query.q);
   const filters = buildFilters(query);
@@ -195,7 +209,6 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
     sort,
     cards: rows.map(toCard),
     facets,
-    ms: Math.round(performance.now() - started),
   };
 }
 

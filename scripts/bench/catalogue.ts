@@ -33,7 +33,7 @@ console.log(`seeded ${total} details in ${Math.round(performance.now() - seeded)
 await sequelize.close();
 
 const port = await freePort();
-const server = spawn("npx", ["react-router-serve", "./build/server/index.js"], {
+const server = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], {
   env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port) },
   stdio: ["ignore", "ignore", "inherit"],
 });
@@ -45,20 +45,40 @@ for (let i = 0; i < 200; i++) {
   await new Promise((r) => setTimeout(r, 100));
 }
 
-const targets = [
+// Varied searches defeat the per-process result cache: every request is a different combination.
+const ZONES = ["2A", "3A", "3B", "4A", "4C", "5A", "5B", "6A", "6B", "7", "8"];
+const KINDS = ["above-grade-wall", "roof", "basement-wall", "slab", "crawlspace-wall", "rim-joist"];
+const WORDS = ["foam", "crawlspace", "exterior", "cellulose", "drainage", "polyiso", "mineral wool", "spray foam"];
+let n = 0;
+const varied = (withText: boolean) => () => {
+  n++;
+  const zone = ZONES[n % ZONES.length];
+  const kind = KINDS[Math.floor(n / ZONES.length) % KINDS.length];
+  const page = 1 + (Math.floor(n / 66) % 3);
+  const text = withText ? `&q=${encodeURIComponent(WORDS[n % WORDS.length])}` : "";
+  return `/api/details?zone=${zone}&assembly=${kind}&page=${page}${text}`;
+};
+
+const targets: [string, string | (() => string)][] = [
   ["trivial route (/healthz: one SELECT 1)", "/healthz"],
   ["API search, two facets", "/api/details?zone=5A&assembly=above-grade-wall"],
   ["API search, text + facets", "/api/details?q=exterior+foam&zone=6A&tier=premium"],
   ["catalogue page, two facets (SSR)", "/details?zone=5A&below-grade=basement"],
   ["catalogue page, text search (SSR)", "/details?q=crawlspace"],
-] as const;
+  ["API search, varied facets (cache misses)", varied(false)],
+  ["API search, varied text + facets (misses)", varied(true)],
+];
 
 interface Row { name: string; rps: number; p50: number; p95: number; errors: number }
 const rows: Row[] = [];
 for (const [name, path] of targets) {
+  const options: autocannon.Options =
+    typeof path === "string"
+      ? { url: base + path }
+      : { url: base, requests: [{ setupRequest: (request: autocannon.Request) => ({ ...request, path: path() }) }] };
   // Warm the route and the pool first.
-  await autocannon({ url: base + path, connections: 4, duration: 1 });
-  const result = await autocannon({ url: base + path, connections: 10, duration: DURATION });
+  await autocannon({ ...options, connections: 4, duration: 1 });
+  const result = await autocannon({ ...options, connections: 10, duration: DURATION });
   rows.push({ name, rps: Math.round(result.requests.average), p50: result.latency.p50, p95: result.latency.p97_5 ?? result.latency.p99, errors: result.errors + result.non2xx });
 }
 const slug = ((await (await fetch(`${base}/api/details?tier=free`)).json()) as { cards: { slug: string }[] }).cards[0]?.slug;

@@ -66,3 +66,12 @@ start_mariadb() {
 mariadb_sql() { mariadb --no-defaults --protocol=tcp -h127.0.0.1 -P"$1" -uroot -e "$2"; }
 
 stop_pid() { local pid=$1; [ -n "$pid" ] && kill "$pid" 2>/dev/null && wait "$pid" 2>/dev/null; return 0; }
+
+# wait_for_http URL NAME: polls until URL answers 2xx (30 s at most).
+wait_for_http() {
+  local tries=0
+  until curl -fsS -o /dev/null "$1" 2>/dev/null || node -e 'fetch(process.argv[1]).then(r=>process.exit(r.ok?0:1),()=>process.exit(1))' "$1"; do
+    tries=$((tries + 1)); [ $tries -gt 300 ] && die "$2 did not answer at $1"
+    sleep 0.1
+  done
+}

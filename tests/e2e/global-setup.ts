@@ -60,11 +60,13 @@ export async function setup(project: TestProject) {
   const env: NodeJS.ProcessEnv = { ...process.env, ...mail, ...stripe, ...storage, DB_NAME: database, NODE_ENV: "production", APP_URL: appUrl };
 
   await run("npx", ["tsx", "db/migrate.ts", "up"], env);
+  // Demo logins first, so the imported details link their authors and reviewers to real accounts.
+  await run("npx", ["tsx", "scripts/demo-accounts.ts"], env);
   await run("npx", ["tsx", "scripts/content-import.ts"], env).catch((error) => {
     throw new Error(`content import failed: ${error.message}`);
   });
 
-  const server = spawn("npx", ["react-router-serve", "./build/server/index.js"], {
+  const server = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], {
     env: { ...env, HOST: "127.0.0.1", PORT: String(appPort) },
     stdio: ["ignore", "ignore", "inherit"],
   });
