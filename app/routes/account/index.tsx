@@ -2,6 +2,7 @@ import type { Route } from "./+types/index";
 import { Link } from "react-router";
 import { requireUser, type StaffRole } from "~/auth/guards.server";
 import { listSaved } from "~/desk/saved.server";
+import { billingOverview } from "~/payments/billing.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Your account — Dryside" }];
 
@@ -17,6 +18,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       memberSince: user.createdAt.toISOString(),
     },
     saved: await listSaved(user.id),
+    billing: await billingOverview(user),
   };
 }
 
@@ -28,7 +30,7 @@ const ROLE_WORDS = {
 } as const;
 
 export default function Account({ loaderData }: Route.ComponentProps) {
-  const { profile, saved } = loaderData;
+  const { profile, saved, billing } = loaderData;
   return (
     <div className="flex flex-col gap-10">
       <header>
@@ -48,14 +50,47 @@ export default function Account({ loaderData }: Route.ComponentProps) {
           <dd>{profile.memberSince.slice(0, 10)}</dd>
         </dl>
       </section>
-      {/* Filled by the payments work: the active plan or bought sets, pack downloads, saved details and jobs. */}
       <section id="plan" aria-labelledby="plan-heading">
         <h2 id="plan-heading" className="text-xl">Plan and sets</h2>
-        <p className="mt-2 text-sm text-graphite-soft">No plan yet. Premium details and pack downloads come with a plan or a bought set.</p>
+        {billing.plan ? (
+          <p className="mt-2 text-sm" data-testid="account-plan">
+            {billing.plan.name}: {billing.plan.status.replace("_", " ")}
+            {billing.plan.renewsOrEndsAt
+              ? `, ${billing.plan.cancelAtPeriodEnd || billing.plan.status !== "active" ? "ends" : "renews"} ${billing.plan.renewsOrEndsAt.slice(0, 10)}`
+              : ""}
+            . <Link to="/account/billing">Billing and receipts</Link>
+          </p>
+        ) : (
+          <p className="mt-2 text-sm text-graphite-soft">
+            No plan. Premium details and pack downloads come with a <Link to="/pricing">plan</Link> or a bought <Link to="/sets">set</Link>.
+          </p>
+        )}
+        {billing.sets.length ? (
+          <ul className="mt-2 space-y-1 text-sm" data-testid="account-sets">
+            {billing.sets.map((set) => (
+              <li key={set.slug}>
+                <Link to={`/sets#${set.slug}`}>{set.title}</Link> <span className="text-xs text-graphite-soft">bought {set.boughtAt.slice(0, 10)}</span>
+              </li>
+            ))}
+          </ul>
+        ) : null}
       </section>
       <section id="downloads" aria-labelledby="downloads-heading">
         <h2 id="downloads-heading" className="text-xl">Downloads</h2>
-        <p className="mt-2 text-sm text-graphite-soft">Packs you can download will be listed here.</p>
+        {billing.plan?.status === "active" || billing.sets.length ? (
+          <p className="mt-2 text-sm">
+            Packs of printable sheets are on the <Link to="/sets">sets page</Link>, one download per set.
+          </p>
+        ) : (
+          <p className="mt-2 text-sm text-graphite-soft">Packs become downloadable with a plan or a bought set.</p>
+        )}
+        {billing.downloads.length ? (
+          <ul className="mt-2 space-y-1 text-xs text-graphite-soft">
+            {billing.downloads.map((download) => (
+              <li key={download.at}>{download.setTitle}, downloaded {download.at.slice(0, 16).replace("T", " ")} UTC</li>
+            ))}
+          </ul>
+        ) : null}
       </section>
       <section id="saved-details" aria-labelledby="saved-heading">
         <h2 id="saved-heading" className="text-xl">Saved details</h2>
