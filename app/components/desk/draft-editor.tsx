@@ -64,11 +64,13 @@ export function DraftEditor({ mode, values, errors, materials, sets, units, edit
   const [siteZone, setSiteZone] = useState(values.zones[0] ?? "5A");
   const [indoorRh, setIndoorRh] = useState("");
 
-  // A 400 answer brings back what was typed: reset the controlled parts to it.
-  const lastValues = useRef(values);
+  // A 400 answer brings back what was typed: reset the controlled parts to it. Compared by content,
+  // because a revalidation (after an upload, say) hands over an equal copy that must not wipe the typing.
+  const lastValues = useRef(JSON.stringify(values));
   useEffect(() => {
-    if (lastValues.current === values) return;
-    lastValues.current = values;
+    const next = JSON.stringify(values);
+    if (lastValues.current === next) return;
+    lastValues.current = next;
     setAssembly(values.assembly);
     setZones(values.zones);
     setLayers(values.layers.map((layer) => ({ ...layer, key: newLayerKey() })));

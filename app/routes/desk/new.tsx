@@ -1,4 +1,4 @@
-import { data, redirect } from "react-router";
+import { data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/new";
 import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
@@ -18,6 +18,11 @@ const EMPTY: DraftFormValues = {
   zones: [], sets: [], references: "", change_note: "", body: STARTER_BODY,
   layers: [{ ...BLANK_LAYER, role: "cladding" }, { ...BLANK_LAYER, role: "structure" }],
 };
+
+// The preview and the site check change nothing: re-running this page's loader after them would only cost a query.
+export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+  return formAction?.startsWith("/desk/api/") ? false : defaultShouldRevalidate;
+}
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, "editor");

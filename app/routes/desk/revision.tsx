@@ -1,4 +1,4 @@
-import { Link, data, redirect } from "react-router";
+import { Link, data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/revision";
 import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
@@ -15,6 +15,11 @@ import { unitsFor } from "~/preferences/units.server";
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.values.title ?? "Revision"} — Desk — Dryside` }];
 
 const STATE_WORDS = { draft: "draft", in_review: "in review", changes_requested: "changes requested", published: "published", superseded: "superseded", withdrawn: "withdrawn" } as const;
+
+// The preview and the site check change nothing: re-running this page's loader after them would only cost a query.
+export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+  return formAction?.startsWith("/desk/api/") ? false : defaultShouldRevalidate;
+}
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireRole(request, "editor");
