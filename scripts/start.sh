@@ -25,9 +25,17 @@ children=()
 cleanup() {
   trap - EXIT INT TERM
   log "stopping"
-  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  # After Ctrl-C the children got the terminal's SIGINT too: give them a moment to close by
+  # themselves, then ask, then insist, so nothing is left behind.
+  for signal in none TERM KILL; do
+    [ $signal != none ] && for pid in "${children[@]}"; do kill -s $signal "$pid" 2>/dev/null || true; done
+    for _ in $(seq 15); do
+      alive=0; for pid in "${children[@]}"; do kill -0 "$pid" 2>/dev/null && alive=1; done
+      [ $alive = 0 ] && break; sleep 0.1
+    done
+    [ $alive = 0 ] && break
+  done
   stop_pid "${MARIADB_PID:-}"
-  wait 2>/dev/null || true
 }
 trap cleanup EXIT INT TERM
 
@@ -42,12 +50,6 @@ export STRIPE_SECRET_KEY=${STRIPE_SECRET_KEY:-sk_test_standin} STRIPE_WEBHOOK_SE
 export SMTP_HOST=127.0.0.1 SMTP_PORT=$SMTP_PORT_LOCAL
 export MAIL_OUTBOX_DIR=${MAIL_OUTBOX_DIR:-.data/outbox}  # the app reads it for /admin/outbox
 
-log "migrating"
-npx tsx db/migrate.ts up
-log "importing content/"
-npx tsx scripts/content-import.ts
-npx tsx scripts/demo-accounts.ts
-
 log "starting the payments stand-in on 127.0.0.1:$PAYMENTS_PORT"
 PAYMENTS_STANDIN_PORT=$PAYMENTS_PORT PAYMENTS_WEBHOOK_URL="$APP_URL/api/payments/webhook" \
   PAYMENTS_WEBHOOK_SECRET=$STRIPE_WEBHOOK_SECRET PAYMENTS_STANDIN_STATE_FILE=.data/payments-standin.json \
@@ -56,11 +58,15 @@ children+=($!)
 log "starting the mail catcher on 127.0.0.1:$SMTP_PORT_LOCAL (messages in .data/outbox)"
 MAIL_CATCHER_PORT=$SMTP_PORT_LOCAL MAIL_OUTBOX_DIR=.data/outbox node --import tsx dev/mail-catcher/cli.ts &
 children+=($!)
-wait_for_http "http://127.0.0.1:$PAYMENTS_PORT/healthz" "the payments stand-in"
-npx tsx scripts/sync-payments-catalogue.ts
 
-log "building"
-npx react-router build >/dev/null
+log "migrating, importing content/, demo logins, payments catalogue"
+node --import tsx scripts/prepare-local.ts || die "preparing the database failed"
+
+# Rebuild only when a source changed since the last build: a second start takes seconds.
+if [ ! -f build/server/index.js ] || [ -n "$(find app public package-lock.json vite.config.ts react-router.config.ts -newer build/server/index.js -print -quit)" ]; then
+  log "building"
+  npx react-router build > .data/build.log 2>&1 || { cat .data/build.log; die "the build failed"; }
+fi
 log "serving on $APP_URL"
 HOST=127.0.0.1 PORT=$APP_PORT node node_modules/@react-router/serve/bin.js ./build/server/index.js &
 children+=($!)

@@ -7,6 +7,12 @@ const outboxDir = process.env.MAIL_OUTBOX_DIR ?? ".data/outbox";
 const catcher = await startMailCatcher({ port, outboxDir });
 console.log(`mail catcher listening on 127.0.0.1:${catcher.port}, filing messages in ${outboxDir}`);
 
+// Ctrl-C reaches us twice (the terminal's SIGINT and start.sh's SIGTERM): close once.
+let closing = false;
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
-  process.on(signal, () => void catcher.close().then(() => process.exit(0)));
+  process.on(signal, () => {
+    if (closing) return;
+    closing = true;
+    void catcher.close().finally(() => process.exit(0));
+  });
 }
