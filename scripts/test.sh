@@ -31,12 +31,13 @@ export SESSION_SECRET=test-secret-that-is-long-enough-for-signing-cookies
 export TEST_SCRATCH_DIR="$scratch"
 
 log "unit and integration tests (vitest)"
-npx vitest run --reporter=default --reporter=json --outputFile.json="$results/vitest.json" || status=1
+# Arguments narrow the run to matching test files, e.g. `npm test -- tests/e2e/desk` (the typecheck always runs).
+npx vitest run --passWithNoTests --reporter=default --reporter=json --outputFile.json="$results/vitest.json" "$@" || status=1
 
 log "building the app for browser tests"
 if npx react-router build >"$scratch/build.log" 2>&1; then
   log "browser tests (playwright-core + Debian chromium)"
-  npx vitest run --config vitest.e2e.config.ts --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || status=1
+  npx vitest run --config vitest.e2e.config.ts --passWithNoTests --reporter=default --reporter=json --outputFile.json="$results/e2e.json" "$@" || status=1
 else
   cat "$scratch/build.log"; status=1
 fi

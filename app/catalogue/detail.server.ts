@@ -4,6 +4,7 @@ import type { DetailFrontMatter, DetailLayer } from "~/content/detail-schema";
 import type { Material } from "~/envelope";
 import { renderMarkdown, markdownSection } from "~/markdown/render.server";
 import { Detail, DetailRevision, DetailSet, DetailZone, models } from "~/models";
+import { uploadsOf, type UploadRow } from "~/desk/uploads.server";
 import { materialLibrary } from "./materials.server";
 import { describeChanges } from "./revision-diff";
 import { plainText } from "./search-text";
@@ -51,6 +52,8 @@ export interface DetailView {
     layers: (DetailLayer & { materialName: string; family: string })[];
     bodyHtml: string;
     references: string[];
+    /** Drawings and photos attached to the published revision (served by /uploads/:id with the same access rule). */
+    attachments: UploadRow[];
   };
   preview?: { excerpt: string };
 }
@@ -123,6 +126,7 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
       layers: front.layers.map((layer) => ({ ...layer, materialName: materialName(library, layer.material), family: library.get(layer.material)?.family ?? "unknown" })),
       bodyHtml: renderMarkdown(revision.bodyMd),
       references: front.references,
+      attachments: await uploadsOf(revision.id),
     };
   } else {
     const why = plainText(markdownSection(revision.bodyMd, "Why it works"));

@@ -72,7 +72,7 @@ beforeAll(async () => {
 }, 120000);
 
 afterAll(async () => {
-  app?.kill("SIGTERM");
+  app?.kill("SIGKILL");
   await stopDatabase();
 });
 

@@ -90,5 +90,10 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   expect(line).toContain("reviewed by Idris Varrow");
   await page.getByTestId("detail-body").getByText("on the underside of the joists", { exact: false }).waitFor();
   expect(await page.getByTestId("revision-history").textContent()).toContain("Install sequence now says when to staple the batt supports.");
+  // The drawing uploaded with the revision is shown with it, and loads.
+  const drawing = page.getByTestId("attachments").locator("img").first();
+  await drawing.waitFor({ state: "attached" });
+  await drawing.scrollIntoViewIfNeeded();
+  await page.waitForFunction(() => [...document.querySelectorAll('[data-testid="attachments"] img')].every((img) => (img as HTMLImageElement).naturalWidth > 0));
   await screenshot(page, "desk-published");
 });

@@ -76,10 +76,27 @@ export async function setup(project: TestProject) {
   project.provide("outboxDir", mailCatcher.outboxDir);
 }
 
+/** Resolves when the process has exited, sending SIGKILL if SIGTERM was not enough within 2 s. */
+function stop(child: ChildProcess): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => {
+    const force = setTimeout(() => child.kill("SIGKILL"), 2000);
+    child.once("exit", () => {
+      clearTimeout(force);
+      resolve();
+    });
+    child.kill("SIGTERM");
+  });
+}
+
+const withinSeconds = <T>(promise: Promise<T> | undefined, seconds: number) =>
+  Promise.race([promise, new Promise((resolve) => setTimeout(resolve, seconds * 1000))]);
+
 export async function teardown() {
-  for (const child of children) child.kill("SIGTERM");
-  await mailCatcher?.close();
-  await payments?.close();
+  // The app server first: its pool's connections must be gone before the database is dropped.
+  await Promise.all(children.map(stop));
+  await withinSeconds(mailCatcher?.close(), 3);
+  await withinSeconds(payments?.close(), 3);
   await dropDatabase(database);
 }
 

@@ -108,6 +108,25 @@ export default function DetailPage({ loaderData }: Route.ComponentProps) {
             <SiteCheckPanel slug={detail.slug} units={units} values={siteValues} initial={initialCheck} claimedZones={detail.zones} />
           </div>
           <section className="prose prose-stone max-w-none prose-headings:font-serif" data-testid="detail-body" dangerouslySetInnerHTML={{ __html: detail.full.bodyHtml }} />
+          {detail.full.attachments.length ? (
+            <section aria-labelledby="attachments-title" data-testid="attachments">
+              <h2 id="attachments-title" className="text-xl">Drawings and photos</h2>
+              <ul className="mt-3 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+                {detail.full.attachments.map((file) => (
+                  <li key={file.id} className="rounded border border-rule bg-sheet p-2">
+                    {file.contentType === "application/pdf" ? (
+                      <a href={file.href}>{file.name} (PDF, {Math.ceil(file.byteSize / 1024)} KB)</a>
+                    ) : (
+                      <a href={file.href}>
+                        <img src={file.href} alt={file.caption ?? file.name} loading="lazy" className="max-h-64 w-full object-contain" />
+                      </a>
+                    )}
+                    {file.caption ? <p className="mt-1 text-xs text-graphite-soft">{file.caption}</p> : null}
+                  </li>
+                ))}
+              </ul>
+            </section>
+          ) : null}
           <section aria-labelledby="references-title">
             <h2 id="references-title" className="text-xl">References</h2>
             <ul className="mt-2 list-disc pl-6 text-sm">
