@@ -1,5 +1,5 @@
 // `npm run content:import [folder]`: validates content/ and writes it to MariaDB in one transaction.
-import { formatProblem } from "../app/content/content-error.ts";
+import { importSummaryLines, rejectionLines } from "../app/catalogue/import-report.ts";
 import { ImportRejected, importContent } from "../app/catalogue/import.server.ts";
 import { db } from "../app/db/sequelize.server.ts";
 
@@ -16,16 +16,11 @@ try {
       if (done === total) process.stderr.write("\n");
     },
   });
-  const { materials, sets, details } = summary;
-  console.log(
-    `imported in ${summary.ms} ms: materials ${materials.created} new, ${materials.updated} updated, ${materials.unchanged} unchanged; ` +
-      `sets ${sets.created} new, ${sets.updated} updated, ${sets.unchanged} unchanged; details ${details.created} new, ${details.revised} revised, ${details.unchanged} unchanged`,
-  );
-  for (const kept of details.kept) console.log(`  kept ${kept.slug}: ${kept.reason}`);
+  for (const line of importSummaryLines(summary)) console.log(line);
 } catch (error) {
   if (error instanceof ImportRejected) {
     console.error(error.message);
-    for (const problem of error.problems) console.error(`  ${formatProblem(problem)}`);
+    for (const line of rejectionLines(error.problems)) console.error(line);
     process.exitCode = 1;
   } else {
     throw error;

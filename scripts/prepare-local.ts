@@ -1,7 +1,7 @@
 // One process for everything `npm start` does to the database before serving (each tsx start costs
 // seconds on a busy machine): migrate, import content/, create the demo logins, and find or create
 // the plan and set prices in the payments service.
-import { formatProblem } from "../app/content/content-error.ts";
+import { importSummaryLines, rejectionLines } from "../app/catalogue/import-report.ts";
 import { ImportRejected, importContent } from "../app/catalogue/import.server.ts";
 import { DEMO_PASSWORD, demoAccountsAllowed, ensureDemoAccounts } from "../app/auth/demo-accounts.server.ts";
 import { db } from "../app/db/sequelize.server.ts";
@@ -23,13 +23,7 @@ try {
   const applied = await createMigrator(db()).up();
   console.log(applied.length ? `migrated: ${applied.map((m) => m.name).join(", ")}` : "schema up to date");
 
-  const summary = await importContent("content");
-  const { materials, sets, details } = summary;
-  console.log(
-    `content imported in ${summary.ms} ms: details ${details.created} new, ${details.revised} revised, ${details.unchanged} unchanged; ` +
-      `materials ${materials.created + materials.updated} written; sets ${sets.created + sets.updated} written`,
-  );
-  for (const kept of details.kept) console.log(`  kept ${kept.slug}: ${kept.reason}`);
+  for (const line of importSummaryLines(await importContent("content"))) console.log(line);
 
   if (demoAccountsAllowed(process.env.APP_URL ?? "http://127.0.0.1:3000", process.env.DEMO_ACCOUNTS)) {
     const created = await ensureDemoAccounts();
@@ -41,7 +35,7 @@ try {
 } catch (error) {
   if (error instanceof ImportRejected) {
     console.error(error.message);
-    for (const problem of error.problems) console.error(`  ${formatProblem(problem)}`);
+    for (const line of rejectionLines(error.problems)) console.error(line);
     process.exitCode = 1;
   } else {
     throw error;

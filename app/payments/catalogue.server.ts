@@ -139,7 +139,7 @@ export async function ensurePrice(spec: PriceSpec): Promise<{ price: Stripe.Pric
   return { price, created: true };
 }
 
-/** Every plan and set price, created or found: run at start-up by scripts/sync-payments-catalogue.ts. */
+/** Every plan and set price, created or found: run at start-up by scripts/prepare-local.ts. */
 export async function syncPaymentsCatalogue(): Promise<{ lookupKey: string; priceId: string; created: boolean }[]> {
   const specs = [...PLANS.map(planPriceSpec), ...(await setOffers()).map(setPriceSpec)];
   const results = [];

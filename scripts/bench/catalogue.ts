@@ -1,24 +1,15 @@
 // Catalogue benchmark: seeds 10,000 details into the database named by DB_* (a throwaway one from
 // scripts/bench.sh), serves the built app, and measures search routes against a trivial route.
 import { spawn } from "node:child_process";
-import { createServer } from "node:net";
 import autocannon from "autocannon";
 import { createSequelize } from "../../app/db/sequelize.server.ts";
 import { measureFirstLoad } from "./first-load.ts";
 import { seedLargeCatalogue } from "./seed-catalogue.ts";
+import { freePort } from "../lib/free-port.ts";
 
 const TARGET = Number(process.env.BENCH_DETAILS ?? 10000);
 const DURATION = Number(process.env.BENCH_SECONDS ?? 8);
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => resolve(typeof address === "object" && address ? address.port : 0));
-    });
-  });
-}
 
 const sequelize = createSequelize({
   host: "127.0.0.1",

@@ -1,7 +1,6 @@
-import { readdirSync, readFileSync } from "node:fs";
-import { join } from "node:path";
-import { afterAll, beforeAll, expect, inject, test } from "vitest";
+import { afterAll, beforeAll, expect, test } from "vitest";
 import type { BrowserContext } from "playwright-core";
+import { waitForMail } from "./caught-mail";
 import { baseUrl, openBrowser, screenshot } from "./browser";
 
 let browser: BrowserContext;
@@ -12,26 +11,6 @@ afterAll(async () => {
   await browser.close();
 });
 
-interface Caught {
-  to: string[];
-  subject: string;
-  text: string;
-}
-
-/** Polls the mail catcher's outbox (files written by dev/mail-catcher) until a message to this address arrives. */
-async function waitForMail(to: string, timeoutMs = 15000): Promise<Caught> {
-  const dir = inject("outboxDir");
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const found = readdirSync(dir)
-      .filter((name) => name.endsWith(".json"))
-      .map((name) => JSON.parse(readFileSync(join(dir, name), "utf8")) as Caught)
-      .find((message) => message.to.includes(to));
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
-}
 
 test("sign up, confirm the e-mail from the caught mail, sign in and see the account page", async () => {
   const page = await browser.newPage();

@@ -2,9 +2,9 @@
 // when the database returns: the app server is never restarted in this test.
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync } from "node:fs";
-import { createServer } from "node:net";
 import { join } from "node:path";
 import { afterAll, beforeAll, expect, test } from "vitest";
+import { freePort } from "../../scripts/lib/free-port.ts";
 
 const scratch = mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? "/tmp", "outage-"));
 const datadir = join(scratch, "db");
@@ -13,15 +13,6 @@ let appUrl = "";
 let mariadb: ChildProcess | undefined;
 let app: ChildProcess | undefined;
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => resolve(typeof address === "object" && address ? address.port : 0));
-    });
-  });
-}
 
 function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env): Promise<void> {
   return new Promise((resolve, reject) => {

@@ -1,5 +1,4 @@
 import { spawn, type ChildProcess } from "node:child_process";
-import { createServer } from "node:net";
 import type { TestProject } from "vitest/node";
 import { createEmptyDatabase, dropDatabase } from "../helpers/database";
 import { mkdtempSync } from "node:fs";
@@ -7,16 +6,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { startMailCatcher, type MailCatcher } from "../../dev/mail-catcher/server";
 import { startPaymentsStandin, type PaymentsStandin } from "../../dev/payments-standin/server";
+import { freePort } from "../../scripts/lib/free-port.ts";
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
-}
 
 async function waitFor(url: string, child: ChildProcess, timeoutMs = 30000): Promise<void> {
   const deadline = Date.now() + timeoutMs;

@@ -1,15 +1,16 @@
 // The paid path in a real browser: a member buys one set on the payments stand-in's hosted page, comes
 // back, sees the set as theirs and downloads its pack; the pack's PDFs are opened with poppler-utils.
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, readFileSync } from "node:fs";
+import { mkdtempSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { afterAll, beforeAll, expect, inject, test } from "vitest";
+import { afterAll, beforeAll, expect, test } from "vitest";
 import type { BrowserContext } from "playwright-core";
 import { loadContent } from "~/content/load-content";
 import { buildMaterialLibrary, runSiteCheck } from "~/envelope";
 import { formatR } from "~/envelope/units";
 import { pdfText } from "~/packs/sheet-pdf.server";
+import { waitForMail } from "./caught-mail";
 import { baseUrl, openBrowser, screenshot } from "./browser";
 
 const SET = "roofs-and-attics";
@@ -23,19 +24,6 @@ afterAll(async () => {
   await browser.close();
 });
 
-async function waitForMail(to: string, subject: RegExp, timeoutMs = 15000): Promise<{ subject: string; text: string }> {
-  const dir = inject("outboxDir");
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const found = readdirSync(dir)
-      .filter((name) => name.endsWith(".json"))
-      .map((name) => JSON.parse(readFileSync(join(dir, name), "utf8")) as { to: string[]; subject: string; text: string })
-      .find((message) => message.to.includes(to) && subject.test(message.subject));
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
-}
 
 /** What each sheet must say, from the content files and the engine itself (the page and API show the same). */
 function expectedSheets(): Map<string, { title: string; effectiveR: string }> {
