@@ -1,7 +1,7 @@
 // Temperature and dew-point chart through the layers for one site-check case, as drawing
 // primitives (the same shapes the page and the PDF sheet draw). Positions are true thickness;
 // the outdoor and indoor air sit in narrow bands at each end so the air-film drops show.
-import { profileChartSeries } from "~/envelope/profile";
+import { profileChartSeries } from "~/envelope/profile-series";
 import { dewPointFromVapourPressure } from "~/envelope/psychrometrics";
 import type { ProfileCase } from "~/envelope/types";
 import { cToF, type UnitSystem } from "~/envelope/units";

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/details";
-import { parseCatalogueQuery } from "~/catalogue/query";
+import { parseCatalogueQuery } from "~/catalogue/query-parse";
 import { searchCatalogue } from "~/catalogue/search.server";
 import { API_CAUTION, jsonError } from "~/http/json";
 

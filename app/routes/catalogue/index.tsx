@@ -4,7 +4,8 @@ import { DetailCard } from "~/components/detail-card";
 import { FacetRail } from "~/components/facet-rail";
 import { SearchBox } from "~/components/search-box";
 import { UnitsToggle } from "~/components/units-toggle";
-import { parseCatalogueQuery, SORTS, toSearchParams, type CatalogueQuery } from "~/catalogue/query";
+import { SORTS, toSearchParams, type CatalogueQuery } from "~/catalogue/query";
+import { parseCatalogueQuery } from "~/catalogue/query-parse";
 import { searchCatalogue } from "~/catalogue/search.server";
 import { unitsFor } from "~/preferences/units.server";
 

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { expect, test } from "vitest";
-import { catalogueQuerySchema, FILTER_KEYS, type CatalogueQuery, type FilterKey } from "~/catalogue/query";
+import { FILTER_KEYS, type CatalogueQuery, type FilterKey } from "~/catalogue/query";
+import { catalogueQuerySchema } from "~/catalogue/query-parse";
 import { countFacets } from "~/catalogue/search.server";
 import { toBooleanQuery } from "~/catalogue/fulltext";
 import { regimeMask, zoneMask } from "~/catalogue/zone-mask";
