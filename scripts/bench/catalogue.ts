@@ -40,14 +40,16 @@ for (let i = 0; i < 200; i++) {
 const ZONES = ["2A", "3A", "3B", "4A", "4C", "5A", "5B", "6A", "6B", "7", "8"];
 const KINDS = ["above-grade-wall", "roof", "basement-wall", "slab", "crawlspace-wall", "rim-joist"];
 const WORDS = ["foam", "crawlspace", "exterior", "cellulose", "drainage", "polyiso", "mineral wool", "spray foam"];
+const SORTS = ["revised", "title", "r-value"];
+// Each request a combination not asked before in this run (two zones, a kind, a sort, a page), so
+// these rows measure the database path, not the result cache.
 let n = 0;
 const varied = (withText: boolean) => () => {
   n++;
-  const zone = ZONES[n % ZONES.length];
-  const kind = KINDS[Math.floor(n / ZONES.length) % KINDS.length];
-  const page = 1 + (Math.floor(n / 66) % 3);
-  const text = withText ? `&q=${encodeURIComponent(WORDS[n % WORDS.length])}` : "";
-  return `/api/details?zone=${zone}&assembly=${kind}&page=${page}${text}`;
+  const pick = <T>(list: T[], salt: number) => list[Math.floor(n / salt) % list.length];
+  const zones = `zone=${pick(ZONES, 1)}&zone=${pick(ZONES, 11)}`;
+  const text = withText ? `&q=${encodeURIComponent(pick(WORDS, 121))}` : "";
+  return `/api/details?${zones}&assembly=${pick(KINDS, 968)}&sort=${pick(SORTS, 5808)}&page=${1 + (n % 3)}${text}`;
 };
 
 const targets: [string, string | (() => string)][] = [
