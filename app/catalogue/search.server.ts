@@ -108,6 +108,13 @@ function valuesOf(row: FacetCombination, key: FilterKey): string[] {
  * Counts per facet value under all the other active filters (so a facet shows what choosing each of
  * its values would give), and the total under all of them, from the grouped combinations.
  */
+/** A predicate for "this combination passes every active filter of the query". */
+export function acceptsAll(query: CatalogueQuery): (row: FacetCombination) => boolean {
+  const active = FILTER_KEYS.filter((key) => query[key].length > 0);
+  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<Record<FilterKey, Set<string>>>;
+  return (row) => active.every((key) => valuesOf(row, key).some((value) => selected[key]!.has(value)));
+}
+
 export function countFacets(combinations: FacetCombination[], query: CatalogueQuery): { total: number; facets: Record<FilterKey, FacetCount[]> } {
   const active = FILTER_KEYS.filter((key) => query[key].length > 0);
   const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<Record<FilterKey, Set<string>>>;
@@ -133,14 +140,15 @@ export function countFacets(combinations: FacetCombination[], query: CatalogueQu
   return { total, facets };
 }
 
-const ORDER: Record<Sort, string> = {
-  relevance: "score DESC, d.published_at DESC, d.id",
+// Facet-only searches sort in SQL (relevance needs text, so it falls back to most recently revised).
+const ORDER: Record<Exclude<Sort, "relevance">, string> = {
   title: "d.title ASC, d.id",
   revised: "d.published_at DESC, d.id DESC",
   "r-value": "d.r_value_rsi DESC, d.id",
 };
 
 interface CardRow {
+  id: number;
   slug: string;
   title: string;
   summary: string;
@@ -169,47 +177,104 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
   const key = JSON.stringify(query);
   const cached = cache.get(key, version);
   if (cached) return { ...cached, ms: Math.round(performance.now() - started) };
-  const result = await searchUncached(query);
+  const result = await searchUncached(query, version);
   cache.set(key, version, result);
   return { ...result, ms: Math.round(performance.now() - started) };
 }
 
-async function searchUncached(query: CatalogueQuery): Promise<Omit<CatalogueResult, "ms">> {
-  const sequelize = models();
+async function searchUncached(query: CatalogueQuery, version: string): Promise<Omit<CatalogueResult, "ms">> {
   const booleanQuery = toBooleanQuery(query.q);
-  const filters = buildFilters(query);
-  const replacements: Record<string, unknown> = { booleanQuery };
-  for (const key of FILTER_KEYS) if (query[key].length) replacements[key] = query[key];
-  const sort = effectiveSort(query);
-  const orderSql = sort === "relevance" && !booleanQuery ? ORDER.revised : ORDER[sort];
-  const scope = booleanQuery ? `${LIVE} AND ${MATCH}` : LIVE;
-  const offset = (query.page - 1) * PER_PAGE;
+  return booleanQuery ? searchWithText(query, booleanQuery, version) : searchFacetsOnly(query);
+}
 
-  const grouping = "d.tier, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.zone_mask, d.regime_mask";
+const CARD_COLUMNS = `d.id, d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
+  d.r_value_rsi, d.zones_label, d.layer_strip, d.published_at`;
+const GROUPING = "d.tier, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.zone_mask, d.regime_mask";
+
+function replacementsFor(query: CatalogueQuery): Record<string, unknown> {
+  const replacements: Record<string, unknown> = {};
+  for (const key of FILTER_KEYS) if (query[key].length) replacements[key] = query[key];
+  return replacements;
+}
+
+function page(query: CatalogueQuery, total: number, sort: Sort, cards: DetailCard[], facets: Record<FilterKey, FacetCount[]>): Omit<CatalogueResult, "ms"> {
+  return { total, page: query.page, pages: Math.max(1, Math.ceil(total / PER_PAGE)), sort, cards, facets };
+}
+
+/** Facets only: one ordered walk of the facet index for the counts, one indexed query for the page. */
+async function searchFacetsOnly(query: CatalogueQuery): Promise<Omit<CatalogueResult, "ms">> {
+  const sequelize = models();
+  const filters = buildFilters(query);
+  const replacements = replacementsFor(query);
+  const sort = effectiveSort(query);
+  const orderSql = sort === "relevance" ? ORDER.revised : ORDER[sort];
   const [rows, combinations] = await Promise.all([
     sequelize.query<CardRow>(
-      `SELECT d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
-              d.r_value_rsi, d.zones_label, d.layer_strip, d.published_at, ${booleanQuery ? MATCH : "0"} AS score
-         FROM details d WHERE ${scope} AND ${conjunction(filters)} ORDER BY ${orderSql} LIMIT ${PER_PAGE} OFFSET ${offset}`,
+      `SELECT ${CARD_COLUMNS} FROM details d WHERE ${LIVE} AND ${conjunction(filters)}
+        ORDER BY ${orderSql} LIMIT ${PER_PAGE} OFFSET ${(query.page - 1) * PER_PAGE}`,
       { type: QueryTypes.SELECT, replacements },
     ),
-    // Without text the facet index is walked in its own order (no temporary table); with text the
-    // FULLTEXT index picks the rows first.
     sequelize.query<FacetCombination>(
-      `SELECT ${grouping}, COUNT(*) AS n FROM details d ${booleanQuery ? "" : "FORCE INDEX (details_facets)"} WHERE ${scope} GROUP BY ${grouping}`,
-      { type: QueryTypes.SELECT, replacements },
+      `SELECT ${GROUPING}, COUNT(*) AS n FROM details d FORCE INDEX (details_facets) WHERE ${LIVE} GROUP BY ${GROUPING}`,
+      { type: QueryTypes.SELECT },
     ),
   ]);
   const { total, facets } = countFacets(combinations, query);
+  return page(query, total, sort, rows.map(toCard), facets);
+}
 
-  return {
-    total,
-    page: query.page,
-    pages: Math.max(1, Math.ceil(total / PER_PAGE)),
-    sort,
-    cards: rows.map(toCard),
-    facets,
-  };
+/** One detail that matched a text search, with what facets and sorting need. */
+interface TextMatch extends FacetCombination {
+  id: number;
+  score: number;
+  title: string;
+  published_ms: number;
+  rsi: number;
+}
+
+// The FULLTEXT match is the costly part of a text search, and people refine facets and pages after
+// typing: the matches for each text are kept (per catalogue version) and filtered, counted, sorted
+// and paged in memory.
+const textMatches = new VersionedCache<TextMatch[]>(50);
+
+async function matchesFor(booleanQuery: string, version: string): Promise<TextMatch[]> {
+  const cached = textMatches.get(booleanQuery, version);
+  if (cached) return cached;
+  const rows = await models().query<Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }>(
+    `SELECT d.id, ${MATCH} AS score, d.title, d.published_at, d.r_value_rsi, ${GROUPING} FROM details d WHERE ${LIVE} AND ${MATCH}`,
+    { type: QueryTypes.SELECT, replacements: { booleanQuery } },
+  );
+  const matches = rows.map((row) => ({
+    ...row,
+    n: 1,
+    score: Number(row.score),
+    published_ms: row.published_at ? new Date(row.published_at).getTime() : 0,
+    rsi: row.r_value_rsi === null ? -1 : Number(row.r_value_rsi),
+  }));
+  textMatches.set(booleanQuery, version, matches);
+  return matches;
+}
+
+const COMPARE: Record<Sort, (a: TextMatch, b: TextMatch) => number> = {
+  relevance: (a, b) => b.score - a.score || b.published_ms - a.published_ms || a.id - b.id,
+  title: (a, b) => a.title.localeCompare(b.title, "en") || a.id - b.id,
+  revised: (a, b) => b.published_ms - a.published_ms || b.id - a.id,
+  "r-value": (a, b) => b.rsi - a.rsi || a.id - b.id,
+};
+
+async function searchWithText(query: CatalogueQuery, booleanQuery: string, version: string): Promise<Omit<CatalogueResult, "ms">> {
+  const matches = await matchesFor(booleanQuery, version);
+  const { total, facets } = countFacets(matches, query);
+  const sort = effectiveSort(query);
+  const start = (query.page - 1) * PER_PAGE;
+  const pageIds = matches.filter(acceptsAll(query)).sort(COMPARE[sort]).slice(start, start + PER_PAGE).map((match) => match.id);
+  if (pageIds.length === 0) return page(query, total, sort, [], facets);
+  const rows = await models().query<CardRow>(`SELECT ${CARD_COLUMNS} FROM details d WHERE d.id IN (:ids)`, {
+    type: QueryTypes.SELECT,
+    replacements: { ids: pageIds },
+  });
+  const byId = new Map(rows.map((row) => [row.id, row]));
+  return page(query, total, sort, pageIds.flatMap((id) => (byId.has(id) ? [toCard(byId.get(id)!)] : [])), facets);
 }
 
 function toCard(row: CardRow): DetailCard {

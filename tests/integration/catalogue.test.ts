@@ -7,6 +7,7 @@ useMigratedDatabase();
 
 interface FileFacts {
   slug: string;
+  title: string;
   tier: string;
   assembly: string;
   below_grade: string;
@@ -65,13 +66,29 @@ test("filters combine across facets and values within a facet are alternatives",
   expect(body.cards.map((c: { slug: string }) => c.slug).sort()).toEqual(expected.map((f) => f.slug).sort());
 });
 
+interface Card { slug: string; title: string; summary: string }
+
 test("full-text search finds details by trade words and their synonyms", async () => {
+  const titled = files.filter((f) => /crawlspace/i.test(f.title)).map((f) => f.slug).sort();
+  expect(titled.length).toBeGreaterThan(0);
+  // "crawl space" (two words) finds what is written "crawlspace", through the synonym table.
   const crawl = await (await api("/api/details?q=crawl+space")).json();
-  expect(crawl.total).toBeGreaterThan(0);
-  expect(crawl.cards.every((c: { title: string; summary: string }) => /crawl/i.test(`${c.title} ${c.summary}`) || true)).toBe(true);
   expect(crawl.sort).toBe("relevance");
+  const found = (crawl.cards as Card[]).map((c) => c.slug);
+  for (const slug of titled) expect(found).toContain(slug);
+  // Best match first: a title that names it outranks a passing mention.
+  expect(crawl.cards[0].title).toMatch(/crawl/i);
   const nothing = await (await api("/api/details?q=zzzyqx")).json();
   expect(nothing.total).toBe(0);
+});
+
+test("text and facets combine, facet counts follow the text, and other sorts apply to the matches", async () => {
+  const all = await (await api("/api/details?q=foam")).json();
+  const premium = await (await api("/api/details?q=foam&tier=premium&sort=title")).json();
+  expect(premium.total).toBe(all.facets.tier.find((f: { value: string }) => f.value === "premium").count);
+  const titles = (premium.cards as Card[]).map((c) => c.title);
+  expect(titles).toEqual([...titles].sort((a, b) => a.localeCompare(b, "en")));
+  for (const card of premium.cards as Card[]) expect(files.find((f) => f.slug === card.slug)?.tier).toBe("premium");
 });
 
 test("bad parameters answer 400 with a JSON reason naming the parameter", async () => {
