@@ -86,6 +86,8 @@ interface FacetCombination {
   zone_mask: number;
   regime_mask: number;
   n: number | bigint;
+  /** Each facet's values, computed once when a combination is kept in a cache. */
+  values?: Record<FilterKey, string[]>;
 }
 
 const ROW_FIELD: Record<Exclude<FilterKey, "zone" | "regime">, keyof FacetCombination> = {
@@ -99,6 +101,7 @@ const ROW_FIELD: Record<Exclude<FilterKey, "zone" | "regime">, keyof FacetCombin
 
 /** The values of one facet a combination carries (zones and regimes can be several). */
 function valuesOf(row: FacetCombination, key: FilterKey): string[] {
+  if (row.values) return row.values[key];
   if (key === "zone") return CLIMATE_ZONE_IDS.filter((zone) => (row.zone_mask & zoneBit(zone)) !== 0);
   if (key === "regime") return REGIMES.filter((regime) => (row.regime_mask & regimeBit(regime)) !== 0);
   return [String(row[ROW_FIELD[key]])];
@@ -108,6 +111,11 @@ function valuesOf(row: FacetCombination, key: FilterKey): string[] {
  * Counts per facet value under all the other active filters (so a facet shows what choosing each of
  * its values would give), and the total under all of them, from the grouped combinations.
  */
+function withValues<T extends FacetCombination>(row: T): T {
+  const values = Object.fromEntries(FILTER_KEYS.map((key) => [key, valuesOf(row, key)])) as Record<FilterKey, string[]>;
+  return { ...row, values };
+}
+
 /** A predicate for "this combination passes every active filter of the query". */
 export function acceptsAll(query: CatalogueQuery): (row: FacetCombination) => boolean {
   const active = FILTER_KEYS.filter((key) => query[key].length > 0);
@@ -184,7 +192,7 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
 
 async function searchUncached(query: CatalogueQuery, version: string): Promise<Omit<CatalogueResult, "ms">> {
   const booleanQuery = toBooleanQuery(query.q);
-  return booleanQuery ? searchWithText(query, booleanQuery, version) : searchFacetsOnly(query);
+  return booleanQuery ? searchWithText(query, booleanQuery, version) : searchFacetsOnly(query, version);
 }
 
 const CARD_COLUMNS = `d.id, d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
@@ -202,7 +210,23 @@ function page(query: CatalogueQuery, total: number, sort: Sort, cards: DetailCar
 }
 
 /** Facets only: one ordered walk of the facet index for the counts, one indexed query for the page. */
-async function searchFacetsOnly(query: CatalogueQuery): Promise<Omit<CatalogueResult, "ms">> {
+// The combinations do not depend on the filters, so one walk of the facet index serves every
+// facet-only search until the catalogue changes.
+const combinationsCache = new VersionedCache<FacetCombination[]>(1);
+
+async function facetCombinations(version: string): Promise<FacetCombination[]> {
+  const cached = combinationsCache.get("all", version);
+  if (cached) return cached;
+  const rows = await models().query<FacetCombination>(
+    `SELECT ${GROUPING}, COUNT(*) AS n FROM details d FORCE INDEX (details_facets) WHERE ${LIVE} GROUP BY ${GROUPING}`,
+    { type: QueryTypes.SELECT },
+  );
+  const combinations = rows.map(withValues);
+  combinationsCache.set("all", version, combinations);
+  return combinations;
+}
+
+async function searchFacetsOnly(query: CatalogueQuery, version: string): Promise<Omit<CatalogueResult, "ms">> {
   const sequelize = models();
   const filters = buildFilters(query);
   const replacements = replacementsFor(query);
@@ -214,10 +238,7 @@ async function searchFacetsOnly(query: CatalogueQuery): Promise<Omit<CatalogueRe
         ORDER BY ${orderSql} LIMIT ${PER_PAGE} OFFSET ${(query.page - 1) * PER_PAGE}`,
       { type: QueryTypes.SELECT, replacements },
     ),
-    sequelize.query<FacetCombination>(
-      `SELECT ${GROUPING}, COUNT(*) AS n FROM details d FORCE INDEX (details_facets) WHERE ${LIVE} GROUP BY ${GROUPING}`,
-      { type: QueryTypes.SELECT },
-    ),
+    facetCombinations(version),
   ]);
   const { total, facets } = countFacets(combinations, query);
   return page(query, total, sort, rows.map(toCard), facets);
@@ -235,24 +256,33 @@ interface TextMatch extends FacetCombination {
 // The FULLTEXT match is the costly part of a text search, and people refine facets and pages after
 // typing: the matches for each text are kept (per catalogue version) and filtered, counted, sorted
 // and paged in memory.
-const textMatches = new VersionedCache<TextMatch[]>(50);
+const textMatches = new VersionedCache<TextMatchSet>(50);
 
-async function matchesFor(booleanQuery: string, version: string): Promise<TextMatch[]> {
+interface TextMatchSet {
+  matches: TextMatch[];
+  /** The matches in each sort order, sorted on first use. */
+  sorted: Partial<Record<Sort, TextMatch[]>>;
+}
+
+async function matchesFor(booleanQuery: string, version: string): Promise<TextMatchSet> {
   const cached = textMatches.get(booleanQuery, version);
   if (cached) return cached;
   const rows = await models().query<Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }>(
     `SELECT d.id, ${MATCH} AS score, d.title, d.published_at, d.r_value_rsi, ${GROUPING} FROM details d WHERE ${LIVE} AND ${MATCH}`,
     { type: QueryTypes.SELECT, replacements: { booleanQuery } },
   );
-  const matches = rows.map((row) => ({
-    ...row,
-    n: 1,
-    score: Number(row.score),
-    published_ms: row.published_at ? new Date(row.published_at).getTime() : 0,
-    rsi: row.r_value_rsi === null ? -1 : Number(row.r_value_rsi),
-  }));
-  textMatches.set(booleanQuery, version, matches);
-  return matches;
+  const matches = rows.map((row) =>
+    withValues({
+      ...row,
+      n: 1,
+      score: Number(row.score),
+      published_ms: row.published_at ? new Date(row.published_at).getTime() : 0,
+      rsi: row.r_value_rsi === null ? -1 : Number(row.r_value_rsi),
+    }),
+  );
+  const set = { matches, sorted: {} };
+  textMatches.set(booleanQuery, version, set);
+  return set;
 }
 
 const COMPARE: Record<Sort, (a: TextMatch, b: TextMatch) => number> = {
@@ -263,11 +293,19 @@ const COMPARE: Record<Sort, (a: TextMatch, b: TextMatch) => number> = {
 };
 
 async function searchWithText(query: CatalogueQuery, booleanQuery: string, version: string): Promise<Omit<CatalogueResult, "ms">> {
-  const matches = await matchesFor(booleanQuery, version);
-  const { total, facets } = countFacets(matches, query);
+  const set = await matchesFor(booleanQuery, version);
+  const { total, facets } = countFacets(set.matches, query);
   const sort = effectiveSort(query);
+  const ordered = (set.sorted[sort] ??= [...set.matches].sort(COMPARE[sort]));
   const start = (query.page - 1) * PER_PAGE;
-  const pageIds = matches.filter(acceptsAll(query)).sort(COMPARE[sort]).slice(start, start + PER_PAGE).map((match) => match.id);
+  const accepts = acceptsAll(query);
+  const pageIds: number[] = [];
+  let seen = 0;
+  for (const match of ordered) {
+    if (!accepts(match)) continue;
+    if (seen++ >= start) pageIds.push(match.id);
+    if (pageIds.length === PER_PAGE) break;
+  }
   if (pageIds.length === 0) return page(query, total, sort, [], facets);
   const rows = await models().query<CardRow>(`SELECT ${CARD_COLUMNS} FROM details d WHERE d.id IN (:ids)`, {
     type: QueryTypes.SELECT,
