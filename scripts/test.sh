@@ -8,6 +8,7 @@ source scripts/lib/common.sh
 ensure_mariadb_installed
 ensure_node_modules
 ensure_chromium_installed
+ensure_test_tools
 
 scratch=$(mktemp -d "${TMPDIR_FOR_TESTS:-/dev/shm}/dryside-test.XXXXXX" 2>/dev/null || mktemp -d)
 results="$scratch/results"; mkdir -p "$results" test-results

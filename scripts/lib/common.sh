@@ -27,6 +27,17 @@ ensure_chromium_installed() {
   fi
 }
 
+# Command-line tools the tests read PDFs and packs with (Debian's poppler-utils and unzip).
+ensure_test_tools() {
+  local missing=()
+  command -v pdfinfo >/dev/null 2>&1 || missing+=(poppler-utils)
+  command -v unzip >/dev/null 2>&1 || missing+=(unzip)
+  if [ ${#missing[@]} -gt 0 ]; then
+    log "installing ${missing[*]} for the tests (first run only)"
+    apt_install "${missing[@]}"
+  fi
+}
+
 # npm ci when node_modules is missing or older than the lock file.
 ensure_node_modules() {
   if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
