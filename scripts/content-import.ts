@@ -1,13 +1,12 @@
 // `npm run content:import [folder]`: validates content/ and writes it to MariaDB in one transaction.
-import { importSummaryLines, rejectionLines } from "../app/catalogue/import-report.ts";
-import { ImportRejected, importContent } from "../app/catalogue/import.server.ts";
+import { importAndReport } from "../app/catalogue/import-report.server.ts";
 import { db } from "../app/db/sequelize.server.ts";
 
 const root = process.argv[2] ?? "content";
 const interactive = process.stderr.isTTY;
 
 try {
-  const summary = await importContent(root, {
+  const ok = await importAndReport(root, {
     onProgress(done, total, label) {
       if (!interactive) return;
       const width = 30;
@@ -16,15 +15,7 @@ try {
       if (done === total) process.stderr.write("\n");
     },
   });
-  for (const line of importSummaryLines(summary)) console.log(line);
-} catch (error) {
-  if (error instanceof ImportRejected) {
-    console.error(error.message);
-    for (const line of rejectionLines(error.problems)) console.error(line);
-    process.exitCode = 1;
-  } else {
-    throw error;
-  }
+  if (!ok) process.exitCode = 1;
 } finally {
   await db().close();
 }

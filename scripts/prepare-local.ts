@@ -1,8 +1,7 @@
 // One process for everything `npm start` does to the database before serving (each tsx start costs
 // seconds on a busy machine): migrate, import content/, create the demo logins, and find or create
 // the plan and set prices in the payments service.
-import { importSummaryLines, rejectionLines } from "../app/catalogue/import-report.ts";
-import { ImportRejected, importContent } from "../app/catalogue/import.server.ts";
+import { importAndReport } from "../app/catalogue/import-report.server.ts";
 import { DEMO_PASSWORD, demoAccountsAllowed, ensureDemoAccounts } from "../app/auth/demo-accounts.server.ts";
 import { db } from "../app/db/sequelize.server.ts";
 import { syncPaymentsCatalogue } from "../app/payments/catalogue.server.ts";
@@ -23,7 +22,7 @@ try {
   const applied = await createMigrator(db()).up();
   console.log(applied.length ? `migrated: ${applied.map((m) => m.name).join(", ")}` : "schema up to date");
 
-  for (const line of importSummaryLines(await importContent("content"))) console.log(line);
+  if (!(await importAndReport("content"))) throw new Error("content/ was rejected; nothing was imported");
 
   if (demoAccountsAllowed(process.env.APP_URL ?? "http://127.0.0.1:3000", process.env.DEMO_ACCOUNTS)) {
     const created = await ensureDemoAccounts();
@@ -33,13 +32,8 @@ try {
   const prices = await withRetries(() => syncPaymentsCatalogue());
   console.log(`payments catalogue: ${prices.length} prices, ${prices.filter((p) => p.created).length} created`);
 } catch (error) {
-  if (error instanceof ImportRejected) {
-    console.error(error.message);
-    for (const line of rejectionLines(error.problems)) console.error(line);
-    process.exitCode = 1;
-  } else {
-    throw error;
-  }
+  console.error(error instanceof Error ? error.message : error);
+  process.exitCode = 1;
 } finally {
   await db().close();
 }

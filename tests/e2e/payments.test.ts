@@ -11,6 +11,7 @@ import { buildMaterialLibrary, runSiteCheck } from "~/envelope";
 import { formatR } from "~/envelope/units";
 import { pdfText } from "~/packs/sheet-pdf.server";
 import { waitForMail } from "./caught-mail";
+import { signUpConfirmedMember } from "./journeys";
 import { baseUrl, openBrowser, screenshot } from "./browser";
 
 const SET = "roofs-and-attics";
@@ -43,20 +44,7 @@ test("a member buys a set with a test card, returns, sees it as theirs and downl
   const email = `buyer-${Date.now()}@example.test`;
   const password = "a set buyer passphrase"; // our own minimum is 12 characters
 
-  await page.goto(`${baseUrl()}/sign-up`);
-  await page.getByLabel("Your name").fill("Wren Callowby");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(password);
-  await page.getByLabel("Password again").fill(password);
-  await page.getByRole("button", { name: "Create account" }).click();
-  const confirm = await waitForMail(email, /Confirm/);
-  await page.goto(confirm.text.match(/https?:\/\/\S+\/verify-email\/[A-Za-z0-9_-]+/)![0]);
-  await page.getByRole("button", { name: "Confirm my e-mail" }).click();
-  await page.waitForURL(/\/sign-in\?notice=verified/);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.getByTestId("account-heading").waitFor();
+  await signUpConfirmedMember(page, { name: "Wren Callowby", email, password });
 
   await page.goto(`${baseUrl()}/sets#${SET}`);
   await page.getByTestId(`buy-${SET}`).click();
