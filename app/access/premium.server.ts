@@ -26,16 +26,6 @@ export async function canReadDetail(viewer: Viewer | null, detail: { id: number;
   return rows.length > 0;
 }
 
-/** Whether the viewer holds any live paid entitlement: what makes a member a subscriber. */
-export async function isSubscriber(viewer: Viewer | null): Promise<boolean> {
-  if (!viewer) return false;
-  const rows = await models().query(`SELECT 1 FROM entitlements e WHERE e.user_id = :userId AND ${LIVE_ENTITLEMENT} LIMIT 1`, {
-    type: QueryTypes.SELECT,
-    replacements: { userId: viewer.id },
-  });
-  return rows.length > 0;
-}
-
 /** Sets the viewer may download as packs. */
 export async function downloadableSetIds(viewer: Viewer | null): Promise<Set<number> | "all"> {
   if (!viewer) return new Set();

@@ -152,7 +152,8 @@ async function relatedDetails(detail: Detail): Promise<{ slug: string; title: st
       id: { [Op.ne]: detail.id },
       publishedRevisionId: { [Op.ne]: null },
       withdrawnAt: null,
-      [Op.or]: [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade !== "none" ? detail.belowGrade : "__none__" }],
+      // Same kind of assembly, or (below grade) the same condition: a basement wall relates to basement slabs.
+      [Op.or]: detail.belowGrade === "none" ? [{ assembly: detail.assembly }] : [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade }],
     },
     order: [["publishedAt", "DESC"]],
     limit: 4,

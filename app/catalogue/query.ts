@@ -47,11 +47,6 @@ export function toSearchParams(query: Partial<CatalogueQuery>): URLSearchParams 
   return params;
 }
 
-export function toggleFilter(query: CatalogueQuery, key: FilterKey, value: string): CatalogueQuery {
-  const current = query[key] as string[];
-  const next = current.includes(value) ? current.filter((v) => v !== value) : [...current, value];
-  return { ...query, [key]: next, page: 1 };
-}
 
 export function paramName(key: FilterKey): string {
   return PARAM[key];

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { CLIMATE_ZONE_IDS } from "~/content/zones";
 import type { SiteInput } from "~/envelope";
-import { fToC, type UnitSystem } from "~/envelope/units";
+import { fToC } from "~/envelope/units";
 
 // What the site-check panel (and the API) accepts. Temperatures and degree-days arrive in the
 // user's units; the engine takes SI.
@@ -44,6 +44,3 @@ export function siteInputFromForm(form: SiteForm): SiteInput {
   return site;
 }
 
-export function unitsOf(form: Pick<SiteForm, "units">): UnitSystem {
-  return form.units;
-}

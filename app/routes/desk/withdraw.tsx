@@ -30,7 +30,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function Withdraw({ loaderData, actionData }: Route.ComponentProps) {
-  const { slug, title, live } = loaderData;
+  const { title, live } = loaderData;
   return (
     <div className="max-w-prose space-y-4">
       <h1 className="text-3xl">Withdraw “{title}”</h1>
