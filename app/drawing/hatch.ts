@@ -11,12 +11,12 @@ export interface HatchPaint {
   stroke: string;
   tag: string;
   /** Varies the stipple so neighbouring bands do not repeat the same pattern. */
-  seed: number;
+  variant: number;
 }
 
 /** Small deterministic generator: the same layers always draw the same stipple. */
-function random(seed: number): () => number {
-  let s = (seed * 2654435761 + 1013904223) >>> 0;
+function random(variant: number): () => number {
+  let s = (variant * 2654435761 + 1013904223) >>> 0;
   return () => {
     s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
     return s / 4294967296;
@@ -49,7 +49,7 @@ function polylines(points: Point[], box: Box, paint: HatchPaint, width: number):
 }
 
 function dots(box: Box, paint: HatchPaint, count: number, rMin: number, rMax: number, filled: boolean): Shape[] {
-  const rnd = random(paint.seed);
+  const rnd = random(paint.variant);
   const out: Shape[] = [];
   for (let i = 0; i < count * 3 && out.length < count; i++) {
     const r = rMin + (rMax - rMin) * rnd();
@@ -109,7 +109,7 @@ function stipple(box: Box, paint: HatchPaint): Shape[] {
   const area = box.w * box.h;
   const out = dots(box, paint, Math.round(area / 38), 0.35, 0.7, true);
   // A few small open triangles for coarse aggregate.
-  const rnd = random(paint.seed + 97);
+  const rnd = random(paint.variant + 97);
   const triangles = Math.round(area / 700);
   for (let i = 0; i < triangles; i++) {
     const size = 2.2 + rnd() * 1.6;

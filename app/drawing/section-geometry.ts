@@ -212,12 +212,12 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
         ]
       : [band.box];
     regions.forEach((region, k) => {
-      shapes.push(...hatchShapes(style.hatch, region, { stroke: style.stroke, tag: `hatch:${band.index}`, seed: band.index * 7 + k + 1 }));
+      shapes.push(...hatchShapes(style.hatch, region, { stroke: style.stroke, tag: `hatch:${band.index}`, variant: band.index * 7 + k + 1 }));
     });
     if (band.framingBox && layer.framing) {
       const framingStyle = familyStyle(layer.framing.family);
       shapes.push({ type: "rect", ...band.framingBox, fill: framingStyle.fill, stroke: framingStyle.stroke, strokeWidth: 0.8, tag: `framing:${band.index}` });
-      shapes.push(...hatchShapes(framingStyle.hatch, band.framingBox, { stroke: framingStyle.stroke, tag: `hatch:${band.index}`, seed: band.index * 7 + 5 }));
+      shapes.push(...hatchShapes(framingStyle.hatch, band.framingBox, { stroke: framingStyle.stroke, tag: `hatch:${band.index}`, variant: band.index * 7 + 5 }));
     }
     shapes.push({ type: "rect", ...band.box, stroke: style.stroke, strokeWidth: 0.8, tag: `outline:${band.index}` });
   }

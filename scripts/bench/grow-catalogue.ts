@@ -6,10 +6,10 @@ import { regimeBit, zoneBit } from "../../app/catalogue/zone-mask.ts";
 const VARIANTS = ["coastal", "upland", "prairie", "river", "lakeside", "ridge", "valley", "harbour", "forest", "mesa"];
 const ZONE_POOL = ["2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
 
-export async function seedLargeCatalogue(sequelize: Sequelize, target: number): Promise<number> {
+export async function growLargeCatalogue(sequelize: Sequelize, target: number): Promise<number> {
   const [{ n }] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM details", { type: QueryTypes.SELECT });
   const base = Number(n);
-  if (base === 0) throw new Error("import the demo content first: the seed multiplies it");
+  if (base === 0) throw new Error("import the demo content first: the benchmark multiplies it");
   const copies = Math.ceil((target - base) / base);
   for (let copy = 1; copy <= copies; copy++) {
     const variant = VARIANTS[copy % VARIANTS.length];
