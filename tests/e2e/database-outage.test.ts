@@ -3,7 +3,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { join } from "node:path";
-import { afterAll, beforeAll, expect, test } from "vitest";
+import { afterAll, beforeAll, expect, test, vi } from "vitest";
 import { freePort } from "../../scripts/lib/free-port.ts";
 
 const scratch = mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? "/tmp", "outage-"));
@@ -21,13 +21,13 @@ function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.e
   });
 }
 
-async function until(check: () => Promise<boolean>, what: string, timeoutMs = 30000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (await check().catch(() => false)) return;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`timed out waiting for ${what}`);
+function until(check: () => Promise<boolean>, what: string, timeoutMs = 30000): Promise<void> {
+  return vi.waitFor(
+    async () => {
+      if (!(await check().catch(() => false))) throw new Error(`timed out waiting for ${what}`);
+    },
+    { timeout: timeoutMs, interval: 100 },
+  );
 }
 
 async function startDatabase(): Promise<void> {

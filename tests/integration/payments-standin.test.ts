@@ -1,7 +1,7 @@
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import Stripe from "stripe";
-import { afterAll, beforeAll, beforeEach, expect, test } from "vitest";
+import { afterAll, beforeAll, beforeEach, expect, test, vi } from "vitest";
 import { parseForm } from "../../dev/payments-standin/form";
 import { startPaymentsStandin, type PaymentsStandin } from "../../dev/payments-standin/server";
 import { signatureHeader } from "../../dev/payments-standin/webhooks";
@@ -123,14 +123,15 @@ async function subscribe(): Promise<Stripe.Subscription> {
   return stripe.subscriptions.retrieve(String(paid.subscription));
 }
 
-async function waitForEvent(type: string): Promise<Stripe.Event> {
-  const deadline = Date.now() + 3000;
-  for (;;) {
-    const found = received.find((item) => item.event.type === type);
-    if (found) return found.event;
-    if (Date.now() > deadline) throw new Error(`no ${type} webhook; got ${received.map((item) => item.event.type).join(", ")}`);
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
+function waitForEvent(type: string): Promise<Stripe.Event> {
+  return vi.waitFor(
+    () => {
+      const found = received.find((item) => item.event.type === type);
+      if (!found) throw new Error(`no ${type} webhook; got ${received.map((item) => item.event.type).join(", ")}`);
+      return found.event;
+    },
+    { timeout: 3000, interval: 10 },
+  );
 }
 
 function control(path: string, form: Record<string, string> = {}): Promise<Response> {
