@@ -67,45 +67,45 @@ function page(store: Store, session: CheckoutSession, form: FormState): string {
   const recurring = items[0]?.price.recurring ?? null;
   const rows = items
     .map(
-      (item) => `<tr><td>${escape(item.description)}${item.quantity > 1 ? ` <span class="muted">× ${item.quantity}</span>` : ""}</td>
+      (item) => `<tr><td>${escapeHtml(item.description)}${item.quantity > 1 ? ` <span class="muted">× ${item.quantity}</span>` : ""}</td>
         <td class="amount">${formatAmount(item.amount_total, item.currency)}</td></tr>`,
     )
     .join("\n");
   const total = `${formatAmount(session.amount_total, session.currency)}${recurring ? ` ${cadence(recurring)}` : ""}`;
   const summary = `<table class="summary"><tbody>${rows}</tbody>
-    <tfoot><tr><th>Total</th><td class="amount">${escape(total)}</td></tr></tfoot></table>`;
+    <tfoot><tr><th>Total</th><td class="amount">${escapeHtml(total)}</td></tr></tfoot></table>`;
 
   if (session.status !== "open") {
     const body =
       session.status === "complete"
-        ? `<p>This checkout is already paid.</p><p><a href="${escape(session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id))}">Continue</a></p>`
+        ? `<p>This checkout is already paid.</p><p><a href="${escapeHtml(session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id))}">Continue</a></p>`
         : "<p>This checkout has expired. Start again from the site.</p>";
     return layout("Checkout closed", `${summary}${body}`);
   }
 
   const emailField = payerEmail(store, session)
     ? ""
-    : field("Email", `<input name="email" type="email" autocomplete="email" required value="${escape(form.email)}">`);
-  const alert = form.error ? `<p class="alert" role="alert">${escape(form.error)}</p>` : "";
+    : field("Email", `<input name="email" type="email" autocomplete="email" required value="${escapeHtml(form.email)}">`);
+  const alert = form.error ? `<p class="alert" role="alert">${escapeHtml(form.error)}</p>` : "";
   const cards = Object.entries(TEST_CARDS)
-    .map(([number, outcome]) => `<li><code>${number}</code> ${outcome.ok ? `pays (${outcome.funding})` : `declines: ${escape(outcome.message)}`}</li>`)
+    .map(([number, outcome]) => `<li><code>${number}</code> ${outcome.ok ? `pays (${outcome.funding})` : `declines: ${escapeHtml(outcome.message)}`}</li>`)
     .join("");
   const action = session.mode === "subscription" ? "Subscribe" : "Pay";
   return layout(
     "Checkout",
     `${summary}
     ${alert}
-    <form method="post" action="/checkout/${escape(session.id)}/pay" class="pay">
+    <form method="post" action="/checkout/${escapeHtml(session.id)}/pay" class="pay">
       ${emailField}
-      ${field("Card number", `<input name="card_number" inputmode="numeric" autocomplete="cc-number" required value="${escape(form.number)}" placeholder="1234 1234 1234 1234">`)}
+      ${field("Card number", `<input name="card_number" inputmode="numeric" autocomplete="cc-number" required value="${escapeHtml(form.number)}" placeholder="1234 1234 1234 1234">`)}
       <div class="pair">
-        ${field("Expiry (MM/YY)", `<input name="card_expiry" autocomplete="cc-exp" required value="${escape(form.expiry)}" placeholder="MM/YY">`)}
+        ${field("Expiry (MM/YY)", `<input name="card_expiry" autocomplete="cc-exp" required value="${escapeHtml(form.expiry)}" placeholder="MM/YY">`)}
         ${field("Security code", `<input name="card_cvc" inputmode="numeric" autocomplete="cc-csc" required placeholder="123">`)}
       </div>
-      ${field("Name on card", `<input name="cardholder_name" autocomplete="cc-name" required value="${escape(form.name)}">`)}
-      <button type="submit" class="primary">${action} ${escape(total)}</button>
+      ${field("Name on card", `<input name="cardholder_name" autocomplete="cc-name" required value="${escapeHtml(form.name)}">`)}
+      <button type="submit" class="primary">${action} ${escapeHtml(total)}</button>
     </form>
-    <form method="post" action="/checkout/${escape(session.id)}/cancel">
+    <form method="post" action="/checkout/${escapeHtml(session.id)}/cancel">
       <button type="submit" class="secondary">Cancel and go back</button>
     </form>
     <details><summary>Test card numbers</summary><p class="muted">Any future expiry and any three-digit code.</p><ul>${cards}</ul></details>`,
@@ -113,11 +113,11 @@ function page(store: Store, session: CheckoutSession, form: FormState): string {
 }
 
 function field(label: string, input: string): string {
-  return `<label>${escape(label)}${input}</label>`;
+  return `<label>${escapeHtml(label)}${input}</label>`;
 }
 
 function notice(title: string, message: string): string {
-  return layout(title, `<p>${escape(message)}</p>`);
+  return layout(title, `<p>${escapeHtml(message)}</p>`);
 }
 
 function layout(title: string, content: string): string {
@@ -126,7 +126,7 @@ function layout(title: string, content: string): string {
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
-<title>${escape(title)} · local payments stand-in</title>
+<title>${escapeHtml(title)} · local payments stand-in</title>
 <style>
   :root { --ink: #2d2a26; --muted: #6f6a62; --paper: #f4f1ea; --card: #fffdf8; --line: #d9d3c7; --accent: #3c5a4f; --warn: #8a3b24; }
   * { box-sizing: border-box; }
@@ -154,7 +154,7 @@ function layout(title: string, content: string): string {
 <body>
 <main>
 <p class="banner">Local test checkout: no real card is charged and no money moves.</p>
-<h1>${escape(title)}</h1>
+<h1>${escapeHtml(title)}</h1>
 ${content}
 </main>
 </body>
@@ -174,6 +174,6 @@ function formatAmount(minor: number, currency: string): string {
   return format.format(minor / 10 ** decimals);
 }
 
-function escape(text: string): string {
+function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (char) => `&#${char.charCodeAt(0)};`);
 }
