@@ -7,6 +7,8 @@ export default defineConfig({
     include: ["tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts"],
     environment: "node",
     globalSetup: [],
+    // A fresh DB_NAME per test file, set before the app (and its Sequelize singleton) is imported.
+    setupFiles: ["tests/setup/database-name.ts"],
     testTimeout: 20000,
     hookTimeout: 60000,
     fileParallelism: false,

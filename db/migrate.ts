@@ -1,15 +1,8 @@
 // Standalone migration command: `tsx db/migrate.ts up|down|reset|status`.
-import { createSequelize } from "../app/db/sequelize.server.ts";
+import { sequelize } from "../app/db/sequelize.server.ts";
 import { createMigrator } from "./migrator.ts";
 
 const command = process.argv[2] ?? "up";
-const sequelize = createSequelize({
-  host: process.env.DB_HOST ?? "127.0.0.1",
-  port: Number(process.env.DB_PORT ?? 3307),
-  database: process.env.DB_NAME ?? "dryside",
-  username: process.env.DB_USER ?? "root",
-  password: process.env.DB_PASSWORD ?? "",
-});
 const migrator = createMigrator(sequelize);
 
 try {

@@ -1,6 +1,6 @@
 // `npm run content:import [folder]`: validates content/ and writes it to MariaDB in one transaction.
 import { importAndReport } from "../app/catalogue/import-report.server.ts";
-import { db } from "../app/db/sequelize.server.ts";
+import { sequelize } from "../app/db/sequelize.server.ts";
 
 const root = process.argv[2] ?? "content";
 const interactive = process.stderr.isTTY;
@@ -17,5 +17,5 @@ try {
   });
   if (!ok) process.exitCode = 1;
 } finally {
-  await db().close();
+  await sequelize.close();
 }

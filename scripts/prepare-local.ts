@@ -3,7 +3,7 @@
 // the plan and set prices in the payments service.
 import { importAndReport } from "../app/catalogue/import-report.server.ts";
 import { DEMO_PASSWORD, demoAccountsAllowed, ensureDemoAccounts } from "../app/auth/demo-accounts.server.ts";
-import { db } from "../app/db/sequelize.server.ts";
+import { sequelize } from "../app/db/sequelize.server.ts";
 import { syncPaymentsCatalogue } from "../app/payments/catalogue.server.ts";
 import { createMigrator } from "../db/migrator.ts";
 
@@ -19,7 +19,7 @@ async function withRetries<T>(task: () => Promise<T>, attempts = 40, delayMs = 2
 }
 
 try {
-  const applied = await createMigrator(db()).up();
+  const applied = await createMigrator(sequelize).up();
   console.log(applied.length ? `migrated: ${applied.map((m) => m.name).join(", ")}` : "schema up to date");
 
   if (!(await importAndReport("content"))) throw new Error("content/ was rejected; nothing was imported");
@@ -35,5 +35,5 @@ try {
   console.error(error instanceof Error ? error.message : error);
   process.exitCode = 1;
 } finally {
-  await db().close();
+  await sequelize.close();
 }

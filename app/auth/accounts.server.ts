@@ -2,7 +2,7 @@ import { UniqueConstraintError } from "sequelize";
 import { env } from "~/config/env.server";
 import { sendMailOrLog } from "~/mail/mailer.server";
 import { alreadyRegisteredMail, resetPasswordMail, verifyEmailMail } from "~/mail/templates";
-import { User, models } from "~/models";
+import { User } from "~/models/index.server";
 import { recordAudit } from "./audit.server";
 import { hashPassword, passwordNeedsRehash, verifyAgainstDecoy, verifyPassword } from "./password.server";
 import { isLimited, pruneAttempts, recordAttempt } from "./rate-limit.server";
@@ -42,7 +42,6 @@ async function mayMail(email: string): Promise<boolean> {
  * the owner gets a notice instead, and the caller sees the same outcome either way.
  */
 export async function signUp(input: { email: string; displayName: string; password: string }): Promise<void> {
-  models();
   const email = normaliseEmail(input.email);
   if (!(await mayMail(email))) return;
   const passwordHash = await hashPassword(input.password);
@@ -63,7 +62,6 @@ export async function signUp(input: { email: string; displayName: string; passwo
 
 /** Checks a password under the per-account and per-address limits; used by the form strategy. */
 export async function signInWithPassword(input: { email: string; password: string; address: string }): Promise<User> {
-  models();
   const email = normaliseEmail(input.email);
   if ((await isLimited("address", input.address)) || (await isLimited("account", email))) throw new SignInError(SIGN_IN_LIMITED);
   const user = await User.findOne({ where: { email } });
@@ -87,7 +85,6 @@ export async function signInWithPassword(input: { email: string; password: strin
 
 /** Uses a verification link; true when the address is now confirmed. */
 export async function verifyEmail(token: string): Promise<boolean> {
-  models();
   const userId = await consumeToken(token, "verify-email");
   if (userId === null) return false;
   const user = await User.findByPk(userId);
@@ -101,7 +98,6 @@ export async function verifyEmail(token: string): Promise<boolean> {
 
 /** Mails a reset link when the address has an account; the caller always shows the same message. */
 export async function requestPasswordReset(rawEmail: string): Promise<void> {
-  models();
   const email = normaliseEmail(rawEmail);
   const user = await User.findOne({ where: { email } });
   if (!user || !(await mayMail(email))) return;
@@ -114,7 +110,6 @@ export async function requestPasswordReset(rawEmail: string): Promise<void> {
  * proves the mailbox, so the address counts as verified. Returns false for a used or expired link.
  */
 export async function resetPassword(token: string, password: string): Promise<boolean> {
-  models();
   const userId = await consumeToken(token, "reset-password");
   if (userId === null) return false;
   const user = await User.findByPk(userId);

@@ -1,6 +1,6 @@
 import type { Transaction } from "sequelize";
-import { AuditEvent, User, models } from "~/models";
-import type { AuditDetails } from "~/models/audit-event";
+import { AuditEvent, User } from "~/models/index.server";
+import type { AuditDetails } from "~/models/audit-event.server";
 
 export type AuditAction =
   | "user.signed_up"
@@ -24,7 +24,6 @@ export interface AuditEntry {
 
 /** Pass the caller's transaction so the record commits or rolls back with the change it describes. */
 export async function recordAudit(entry: AuditEntry, transaction?: Transaction): Promise<void> {
-  models();
   await AuditEvent.create({
     actorId: entry.actorId,
     action: entry.action,
@@ -44,7 +43,6 @@ export interface AuditRow {
 }
 
 export async function listAuditEvents({ limit = 100, subject }: { limit?: number; subject?: { type: string; id: string } } = {}): Promise<AuditRow[]> {
-  models();
   const rows = await AuditEvent.findAll({
     where: subject ? { subjectType: subject.type, subjectId: subject.id } : {},
     include: [{ model: User, as: "actor", attributes: ["displayName", "email"] }],

@@ -1,6 +1,6 @@
 import { hashPassword } from "./password.server";
-import type { StaffRole } from "./roles";
-import { User, models } from "~/models";
+import type { StaffRole } from "~/vocabulary/roles";
+import { User } from "~/models/index.server";
 
 // Demo logins for local development. The editors and reviewers carry the invented names used as
 // authors and reviewers in content/details.
@@ -21,7 +21,6 @@ export function demoAccountsAllowed(appUrl: string, override: string | undefined
 
 /** Creates the demo logins that are missing; existing accounts are left as they are. */
 export async function ensureDemoAccounts(): Promise<string[]> {
-  models();
   const existing = new Set((await User.findAll({ attributes: ["email"], where: { email: DEMO_ACCOUNTS.map((a) => a.email) } })).map((u) => u.email));
   const missing = DEMO_ACCOUNTS.filter((account) => !existing.has(account.email));
   if (missing.length === 0) return [];

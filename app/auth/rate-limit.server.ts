@@ -1,5 +1,5 @@
 import { Op } from "sequelize";
-import { SignInAttempt, models } from "~/models";
+import { SignInAttempt } from "~/models/index.server";
 
 // Counted in the database so the limits hold across every app server behind the load balancer.
 export const RATE_LIMITS = {
@@ -27,7 +27,6 @@ export function clientAddress(request: Request): string {
 
 /** Failures in the window since the bucket's last success (a correct sign-in clears the account's count). */
 export async function recentFailures(bucketName: string, windowMs: number, now = new Date()): Promise<number> {
-  models();
   const windowStart = new Date(now.getTime() - windowMs);
   const lastSuccess = await SignInAttempt.max<Date | null, SignInAttempt>("createdAt", { where: { bucket: bucketName, succeeded: true, createdAt: { [Op.gt]: windowStart } } });
   const since = lastSuccess && lastSuccess > windowStart ? lastSuccess : windowStart;
@@ -40,13 +39,11 @@ export async function isLimited(kind: LimitKind, key: string, now = new Date()):
 }
 
 export async function recordAttempt(kind: LimitKind, key: string, succeeded: boolean, now = new Date()): Promise<void> {
-  models();
   await SignInAttempt.create({ bucket: bucket(kind, key), succeeded, createdAt: now });
 }
 
 /** Drops attempts older than the longest window; cheap enough to run on every sign-in. */
 export async function pruneAttempts(now = new Date()): Promise<void> {
-  models();
   const longest = Math.max(...Object.values(RATE_LIMITS).map((limit) => limit.windowMs));
   await SignInAttempt.destroy({ where: { createdAt: { [Op.lt]: new Date(now.getTime() - longest) } } });
 }

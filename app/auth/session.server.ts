@@ -2,7 +2,7 @@ import { createHash, randomBytes } from "node:crypto";
 import { createCookieSessionStorage, type Session as CookieSession } from "react-router";
 import { Op } from "sequelize";
 import { env } from "~/config/env.server";
-import { Session, User, models } from "~/models";
+import { Session, User } from "~/models/index.server";
 
 // The cookie carries only a random session id (plus the CSRF token); the row in `sessions`
 // decides whether it is still valid, so an admin or a password reset can revoke it server-side.
@@ -55,7 +55,6 @@ export async function findSessionUser(request: Request): Promise<User | null> {
   const cookie = await getCookieSession(request);
   const sid = cookie.get("sid");
   if (!sid) return null;
-  models();
   const row = await Session.findOne({
     where: { id: sessionRowId(sid), revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
     include: [{ model: User, as: "user", required: true }],
@@ -68,7 +67,6 @@ export async function findSessionUser(request: Request): Promise<User | null> {
  * before sign-in is never promoted. Revokes the id the browser held before, if any.
  */
 export async function startSession(request: Request, userId: number): Promise<string> {
-  models();
   const cookie = await getCookieSession(request);
   const previous = cookie.get("sid");
   if (previous) await Session.update({ revokedAt: new Date() }, { where: { id: sessionRowId(previous), revokedAt: null } });
@@ -86,7 +84,6 @@ export async function startSession(request: Request, userId: number): Promise<st
 
 /** Ends this browser's session and clears the cookie. */
 export async function endSession(request: Request): Promise<string> {
-  models();
   const cookie = await getCookieSession(request);
   const sid = cookie.get("sid");
   if (sid) await Session.update({ revokedAt: new Date() }, { where: { id: sessionRowId(sid), revokedAt: null } });
@@ -95,12 +92,10 @@ export async function endSession(request: Request): Promise<string> {
 
 /** Revokes every live session of a user (role change, password reset, admin action). Returns how many. */
 export async function revokeUserSessions(userId: number): Promise<number> {
-  models();
   const [count] = await Session.update({ revokedAt: new Date() }, { where: { userId, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
   return count;
 }
 
 export async function countLiveSessions(userId: number): Promise<number> {
-  models();
   return Session.count({ where: { userId, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
 }

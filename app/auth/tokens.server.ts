@@ -1,7 +1,7 @@
 import { createHash } from "node:crypto";
 import { Op } from "sequelize";
-import { AuthToken, models } from "~/models";
-import type { TokenPurpose } from "~/models/auth-token";
+import { AuthToken } from "~/models/index.server";
+import type { TokenPurpose } from "~/models/auth-token.server";
 import { randomToken } from "./session.server";
 
 export const TOKEN_LIFETIME_MS: Record<TokenPurpose, number> = {
@@ -15,7 +15,6 @@ function hashToken(token: string): string {
 
 /** Issues a new link token; earlier unused tokens of the same purpose stop working, so only the newest mail counts. */
 export async function issueToken(userId: number, purpose: TokenPurpose, now = new Date()): Promise<string> {
-  models();
   await AuthToken.update({ usedAt: now }, { where: { userId, purpose, usedAt: null } });
   const token = randomToken();
   await AuthToken.create({ userId, purpose, tokenHash: hashToken(token), expiresAt: new Date(now.getTime() + TOKEN_LIFETIME_MS[purpose]) });
@@ -28,7 +27,6 @@ function liveWhere(token: string, purpose: TokenPurpose, now: Date) {
 
 /** The user a live token belongs to, without using it up (to show a form or an "expired" message). */
 export async function peekToken(token: string, purpose: TokenPurpose, now = new Date()): Promise<number | null> {
-  models();
   const row = await AuthToken.findOne({ where: liveWhere(token, purpose, now) });
   return row?.userId ?? null;
 }
@@ -38,7 +36,6 @@ export async function peekToken(token: string, purpose: TokenPurpose, now = new 
  * One conditional UPDATE, so two simultaneous clicks cannot both succeed.
  */
 export async function consumeToken(token: string, purpose: TokenPurpose, now = new Date()): Promise<number | null> {
-  models();
   const row = await AuthToken.findOne({ where: liveWhere(token, purpose, now) });
   if (!row) return null;
   const [changed] = await AuthToken.update({ usedAt: now }, { where: { id: row.id, usedAt: null } });

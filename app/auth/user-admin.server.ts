@@ -1,8 +1,7 @@
 import { Op } from "sequelize";
-import { db } from "~/db/sequelize.server";
-import { User, models } from "~/models";
+import { User, sequelize } from "~/models/index.server";
 import { recordAudit } from "./audit.server";
-import type { StaffRole } from "./roles";
+import type { StaffRole } from "~/vocabulary/roles";
 import { countLiveSessions, revokeUserSessions } from "./session.server";
 
 export interface UserRow {
@@ -16,7 +15,6 @@ export interface UserRow {
 }
 
 export async function listUsers({ q, limit = 50 }: { q?: string; limit?: number } = {}): Promise<UserRow[]> {
-  models();
   const term = q?.trim();
   const users = await User.findAll({
     where: term ? { [Op.or]: [{ email: { [Op.like]: `%${term}%` } }, { displayName: { [Op.like]: `%${term}%` } }] } : {},
@@ -45,13 +43,12 @@ export class UserAdminError extends Error {
  * start with a fresh session id at their next sign-in. Admins cannot change their own role (no lock-out).
  */
 export async function changeRole(actorId: number, userId: number, role: StaffRole): Promise<void> {
-  models();
   if (actorId === userId) throw new UserAdminError("You cannot change your own role; ask another admin.");
   const user = await User.findByPk(userId);
   if (!user) throw new UserAdminError("No such user.");
   const from = user.role;
   if (from === role) return;
-  await db().transaction(async (transaction) => {
+  await sequelize.transaction(async (transaction) => {
     await user.update({ role }, { transaction });
     await recordAudit({ actorId, action: "user.role_changed", subjectType: "user", subjectId: userId, details: { from, to: role } }, transaction);
   });

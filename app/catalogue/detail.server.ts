@@ -2,8 +2,10 @@ import { Op } from "sequelize";
 import { canReadDetail, type Viewer } from "~/access/premium.server";
 import type { DetailFrontMatter, DetailLayer } from "~/content/detail-schema";
 import type { Material } from "~/envelope";
-import { renderMarkdown, markdownSection } from "~/markdown/render.server";
-import { Detail, DetailRevision, DetailSet, DetailZone, models } from "~/models";
+import { renderMarkdown } from "~/markdown/render.server";
+import { Detail, DetailRevision, DetailSet, DetailZone } from "~/models/index.server";
+import { BODY_SECTION_HEADINGS, bodySection } from "~/vocabulary/body-sections";
+import { PUBLIC_REVISION_STATES } from "~/vocabulary/revision-states";
 import { uploadsOf, type UploadRow } from "~/desk/uploads.server";
 import { materialLibrary } from "./materials.server";
 import { describeChanges } from "./revision-diff";
@@ -64,13 +66,12 @@ function materialName(library: ReadonlyMap<string, Material>, slug: string): str
 
 /** A published detail as a viewer may see it, or null when there is none under that slug. */
 export async function getDetailView(slug: string, viewer: Viewer | null): Promise<DetailView | null> {
-  models();
-  const detail = await Detail.findOne({ where: { slug, publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null } });
+  const detail = await Detail.scope("live").findOne({ where: { slug } });
   if (!detail?.publishedRevisionId) return null;
   const [revision, history, zones, sets, library, allowed] = await Promise.all([
     DetailRevision.findByPk(detail.publishedRevisionId),
     DetailRevision.findAll({
-      where: { detailId: detail.id, state: { [Op.in]: ["published", "superseded", "withdrawn"] } },
+      where: { detailId: detail.id, state: { [Op.in]: PUBLIC_REVISION_STATES } },
       order: [["number", "ASC"]],
     }),
     DetailZone.findAll({ where: { detailId: detail.id } }),
@@ -79,7 +80,7 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
     canReadDetail(viewer, detail),
   ]);
   if (!revision) return null;
-  const front = revision.frontMatter as DetailFrontMatter;
+  const front = revision.frontMatter;
 
   const entries: RevisionEntry[] = history.map((entry, i) => {
     const previous = i > 0 ? history[i - 1] : null;
@@ -90,7 +91,7 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
       authorName: entry.authorName,
       reviewerName: entry.reviewerName,
       changeNote: entry.changeNote,
-      changes: previous ? describeChanges(previous.frontMatter as DetailFrontMatter, entry.frontMatter as DetailFrontMatter, previous.bodyMd, entry.bodyMd) : [],
+      changes: previous ? describeChanges(previous.frontMatter, entry.frontMatter, previous.bodyMd, entry.bodyMd) : [],
     };
   });
   const current = entries.find((entry) => entry.number === revision.number)!;
@@ -129,7 +130,7 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
       attachments: await uploadsOf(revision.id),
     };
   } else {
-    const why = plainText(markdownSection(revision.bodyMd, "Why it works"));
+    const why = plainText(bodySection(revision.bodyMd, BODY_SECTION_HEADINGS["why-it-works"]));
     view.preview = { excerpt: why.length > 280 ? `${why.slice(0, 280).replace(/\s+\S*$/, "")}…` : why };
   }
   return view;
@@ -137,21 +138,19 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
 
 /** The published front matter (layers and metadata) of a detail, for the site check. */
 export async function getPublishedAssembly(slug: string): Promise<{ id: number; tier: "free" | "premium"; frontMatter: DetailFrontMatter } | null> {
-  models();
-  const detail = await Detail.findOne({ where: { slug, publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null } });
-  if (!detail?.publishedRevisionId) return null;
-  const revision = await DetailRevision.findByPk(detail.publishedRevisionId, { attributes: ["frontMatter"] });
-  if (!revision) return null;
-  return { id: detail.id, tier: detail.tier, frontMatter: revision.frontMatter as DetailFrontMatter };
+  const detail = await Detail.scope("live").findOne({
+    where: { slug },
+    include: [{ model: DetailRevision, as: "publishedRevision", attributes: ["frontMatter"], required: true }],
+  });
+  if (!detail?.publishedRevision) return null;
+  return { id: detail.id, tier: detail.tier, frontMatter: detail.publishedRevision.frontMatter };
 }
 
 async function relatedDetails(detail: Detail): Promise<{ slug: string; title: string; tier: string }[]> {
-  const rows = await Detail.findAll({
+  const rows = await Detail.scope("live").findAll({
     attributes: ["slug", "title", "tier"],
     where: {
       id: { [Op.ne]: detail.id },
-      publishedRevisionId: { [Op.ne]: null },
-      withdrawnAt: null,
       // Same kind of assembly, or (below grade) the same condition: a basement wall relates to basement slabs.
       [Op.or]: detail.belowGrade === "none" ? [{ assembly: detail.assembly }] : [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade }],
     },

@@ -1,10 +1,10 @@
-import { createHash } from "node:crypto";
 import type { Transaction } from "sequelize";
 import { loadContent } from "~/content/load-content";
 import type { ContentProblem } from "~/content/content-error";
 import type { ParsedDetail } from "~/content/parse-detail";
 import type { Material } from "~/envelope";
-import { Detail, DetailRevision, DetailSet, MaterialRecord, User, models } from "~/models";
+import { Detail, DetailRevision, DetailSet, MaterialRecord, User, sequelize } from "~/models/index.server";
+import { contentHash } from "~/vocabulary/content-hash.server";
 import { buildProjection, publishRevision } from "./publish.server";
 
 export class ImportRejected extends Error {
@@ -48,7 +48,6 @@ export async function importContent(root: string, options: ImportOptions = {}): 
   }
   if (problems.length > 0) throw new ImportRejected(problems);
 
-  const sequelize = models();
   const summary: ImportSummary = {
     materials: { created: 0, updated: 0, unchanged: 0 },
     sets: { created: 0, updated: 0, unchanged: 0 },
@@ -104,7 +103,7 @@ async function importDetail(
   transaction: Transaction,
 ): Promise<DetailOutcome> {
   const { body, bodyStartLine: _line, file: _file, ...frontMatter } = detail;
-  const contentHash = createHash("sha256").update(JSON.stringify({ frontMatter, body })).digest("hex");
+  const hash = contentHash(frontMatter, body);
   const publishedAt = new Date(`${detail.revised ?? "2026-01-15"}T12:00:00Z`);
   // Written as reviewed by the file's reviewer; publishRevision (shared with the desk) makes it live.
   const revisionValues = {
@@ -121,7 +120,7 @@ async function importDetail(
     reviewerName: detail.reviewer,
     reviewedAt: publishedAt,
     submittedAt: publishedAt,
-    contentHash,
+    contentHash: hash,
   };
 
   let record = await Detail.findOne({ where: { slug: detail.slug }, transaction });
@@ -132,7 +131,7 @@ async function importDetail(
   } else {
     const latest = await DetailRevision.findOne({ where: { detailId: record.id }, order: [["number", "DESC"]], transaction });
     const current = record.publishedRevisionId ? await DetailRevision.findByPk(record.publishedRevisionId, { transaction }) : null;
-    if (current && current.contentHash === contentHash) return { kind: "unchanged" };
+    if (current && current.contentHash === hash) return { kind: "unchanged" };
     // The web desk has a newer (or equal) revision: the file must be re-exported or its revision raised.
     if (latest && latest.number >= detail.revision) return { kind: "kept", reason: `database has revision ${latest.number}; raise \`revision\` above it to import this file` };
     outcome = { kind: "revised" };

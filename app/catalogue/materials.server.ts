@@ -1,5 +1,5 @@
 import { buildMaterialLibrary, type Material } from "~/envelope";
-import { MaterialRecord, models } from "~/models";
+import { MaterialRecord } from "~/models/index.server";
 
 // The library is small and read on every site check; a short-lived per-process copy saves a query
 // per check while edits still show within seconds on every app server.
@@ -8,7 +8,6 @@ let cache: { at: number; library: ReadonlyMap<string, Material> } | undefined;
 
 export async function materialLibrary(): Promise<ReadonlyMap<string, Material>> {
   if (cache && Date.now() - cache.at < TTL_MS) return cache.library;
-  models();
   const rows = await MaterialRecord.findAll({ attributes: ["properties"], order: [["slug", "ASC"]] });
   const library = buildMaterialLibrary(rows.map((row) => row.properties));
   cache = { at: Date.now(), library };

@@ -1,5 +1,5 @@
 import { Op } from "sequelize";
-import { Detail, DetailRevision, models } from "~/models";
+import { Detail, DetailRevision } from "~/models/index.server";
 
 export interface LibraryOverview {
   publishedCount: number;
@@ -9,11 +9,9 @@ export interface LibraryOverview {
 
 /** What the home page shows: the size of the library and what was revised lately. */
 export async function getLibraryOverview(): Promise<LibraryOverview> {
-  models();
-  const live = { publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null };
   const [publishedCount, freeCount, recent] = await Promise.all([
-    Detail.count({ where: live }),
-    Detail.count({ where: { ...live, tier: "free" } }),
+    Detail.scope("live").count(),
+    Detail.scope("live").count({ where: { tier: "free" } }),
     DetailRevision.findAll({
       where: { state: "published" },
       include: [{ model: Detail, as: "detail", attributes: ["slug"], required: true }],

@@ -1,10 +1,10 @@
 import { Op, type Transaction } from "sequelize";
 import { recordAudit } from "~/auth/audit.server";
 import type { DetailFrontMatter } from "~/content/detail-schema";
-import { moistureRegime, zoneNumber } from "~/content/zones";
+import { moistureRegime, zoneNumber } from "~/vocabulary/climate-zones";
 import { assemblyRValue, interiorRetarderClass, type Material } from "~/envelope";
-import { Detail, DetailRevision, DetailSet, DetailSetMember, DetailZone, models } from "~/models";
-import type { LayerStripEntry, Tier } from "~/models/detail";
+import { Detail, DetailRevision, DetailSet, DetailSetMember, DetailZone } from "~/models/index.server";
+import type { LayerStripEntry, Tier } from "~/models/detail.server";
 import { materialLibrary } from "./materials.server";
 import { buildSearchText } from "./search-text";
 import { regimeMask, zoneMask } from "./zone-mask";
@@ -70,14 +70,13 @@ export interface Publication {
  * projection, zones and set members are rewritten from it. Every step is audit-logged.
  */
 export async function publishRevision(revisionId: number, reviewer: { id: number; displayName: string } | null, options: PublishOptions): Promise<Publication> {
-  models();
   const { transaction } = options;
   const at = options.at ?? new Date();
   const revision = await DetailRevision.findByPk(revisionId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!revision) throw new Error(`revision ${revisionId} does not exist`);
   const detail = await Detail.findByPk(revision.detailId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!detail) throw new Error(`detail ${revision.detailId} does not exist`);
-  const front = revision.frontMatter as DetailFrontMatter;
+  const front = revision.frontMatter;
   const library = options.library ?? (await materialLibrary());
   const projection = buildProjection(front, revision.bodyMd, library);
 
@@ -118,9 +117,8 @@ async function writeZonesAndSets(detailId: number, front: DetailFrontMatter, tra
 
 /** Takes a published detail out of the catalogue; its history stays. */
 export async function withdrawDetail(detailId: number, actor: { id: number }, reason: string, transaction: Transaction): Promise<Detail> {
-  models();
   const detail = await Detail.findByPk(detailId, { transaction, lock: transaction.LOCK.UPDATE });
-  if (!detail?.publishedRevisionId || detail.withdrawnAt) throw new Error("only a published detail can be withdrawn");
+  if (!detail?.isLive()) throw new Error("only a published detail can be withdrawn");
   const revision = await DetailRevision.findByPk(detail.publishedRevisionId, { transaction });
   if (revision) await revision.update({ state: "withdrawn" }, { transaction });
   await detail.update({ withdrawnAt: new Date() }, { transaction });

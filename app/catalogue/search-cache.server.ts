@@ -1,5 +1,5 @@
 import { QueryTypes } from "sequelize";
-import { models } from "~/models";
+import { sequelize } from "~/models/index.server";
 
 // Search results are cached per process and keyed by the catalogue's version: the newest
 // details.updated_at (one index lookup). Every publication, withdrawal or import rewrites a details
@@ -42,6 +42,6 @@ export class VersionedCache<T> {
 }
 
 export async function catalogueVersion(): Promise<string> {
-  const [row] = await models().query<{ version: Date | string | null }>("SELECT MAX(updated_at) AS version FROM details", { type: QueryTypes.SELECT });
+  const [row] = await sequelize.query<{ version: Date | string | null }>("SELECT MAX(updated_at) AS version FROM details", { type: QueryTypes.SELECT });
   return row?.version ? new Date(row.version).toISOString() : "empty";
 }

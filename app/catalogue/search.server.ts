@@ -1,11 +1,11 @@
 import { QueryTypes } from "sequelize";
-import { models } from "~/models";
-import type { LayerStripEntry } from "~/models/detail";
+import { liveDetailSql, sequelize } from "~/models/index.server";
+import type { LayerStripEntry } from "~/models/detail.server";
 import { toBooleanQuery } from "./fulltext";
-import { CLIMATE_ZONE_IDS, type ClimateZoneId } from "~/content/zones";
+import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES, type MoistureRegime } from "~/vocabulary/climate-zones";
 import { effectiveSort, FILTER_KEYS, PER_PAGE, type CatalogueQuery, type FilterKey, type Sort } from "./query";
 import { catalogueVersion, VersionedCache } from "./search-cache.server";
-import { regimeBit, REGIMES, zoneBit, zoneMask } from "./zone-mask";
+import { regimeBit, zoneBit, zoneMask } from "./zone-mask";
 
 export interface DetailCard {
   slug: string;
@@ -59,16 +59,16 @@ function buildFilters(query: CatalogueQuery): Filter[] {
   for (const key of FILTER_KEYS) {
     const values = query[key] as readonly string[];
     if (values.length === 0) continue;
-    if (key === "zone") filters.push({ key, sql: `(d.zone_mask & ${zoneMask(values as ClimateZoneId[])}) <> 0` });
-    else if (key === "regime") filters.push({ key, sql: `(d.regime_mask & ${regimeMaskOf(values)}) <> 0` });
+    if (key === "zone") filters.push({ key, sql: `(d.zone_mask & ${zoneMask(query.zone)}) <> 0` });
+    else if (key === "regime") filters.push({ key, sql: `(d.regime_mask & ${regimeMaskOf(query.regime)}) <> 0` });
     else filters.push({ key, sql: `${COLUMN[key]} IN (:${key})` });
   }
   return filters;
 }
 
-const regimeMaskOf = (values: readonly string[]) => values.reduce((mask, v) => mask | regimeBit(v as (typeof REGIMES)[number]), 0);
+const regimeMaskOf = (values: readonly MoistureRegime[]) => values.reduce((mask, regime) => mask | regimeBit(regime), 0);
 
-const LIVE = "d.published_revision_id IS NOT NULL AND d.withdrawn_at IS NULL";
+const LIVE = liveDetailSql("d");
 const MATCH = "MATCH (d.title, d.summary, d.search_text) AGAINST (:booleanQuery IN BOOLEAN MODE)";
 
 function conjunction(filters: Filter[]): string {
@@ -103,7 +103,7 @@ const ROW_FIELD: Record<Exclude<FilterKey, "zone" | "regime">, keyof FacetCombin
 function valuesOf(row: FacetCombination, key: FilterKey): string[] {
   if (row.values) return row.values[key];
   if (key === "zone") return CLIMATE_ZONE_IDS.filter((zone) => (row.zone_mask & zoneBit(zone)) !== 0);
-  if (key === "regime") return REGIMES.filter((regime) => (row.regime_mask & regimeBit(regime)) !== 0);
+  if (key === "regime") return MOISTURE_REGIMES.filter((regime) => (row.regime_mask & regimeBit(regime)) !== 0);
   return [String(row[ROW_FIELD[key]])];
 }
 
@@ -217,7 +217,7 @@ const combinationsCache = new VersionedCache<FacetCombination[]>(1);
 async function facetCombinations(version: string): Promise<FacetCombination[]> {
   const cached = combinationsCache.get("all", version);
   if (cached) return cached;
-  const rows = await models().query<FacetCombination>(
+  const rows = await sequelize.query<FacetCombination>(
     `SELECT ${GROUPING}, COUNT(*) AS n FROM details d FORCE INDEX (details_facets) WHERE ${LIVE} GROUP BY ${GROUPING}`,
     { type: QueryTypes.SELECT },
   );
@@ -227,7 +227,6 @@ async function facetCombinations(version: string): Promise<FacetCombination[]> {
 }
 
 async function searchFacetsOnly(query: CatalogueQuery, version: string): Promise<Omit<CatalogueResult, "ms">> {
-  const sequelize = models();
   const filters = buildFilters(query);
   const replacements = replacementsFor(query);
   const sort = effectiveSort(query);
@@ -267,7 +266,7 @@ interface TextMatchSet {
 async function matchesFor(booleanQuery: string, version: string): Promise<TextMatchSet> {
   const cached = textMatches.get(booleanQuery, version);
   if (cached) return cached;
-  const rows = await models().query<Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }>(
+  const rows = await sequelize.query<Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }>(
     `SELECT d.id, ${MATCH} AS score, d.title, d.published_at, d.r_value_rsi, ${GROUPING} FROM details d WHERE ${LIVE} AND ${MATCH}`,
     { type: QueryTypes.SELECT, replacements: { booleanQuery } },
   );
@@ -307,7 +306,7 @@ async function searchWithText(query: CatalogueQuery, booleanQuery: string, versi
     if (pageIds.length === PER_PAGE) break;
   }
   if (pageIds.length === 0) return page(query, total, sort, [], facets);
-  const rows = await models().query<CardRow>(`SELECT ${CARD_COLUMNS} FROM details d WHERE d.id IN (:ids)`, {
+  const rows = await sequelize.query<CardRow>(`SELECT ${CARD_COLUMNS} FROM details d WHERE d.id IN (:ids)`, {
     type: QueryTypes.SELECT,
     replacements: { ids: pageIds },
   });

@@ -1,5 +1,5 @@
 import { QueryTypes } from "sequelize";
-import { models } from "~/models";
+import { liveDetailSql, sequelize } from "~/models/index.server";
 import type { Suggestion } from "./suggestions";
 import { SEARCH_SYNONYMS, labelFor } from "./vocabulary";
 
@@ -7,11 +7,10 @@ import { SEARCH_SYNONYMS, labelFor } from "./vocabulary";
 const TITLE_LIMIT = 1500;
 
 export async function suggestionCorpus(): Promise<Suggestion[]> {
-  const sequelize = models();
   const [details, materials] = await Promise.all([
     sequelize.query<{ slug: string; title: string; assembly: string }>(
-      `SELECT slug, title, assembly FROM details WHERE published_revision_id IS NOT NULL AND withdrawn_at IS NULL
-        ORDER BY published_at DESC LIMIT ${TITLE_LIMIT}`,
+      `SELECT d.slug, d.title, d.assembly FROM details d WHERE ${liveDetailSql("d")}
+        ORDER BY d.published_at DESC LIMIT ${TITLE_LIMIT}`,
       { type: QueryTypes.SELECT },
     ),
     sequelize.query<{ name: string; family: string }>("SELECT name, family FROM materials ORDER BY name", { type: QueryTypes.SELECT }),

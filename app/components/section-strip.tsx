@@ -1,5 +1,5 @@
 import { familyStyle } from "~/drawing/families";
-import type { LayerStripEntry } from "~/models/detail";
+import type { LayerStripEntry } from "~/models/detail.server";
 
 /**
  * A thin bar of the layers from exterior (left) to interior (right). Thin layers get a minimum

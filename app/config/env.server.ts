@@ -29,6 +29,11 @@ export type Env = z.infer<typeof envSchema>;
 
 let cached: Env | undefined;
 
+/** Just the database settings: the Sequelize singleton is built at import, before other settings matter. */
+export function databaseEnv() {
+  return envSchema.pick({ DB_HOST: true, DB_PORT: true, DB_NAME: true, DB_USER: true, DB_PASSWORD: true }).parse(process.env);
+}
+
 export function env(): Env {
   if (cached) return cached;
   const parsed = envSchema.safeParse(process.env);

@@ -1,5 +1,5 @@
 import { Sequelize } from "sequelize";
-import { env } from "~/config/env.server";
+import { databaseEnv } from "~/config/env.server";
 
 export interface DatabaseOptions {
   host: string;
@@ -24,24 +24,19 @@ export function createSequelize(options: DatabaseOptions): Sequelize {
   });
 }
 
-// One instance per process; kept on globalThis so dev-server reloads do not open new pools.
+// One instance per process, built at import (it connects only on the first query), so the models in
+// app/models bind to it once. Kept on globalThis so dev-server reloads do not open new pools.
+// Tests choose the database by setting DB_NAME before the app is imported (tests/setup/database-name.ts).
 const globalForDb = globalThis as typeof globalThis & { __drysideSequelize?: Sequelize };
 
-export function db(): Sequelize {
-  if (!globalForDb.__drysideSequelize) {
-    const e = env();
-    globalForDb.__drysideSequelize = createSequelize({
-      host: e.DB_HOST,
-      port: e.DB_PORT,
-      database: e.DB_NAME,
-      username: e.DB_USER,
-      password: e.DB_PASSWORD,
-    });
-  }
-  return globalForDb.__drysideSequelize;
+function fromEnvironment(): Sequelize {
+  const e = databaseEnv();
+  return createSequelize({ host: e.DB_HOST, port: e.DB_PORT, database: e.DB_NAME, username: e.DB_USER, password: e.DB_PASSWORD });
 }
 
-export async function databaseIsUp(sequelize: Sequelize = db()): Promise<boolean> {
+export const sequelize: Sequelize = (globalForDb.__drysideSequelize ??= fromEnvironment());
+
+export async function databaseIsUp(): Promise<boolean> {
   try {
     await Promise.race([
       sequelize.query("SELECT 1"),

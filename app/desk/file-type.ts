@@ -1,4 +1,4 @@
-import type { UploadType } from "~/models/upload";
+import type { UploadType } from "~/models/upload.server";
 
 // What an uploaded file really is, read from its first bytes; the name and the browser's claim are
 // never trusted. SVG is text, so it is recognised by its root element and sanitised separately.

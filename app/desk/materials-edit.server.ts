@@ -2,9 +2,8 @@ import { Op } from "sequelize";
 import { recordAudit } from "~/auth/audit.server";
 import { forgetMaterialLibrary } from "~/catalogue/materials.server";
 import { buildProjection } from "~/catalogue/publish.server";
-import type { DetailFrontMatter } from "~/content/detail-schema";
 import { buildMaterialLibrary, materialSchema, type Material } from "~/envelope";
-import { Detail, DetailRevision, MaterialRecord, models } from "~/models";
+import { Detail, DetailRevision, MaterialRecord, sequelize } from "~/models/index.server";
 import { MATERIAL_FLAGS, type MaterialFormValues } from "./material-form";
 import type { DeskActor } from "./revisions.server";
 
@@ -96,13 +95,11 @@ function fieldFor(path: readonly PropertyKey[]): string {
 }
 
 export async function listMaterials(): Promise<{ slug: string; name: string; family: string; updatedAt: string }[]> {
-  models();
   const rows = await MaterialRecord.findAll({ attributes: ["slug", "name", "family", "updatedAt"], order: [["family", "ASC"], ["name", "ASC"]] });
   return rows.map((row) => ({ slug: row.slug, name: row.name, family: row.family, updatedAt: row.updatedAt.toISOString() }));
 }
 
 export async function findMaterial(slug: string): Promise<Material | null> {
-  models();
   const record = await MaterialRecord.findOne({ where: { slug } });
   return record ? materialSchema.parse(record.properties) : null;
 }
@@ -110,7 +107,6 @@ export async function findMaterial(slug: string): Promise<Material | null> {
 export type MaterialSave = { ok: true; refreshed: number } | { ok: false; errors: Record<string, string[]> };
 
 export async function updateMaterial(actor: DeskActor, slug: string, values: MaterialFormValues): Promise<MaterialSave | null> {
-  const sequelize = models();
   const parsed = materialSchema.safeParse(candidate(slug, values));
   if (!parsed.success) {
     const errors: Record<string, string[]> = {};
@@ -132,13 +128,14 @@ export async function updateMaterial(actor: DeskActor, slug: string, values: Mat
 
     // Published details built from this material carry its numbers in their projection.
     const library = buildMaterialLibrary((await MaterialRecord.findAll({ attributes: ["properties"], transaction })).map((row) => row.properties));
-    const live = await Detail.findAll({ where: { publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null }, transaction });
-    const revisions = await DetailRevision.findAll({ where: { id: live.map((detail) => detail.publishedRevisionId ?? 0) }, attributes: ["id", "frontMatter", "bodyMd"], transaction });
-    const byId = new Map(revisions.map((revision) => [revision.id, revision]));
+    const live = await Detail.scope("live").findAll({
+      include: [{ model: DetailRevision, as: "publishedRevision", attributes: ["id", "frontMatter", "bodyMd"], required: true }],
+      transaction,
+    });
     let count = 0;
     for (const detail of live) {
-      const revision = byId.get(detail.publishedRevisionId ?? 0);
-      const front = revision?.frontMatter as DetailFrontMatter | undefined;
+      const revision = detail.publishedRevision;
+      const front = revision?.frontMatter;
       if (!revision || !front?.layers.some((layer) => layer.material === slug || layer.framing?.material === slug)) continue;
       await detail.update(buildProjection(front, revision.bodyMd, library), { transaction });
       count++;

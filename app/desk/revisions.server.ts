@@ -1,11 +1,11 @@
-import { createHash } from "node:crypto";
 import { Op } from "sequelize";
-import { roleAtLeast } from "~/auth/roles";
+import { contentHash } from "~/vocabulary/content-hash.server";
+import { EDITABLE_REVISION_STATES, OPEN_REVISION_STATES, REVISION_STATE_LABELS, isEditableRevisionState, type RevisionState } from "~/vocabulary/revision-states";
+import { roleAtLeast } from "~/vocabulary/roles";
 import { buildProjection, publishRevision, withdrawDetail } from "~/catalogue/publish.server";
 import { materialLibrary } from "~/catalogue/materials.server";
 import type { DetailFrontMatter } from "~/content/detail-schema";
-import { Detail, DetailRevision, DetailSet, ReviewComment, User, models } from "~/models";
-import type { RevisionState } from "~/models/detail-revision";
+import { Detail, DetailRevision, DetailSet, ReviewComment, User, sequelize } from "~/models/index.server";
 import { REVIEW_SECTIONS, type ReviewSection } from "./review-sections";
 import { validateDraft, type DraftFormValues, type FieldErrors } from "./draft-form";
 import { alertSavers } from "./saved.server";
@@ -27,13 +27,6 @@ export interface DeskActor {
   role: User["role"];
 }
 
-const OPEN_STATES: RevisionState[] = ["draft", "in_review", "changes_requested"];
-const EDITABLE_STATES: RevisionState[] = ["draft", "changes_requested"];
-
-function hashOf(front: DetailFrontMatter, body: string): string {
-  return createHash("sha256").update(JSON.stringify({ frontMatter: front, body })).digest("hex");
-}
-
 function today(): string {
   return new Date().toISOString().slice(0, 10);
 }
@@ -47,7 +40,6 @@ export type SaveOutcome = { ok: true; revisionId: number } | { ok: false; errors
 
 /** A new detail: its first revision as a draft. The detail stays out of the catalogue until published. */
 export async function createDetailDraft(author: DeskActor, values: DraftFormValues): Promise<SaveOutcome> {
-  const sequelize = models();
   const validation = validateDraft(values, { author: author.displayName, revision: 1, revised: today(), forSubmission: false, ...(await knownNames()) });
   if (!validation.ok) return validation;
   const { front, body } = validation;
@@ -56,7 +48,7 @@ export async function createDetailDraft(author: DeskActor, values: DraftFormValu
   return sequelize.transaction(async (transaction) => {
     const detail = await Detail.create({ slug: front.slug, ...buildProjection(front, body, library), publishedRevisionId: null, publishedAt: null }, { transaction });
     const revision = await DetailRevision.create(
-      { detailId: detail.id, number: 1, state: "draft", title: front.title, summary: front.summary, bodyMd: body, frontMatter: front, changeNote: null, authorId: author.id, authorName: author.displayName, contentHash: hashOf(front, body) },
+      { detailId: detail.id, number: 1, state: "draft", title: front.title, summary: front.summary, bodyMd: body, frontMatter: front, changeNote: null, authorId: author.id, authorName: author.displayName, contentHash: contentHash(front, body) },
       { transaction },
     );
     return { ok: true as const, revisionId: revision.id };
@@ -65,21 +57,20 @@ export async function createDetailDraft(author: DeskActor, values: DraftFormValu
 
 /** The open revision of a published detail, or a new draft copied from the published one. Never touches the published revision. */
 export async function startRevision(author: DeskActor, slug: string): Promise<{ revisionId: number; created: boolean }> {
-  const sequelize = models();
   return sequelize.transaction(async (transaction) => {
     const detail = await Detail.findOne({ where: { slug }, transaction, lock: transaction.LOCK.UPDATE });
     if (!detail) throw new DeskError(404, `No detail “${slug}”.`);
-    const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: OPEN_STATES } }, order: [["number", "DESC"]], transaction });
+    const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: OPEN_REVISION_STATES } }, order: [["number", "DESC"]], transaction });
     if (open) return { revisionId: open.id, created: false };
     if (!detail.publishedRevisionId) throw new DeskError(409, "This detail has no published revision to start from.");
     const source = await DetailRevision.findByPk(detail.publishedRevisionId, { transaction });
     const latest = await DetailRevision.max<number, DetailRevision>("number", { where: { detailId: detail.id }, transaction });
     if (!source) throw new DeskError(409, "The published revision is missing.");
     const number = (latest ?? source.number) + 1;
-    const { change_note: _note, ...rest } = source.frontMatter as DetailFrontMatter;
-    const front = { ...rest, revision: number, revised: today(), author: author.displayName } as DetailFrontMatter;
+    const { change_note: _note, ...rest } = source.frontMatter;
+    const front: DetailFrontMatter = { ...rest, revision: number, revised: today(), author: author.displayName };
     const revision = await DetailRevision.create(
-      { detailId: detail.id, number, state: "draft", title: front.title, summary: front.summary, bodyMd: source.bodyMd, frontMatter: front, changeNote: null, authorId: author.id, authorName: author.displayName, contentHash: hashOf(front, source.bodyMd) },
+      { detailId: detail.id, number, state: "draft", title: front.title, summary: front.summary, bodyMd: source.bodyMd, frontMatter: front, changeNote: null, authorId: author.id, authorName: author.displayName, contentHash: contentHash(front, source.bodyMd) },
       { transaction },
     );
     return { revisionId: revision.id, created: true };
@@ -90,15 +81,14 @@ async function ownOpenRevision(actor: DeskActor, revisionId: number): Promise<De
   const revision = await DetailRevision.findByPk(revisionId);
   if (!revision) throw new DeskError(404, "No such revision.");
   if (revision.authorId !== actor.id) throw new DeskError(403, "Only the revision's author edits or submits it.");
-  if (!EDITABLE_STATES.includes(revision.state)) throw new DeskError(409, `This revision is ${revision.state.replace("_", " ")} and cannot be edited.`);
+  if (!isEditableRevisionState(revision.state)) throw new DeskError(409, `This revision is ${REVISION_STATE_LABELS[revision.state]} and cannot be edited.`);
   return revision;
 }
 
 /** Saves the form into the author's draft (and optionally submits it); invalid input changes nothing. */
 export async function saveRevision(actor: DeskActor, revisionId: number, values: DraftFormValues, submit: boolean): Promise<SaveOutcome> {
-  const sequelize = models();
   const revision = await ownOpenRevision(actor, revisionId);
-  const previous = revision.frontMatter as DetailFrontMatter;
+  const previous = revision.frontMatter;
   // The slug belongs to the detail, not the form: a draft cannot move another detail's address.
   const fixedValues = { ...values, slug: previous.slug };
   const validation = validateDraft(fixedValues, { author: revision.authorName, revision: revision.number, revised: today(), forSubmission: submit, keep: previous, ...(await knownNames()) });
@@ -112,7 +102,7 @@ export async function saveRevision(actor: DeskActor, revisionId: number, values:
         bodyMd: body,
         frontMatter: front,
         changeNote: front.change_note ?? null,
-        contentHash: hashOf(front, body),
+        contentHash: contentHash(front, body),
         ...(submit ? { state: "in_review" as const, submittedAt: new Date() } : {}),
       },
       { transaction },
@@ -134,7 +124,7 @@ async function submittedRevisionFor(reviewer: DeskActor, revisionId: number): Pr
   if (!revision) throw new DeskError(404, "No such revision.");
   // A second pair of eyes: never one's own work (DESIGN.md, People and roles).
   if (revision.authorId === reviewer.id) throw new DeskError(403, "You wrote this revision; another reviewer must review it.");
-  if (revision.state !== "in_review") throw new DeskError(409, `This revision is ${revision.state.replace("_", " ")}, not waiting for review.`);
+  if (revision.state !== "in_review") throw new DeskError(409, `This revision is ${REVISION_STATE_LABELS[revision.state]}, not waiting for review.`);
   return revision;
 }
 
@@ -144,7 +134,6 @@ function cleanComments(input: ReviewInput): { section: ReviewSection; body: stri
 
 /** Sends a submission back to its author with comments per section. */
 export async function requestChanges(reviewer: DeskActor, revisionId: number, input: ReviewInput): Promise<void> {
-  const sequelize = models();
   const revision = await submittedRevisionFor(reviewer, revisionId);
   const comments = cleanComments(input);
   if (comments.length === 0) throw new DeskError(400, "Say what needs changing: write at least one comment.");
@@ -159,14 +148,13 @@ export async function requestChanges(reviewer: DeskActor, revisionId: number, in
  * superseded), then e-mails every member who saved the detail. Refused for the revision's own author.
  */
 export async function approveAndPublish(reviewer: DeskActor, revisionId: number, input: ReviewInput = { comments: {} }): Promise<{ slug: string; number: number; alerted: number }> {
-  const sequelize = models();
   const revision = await submittedRevisionFor(reviewer, revisionId);
   const now = new Date();
-  const front = { ...(revision.frontMatter as DetailFrontMatter), reviewer: reviewer.displayName, ...(revision.number > 1 ? { revised: now.toISOString().slice(0, 10) } : {}) };
+  const front = { ...revision.frontMatter, reviewer: reviewer.displayName, ...(revision.number > 1 ? { revised: now.toISOString().slice(0, 10) } : {}) };
   const publication = await sequelize.transaction(async (transaction) => {
     const comments = cleanComments(input);
     if (comments.length) await ReviewComment.bulkCreate(comments.map((comment) => ({ revisionId: revision.id, authorId: reviewer.id, ...comment })), { transaction });
-    await revision.update({ frontMatter: front, contentHash: hashOf(front, revision.bodyMd) }, { transaction });
+    await revision.update({ frontMatter: front, contentHash: contentHash(front, revision.bodyMd) }, { transaction });
     return publishRevision(revision.id, { id: reviewer.id, displayName: reviewer.displayName }, { transaction, at: now });
   });
   const alerted = await alertSavers(publication.detail, publication.revision);
@@ -178,8 +166,8 @@ export async function withdrawPublished(actor: DeskActor, slug: string, reason: 
   if (!roleAtLeast(actor.role, "reviewer")) throw new DeskError(403, "Only a reviewer withdraws a published detail.");
   if (reason.trim().length < 10) throw new DeskError(400, "Give the reason for withdrawing (at least 10 characters); it goes in the audit log.");
   const detail = await Detail.findOne({ where: { slug } });
-  if (!detail?.publishedRevisionId || detail.withdrawnAt) throw new DeskError(409, "Only a published detail can be withdrawn.");
-  await models().transaction((transaction) => withdrawDetail(detail.id, actor, reason.trim(), transaction));
+  if (!detail?.isLive()) throw new DeskError(409, "Only a published detail can be withdrawn.");
+  await sequelize.transaction((transaction) => withdrawDetail(detail.id, actor, reason.trim(), transaction));
 }
 
 export interface RevisionRow {
@@ -214,9 +202,8 @@ async function rows(where: Record<string, unknown>, limit = 50, order: "updatedA
 
 /** What the desk's front page lists for this person. */
 export async function deskOverview(actor: DeskActor) {
-  models();
   const [drafts, submissions, queue, published] = await Promise.all([
-    rows({ authorId: actor.id, state: { [Op.in]: EDITABLE_STATES } }),
+    rows({ authorId: actor.id, state: { [Op.in]: EDITABLE_REVISION_STATES } }),
     rows({ authorId: actor.id, state: { [Op.in]: ["in_review", "published"] } }, 20),
     roleAtLeast(actor.role, "reviewer") ? rows({ state: "in_review", authorId: { [Op.or]: [{ [Op.ne]: actor.id }, { [Op.is]: null }] } }) : Promise.resolve(null),
     rows({ state: "published" }, 10, "publishedAt"),
@@ -226,7 +213,6 @@ export async function deskOverview(actor: DeskActor) {
 
 /** Every round's comments: a resubmission keeps its review history across the author's edits. */
 export async function commentsOn(revisionId: number): Promise<{ id: number; section: string; body: string; authorName: string; at: string }[]> {
-  models();
   const comments = await ReviewComment.findAll({ where: { revisionId }, order: [["id", "ASC"]] });
   const authors = await User.findAll({ attributes: ["id", "displayName"], where: { id: comments.map((c) => c.authorId ?? 0) } });
   const names = new Map(authors.map((author) => [author.id, author.displayName]));
@@ -235,7 +221,6 @@ export async function commentsOn(revisionId: number): Promise<{ id: number; sect
 
 /** A revision with its detail and the detail's published revision (when that is another one). */
 export async function loadRevision(revisionId: number): Promise<{ revision: DetailRevision; detail: Detail; published: DetailRevision | null } | null> {
-  models();
   const revision = await DetailRevision.findByPk(revisionId);
   if (!revision) return null;
   const detail = await Detail.findByPk(revision.detailId);

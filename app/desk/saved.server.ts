@@ -1,22 +1,20 @@
 import { env } from "~/config/env.server";
 import { sendMailOrLog } from "~/mail/mailer.server";
 import { revisionAlertMail } from "~/mail/templates";
-import { Detail, DetailRevision, SavedDetail, User, models } from "~/models";
+import { Detail, DetailRevision, SavedDetail, User } from "~/models/index.server";
 
 // Members save details to find them again and to hear when one is revised.
 
 export async function isSaved(userId: number, detailId: number): Promise<boolean> {
-  models();
   return (await SavedDetail.count({ where: { userId, detailId } })) > 0;
 }
 
 /** Saves or forgets a published detail for this member; answers whether it is saved afterwards. */
 export async function setSaved(userId: number, slug: string, saved: boolean): Promise<boolean | null> {
-  models();
   const detail = await Detail.findOne({ where: { slug }, attributes: ["id", "publishedRevisionId", "withdrawnAt"] });
   if (!detail) return null;
   if (saved) {
-    if (!detail.publishedRevisionId || detail.withdrawnAt) return null;
+    if (!detail.isLive()) return null;
     await SavedDetail.findOrCreate({ where: { userId, detailId: detail.id }, defaults: { userId, detailId: detail.id } });
   } else {
     await SavedDetail.destroy({ where: { userId, detailId: detail.id } });
@@ -33,19 +31,17 @@ export interface SavedRow {
 }
 
 export async function listSaved(userId: number): Promise<SavedRow[]> {
-  models();
   const saved = await SavedDetail.findAll({ where: { userId }, order: [["createdAt", "DESC"]] });
   const details = await Detail.findAll({ where: { id: saved.map((row) => row.detailId) }, attributes: ["id", "slug", "title", "tier", "publishedRevisionId", "withdrawnAt"] });
   const byId = new Map(details.map((detail) => [detail.id, detail]));
   return saved.flatMap((row) => {
     const detail = byId.get(row.detailId);
-    return detail ? [{ slug: detail.slug, title: detail.title, tier: detail.tier, savedAt: row.createdAt.toISOString(), live: Boolean(detail.publishedRevisionId && !detail.withdrawnAt) }] : [];
+    return detail ? [{ slug: detail.slug, title: detail.title, tier: detail.tier, savedAt: row.createdAt.toISOString(), live: detail.isLive() }] : [];
   });
 }
 
 /** E-mails every member who saved the detail about its new revision, with the change note. Returns how many were sent. */
 export async function alertSavers(detail: Detail, revision: DetailRevision): Promise<number> {
-  models();
   const saved = await SavedDetail.findAll({ where: { detailId: detail.id }, attributes: ["userId"] });
   if (saved.length === 0) return 0;
   const users = await User.findAll({ where: { id: saved.map((row) => row.userId) }, attributes: ["id", "email", "displayName", "emailVerifiedAt"] });

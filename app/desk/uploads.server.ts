@@ -3,9 +3,10 @@ import type { Readable } from "node:stream";
 import createDOMPurify from "dompurify";
 import { JSDOM } from "jsdom";
 import { canReadDetail, type Viewer } from "~/access/premium.server";
-import { roleAtLeast } from "~/auth/roles";
-import { Detail, DetailRevision, Upload, models } from "~/models";
-import type { UploadType } from "~/models/upload";
+import { isEditableRevisionState } from "~/vocabulary/revision-states";
+import { roleAtLeast } from "~/vocabulary/roles";
+import { Detail, DetailRevision, Upload } from "~/models/index.server";
+import type { UploadType } from "~/models/upload.server";
 import { blobStorage } from "~/storage/storage.server";
 import { claimedExtension, EXTENSION, sniffUploadType } from "./file-type";
 import { DeskError, type DeskActor } from "./revisions.server";
@@ -42,7 +43,6 @@ function row(upload: Upload): UploadRow {
 }
 
 export async function uploadsOf(revisionId: number): Promise<UploadRow[]> {
-  models();
   return (await Upload.findAll({ where: { revisionId }, order: [["id", "ASC"]] })).map(row);
 }
 
@@ -54,11 +54,10 @@ function displayName(name: string): string {
 
 /** Checks, cleans and stores one file for the author's open revision. */
 export async function storeUpload(actor: DeskActor, revisionId: number, file: File, caption: string): Promise<UploadRow> {
-  models();
   const revision = await DetailRevision.findByPk(revisionId);
   if (!revision) throw new DeskError(404, "No such revision.");
   if (revision.authorId !== actor.id) throw new DeskError(403, "Only the revision's author attaches files to it.");
-  if (revision.state !== "draft" && revision.state !== "changes_requested") throw new DeskError(409, "Files are attached while the revision is a draft.");
+  if (!isEditableRevisionState(revision.state)) throw new DeskError(409, "Files are attached while the revision is a draft.");
   if (file.size > MAX_UPLOAD_BYTES) throw new DeskError(400, "That file is larger than 5 MB.");
   let bytes: Buffer = Buffer.from(await file.arrayBuffer());
   if (bytes.length > MAX_UPLOAD_BYTES) throw new DeskError(400, "That file is larger than 5 MB.");
@@ -96,11 +95,10 @@ export async function storeUpload(actor: DeskActor, revisionId: number, file: Fi
 }
 
 export async function removeUpload(actor: DeskActor, uploadId: number): Promise<void> {
-  models();
   const upload = await Upload.findByPk(uploadId);
   if (!upload) throw new DeskError(404, "No such file.");
   const revision = await DetailRevision.findByPk(upload.revisionId);
-  if (!revision || revision.authorId !== actor.id || (revision.state !== "draft" && revision.state !== "changes_requested")) throw new DeskError(403, "Only the author removes files from an open revision.");
+  if (!revision || revision.authorId !== actor.id || !isEditableRevisionState(revision.state)) throw new DeskError(403, "Only the author removes files from an open revision.");
   await upload.destroy();
   await blobStorage().remove(upload.storageKey);
 }
@@ -119,13 +117,12 @@ export interface ServedUpload {
  * published file answers "premium" to those without access.
  */
 export async function readUpload(viewer: Viewer | null, uploadId: number): Promise<ServedUpload | "premium" | null> {
-  models();
   const upload = await Upload.findByPk(uploadId);
   if (!upload) return null;
   const revision = await DetailRevision.findByPk(upload.revisionId, { attributes: ["id", "detailId", "state"] });
   const detail = revision ? await Detail.findByPk(revision.detailId, { attributes: ["id", "tier", "publishedRevisionId", "withdrawnAt"] }) : null;
   if (!revision || !detail) return null;
-  const live = revision.state === "published" && detail.publishedRevisionId === revision.id && !detail.withdrawnAt;
+  const live = revision.state === "published" && detail.publishedRevisionId === revision.id && detail.isLive();
   const editor = viewer !== null && roleAtLeast(viewer.role, "editor");
   if (!editor && !live) return null;
   if (!editor && !(await canReadDetail(viewer, detail))) return "premium";

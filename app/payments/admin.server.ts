@@ -1,5 +1,5 @@
-import { PaymentEvent, Payment, User, models } from "~/models";
-import type { PaymentEventResult } from "~/models/payment-event";
+import { PaymentEvent, Payment, User } from "~/models/index.server";
+import type { PaymentEventResult } from "~/models/payment-event.server";
 import { formatMoney } from "./money";
 
 export interface AdminPaymentsView {
@@ -10,7 +10,6 @@ export interface AdminPaymentsView {
 
 /** The newest webhook events with their processing result, and the newest payments. */
 export async function adminPaymentsView(filter: { result?: PaymentEventResult }): Promise<AdminPaymentsView> {
-  models();
   const [events, payments, grouped] = await Promise.all([
     PaymentEvent.findAll({ where: filter.result ? { result: filter.result } : {}, attributes: ["id", "type", "stripeCreated", "receivedAt", "result", "message"], order: [["receivedAt", "DESC"]], limit: 200 }),
     Payment.findAll({ order: [["paidAt", "DESC"]], limit: 100 }),

@@ -1,12 +1,14 @@
-import { Op } from "sequelize";
-import { DetailSet, Download, Entitlement, type User, models } from "~/models";
+import { DetailSet, Download, Entitlement, type User } from "~/models/index.server";
 import { findPlan } from "./catalogue.server";
 import { receiptsFor, type ReceiptRow } from "./receipts.server";
 import { stripe } from "./stripe.server";
+import { isLive, type EntitlementStatus } from "~/vocabulary/entitlements";
 
 export interface PlanSummary {
   name: string;
-  status: "active" | "past_due" | "canceled" | "expired";
+  status: EntitlementStatus;
+  /** Grants access now (the one rule: isLive); only a live plan can be stopped or kept running. */
+  live: boolean;
   renewsOrEndsAt: string | null;
   cancelAtPeriodEnd: boolean;
 }
@@ -25,13 +27,14 @@ async function currentPlan(userId: number): Promise<Entitlement | null> {
 
 /** What the billing page shows, read from the entitlements the webhooks wrote. */
 export async function billingOverview(user: User): Promise<BillingOverview> {
-  models();
-  const [plan, sets, receipts, downloads] = await Promise.all([
+  const now = new Date();
+  const [plan, boughtSets, receipts, downloads] = await Promise.all([
     currentPlan(user.id),
-    Entitlement.findAll({ where: { userId: user.id, kind: "set", status: { [Op.in]: ["active", "past_due"] } }, order: [["createdAt", "DESC"]] }),
+    Entitlement.findAll({ where: { userId: user.id, kind: "set" }, order: [["createdAt", "DESC"]] }),
     receiptsFor(user.id),
     Download.findAll({ where: { userId: user.id }, order: [["createdAt", "DESC"]], limit: 20 }),
   ]);
+  const sets = boughtSets.filter((set) => isLive(set, now));
   const setRows = await DetailSet.findAll({ where: { id: [...new Set([...sets.map((s) => s.setId), ...downloads.map((d) => d.setId)].filter((id): id is number => id !== null))] } });
   const setById = new Map(setRows.map((set) => [set.id, set]));
   return {
@@ -39,6 +42,7 @@ export async function billingOverview(user: User): Promise<BillingOverview> {
       ? {
           name: findPlan(plan.planSlug ?? "")?.name ?? "Plan",
           status: plan.status,
+          live: isLive(plan, now),
           renewsOrEndsAt: plan.currentPeriodEnd?.toISOString() ?? null,
           cancelAtPeriodEnd: plan.cancelAtPeriodEnd,
         }
@@ -56,8 +60,8 @@ export type PlanChange = { ok: true; cancelAtPeriodEnd: boolean } | { ok: false;
  * The entitlement changes when the service's webhook confirms, like every other change.
  */
 export async function requestPlanEnd(user: User, cancelAtPeriodEnd: boolean): Promise<PlanChange> {
-  models();
-  const plan = await Entitlement.findOne({ where: { userId: user.id, kind: "plan", status: { [Op.in]: ["active", "past_due"] } } });
+  const plans = await Entitlement.findAll({ where: { userId: user.id, kind: "plan" } });
+  const plan = plans.find((candidate) => isLive(candidate, new Date()));
   if (!plan?.stripeSubscriptionId) return { ok: false, message: "You have no running plan to change." };
   await stripe().subscriptions.update(plan.stripeSubscriptionId, { cancel_at_period_end: cancelAtPeriodEnd });
   return { ok: true, cancelAtPeriodEnd };

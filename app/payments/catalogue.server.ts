@@ -1,5 +1,5 @@
 import type Stripe from "stripe";
-import { DetailSet, models } from "~/models";
+import { DetailSet } from "~/models/index.server";
 import { formatMoney, formatRecurring, type BillingInterval } from "./money";
 import { stripe } from "./stripe.server";
 
@@ -67,13 +67,11 @@ export interface SetOffer {
 }
 
 export async function setOffers(): Promise<SetOffer[]> {
-  models();
   const sets = await DetailSet.findAll({ order: [["title", "ASC"]] });
   return sets.map(toOffer);
 }
 
 export async function findSetOffer(slug: string): Promise<SetOffer | null> {
-  models();
   const set = await DetailSet.findOne({ where: { slug } });
   return set ? toOffer(set) : null;
 }

@@ -1,6 +1,6 @@
 import { downloadableSetIds, hasLivePlan } from "~/access/premium.server";
 import { env } from "~/config/env.server";
-import { DetailSet, Entitlement, type User, models } from "~/models";
+import { DetailSet, Entitlement, type User } from "~/models/index.server";
 import { ensurePrice, findPlan, findSetOffer, planPriceSpec, setPriceSpec } from "./catalogue.server";
 import { stripe } from "./stripe.server";
 
@@ -32,7 +32,6 @@ const RETURN_PATH = "/account/checkout/return?session_id={CHECKOUT_SESSION_ID}";
  * Grants nothing: the entitlement comes from the signed webhook when the payment is done.
  */
 export async function startCheckout(user: User, purchase: Purchase): Promise<CheckoutStart> {
-  models();
   const viewer = { id: user.id, role: user.role };
   const customer = await customerFor(user);
   const common = {
@@ -84,7 +83,6 @@ export type CheckoutState =
  * "granted"; the service's session says whether the payment went through at all.
  */
 export async function readCheckoutState(user: User, sessionId: string): Promise<CheckoutState> {
-  models();
   const granted = await Entitlement.findOne({ where: { userId: user.id, stripeCheckoutSessionId: sessionId } });
   if (granted) {
     const set = granted.setId ? await DetailSet.findByPk(granted.setId) : null;

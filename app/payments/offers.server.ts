@@ -1,6 +1,6 @@
 import { Op } from "sequelize";
 import { downloadableSetIds, hasLivePlan, type Viewer } from "~/access/premium.server";
-import { Detail, DetailSet, models } from "~/models";
+import { Detail, DetailSet } from "~/models/index.server";
 import { PLANS, planPriceLabel, setOffers, type SetOffer } from "./catalogue.server";
 
 export interface PlanCard {
@@ -25,19 +25,18 @@ export interface Offers {
 
 /** Plans and sets as the pricing and sets pages show them to this viewer. */
 export async function offersFor(viewer: Viewer | null): Promise<Offers> {
-  models();
   const [sets, members, owned, hasPlan] = await Promise.all([
     setOffers(),
     DetailSet.findAll({
       attributes: ["id"],
-      include: [{ model: Detail, as: "details", attributes: ["slug", "title", "tier"], where: { publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null }, required: false }],
+      include: [{ model: Detail.scope("live"), as: "details", attributes: ["slug", "title", "tier"], required: false }],
     }),
     downloadableSetIds(viewer),
     hasLivePlan(viewer),
   ]);
   const detailsBySet = new Map(
     members.map((set) => {
-      const details = ((set as DetailSet & { details?: Detail[] }).details ?? []).map((d) => ({ slug: d.slug, title: d.title, tier: d.tier }));
+      const details = (set.details ?? []).map((d) => ({ slug: d.slug, title: d.title, tier: d.tier }));
       return [set.id, details.sort((a, b) => a.title.localeCompare(b.title))] as const;
     }),
   );

@@ -8,13 +8,14 @@ import { materialLibrary } from "~/catalogue/materials.server";
 import { plainText } from "~/catalogue/search-text";
 import { checkAssemblyForSite } from "~/catalogue/site-check.server";
 import type { DetailFrontMatter } from "~/content/detail-schema";
-import { CLIMATE_ZONE_IDS, type ClimateZoneId } from "~/content/zones";
 import type { Material } from "~/envelope";
-import type { UnitSystem } from "~/envelope/units";
-import { markdownSection } from "~/markdown/render.server";
-import { Detail, DetailRevision, DetailSet, Download, MaterialRecord, models } from "~/models";
+import { Detail, DetailRevision, DetailSet, Download, MaterialRecord } from "~/models/index.server";
 import { blobStorage } from "~/storage/storage.server";
 import { renderDetailSheet } from "~/packs/sheet-pdf.server";
+import { BODY_SECTION_HEADINGS, bodySection } from "~/vocabulary/body-sections";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
+import { isClimateZoneId, type ClimateZoneId } from "~/vocabulary/climate-zones";
+import { UNIT_SYSTEM_LABELS, parseUnitSystem, type UnitSystem } from "~/vocabulary/units";
 
 // A pack is a set's download: one PDF sheet and one Markdown source file per published detail.
 // Packs are built once per (set, published revisions, material library, units, zone) and kept in blob
@@ -32,11 +33,11 @@ export interface PackRequest {
 }
 
 export function parsePackRequest(search: URLSearchParams, fallbackUnits: UnitSystem): PackRequest | null {
-  const units = search.get("units") ?? fallbackUnits;
+  const units = search.has("units") ? parseUnitSystem(search.get("units")) : fallbackUnits;
   const zone = search.get("zone") ?? "own";
-  if (units !== "si" && units !== "ip") return null;
-  if (zone !== "own" && !(CLIMATE_ZONE_IDS as readonly string[]).includes(zone)) return null;
-  return { units, zone: zone as PackZone };
+  if (!units) return null;
+  if (zone !== "own" && !isClimateZoneId(zone)) return null;
+  return { units, zone };
 }
 
 interface PackMember {
@@ -53,18 +54,18 @@ interface PackMember {
 }
 
 async function packMembers(setId: number): Promise<PackMember[]> {
-  const details = await Detail.findAll({
+  const details = await Detail.scope("live").findAll({
     attributes: ["id", "slug", "publishedRevisionId"],
-    where: { publishedRevisionId: { [Op.ne]: null }, withdrawnAt: null },
-    include: [{ model: DetailSet, as: "sets", attributes: [], where: { id: setId }, required: true }],
+    include: [
+      { model: DetailSet, as: "sets", attributes: [], where: { id: setId }, required: true },
+      { model: DetailRevision, as: "publishedRevision", required: true },
+    ],
     order: [["slug", "ASC"]],
   });
-  const revisions = await DetailRevision.findAll({ where: { id: details.map((d) => d.publishedRevisionId ?? 0) } });
-  const byId = new Map(revisions.map((r) => [r.id, r]));
   return details.flatMap((detail) => {
-    const revision = byId.get(detail.publishedRevisionId ?? 0);
+    const revision = detail.publishedRevision;
     if (!revision) return [];
-    return [{ slug: detail.slug, revisionId: revision.id, revisionNumber: revision.number, contentHash: revision.contentHash, frontMatter: revision.frontMatter as DetailFrontMatter, body: revision.bodyMd, publishedAt: revision.publishedAt, authorName: revision.authorName, reviewerName: revision.reviewerName, changeNote: revision.changeNote }];
+    return [{ slug: detail.slug, revisionId: revision.id, revisionNumber: revision.number, contentHash: revision.contentHash, frontMatter: revision.frontMatter, body: revision.bodyMd, publishedAt: revision.publishedAt, authorName: revision.authorName, reviewerName: revision.reviewerName, changeNote: revision.changeNote }];
   });
 }
 
@@ -87,20 +88,19 @@ const PACK_README = (setTitle: string, request: PackRequest, members: PackMember
   [
     `Dryside pack: ${setTitle}`,
     "",
-    `Units: ${request.units === "si" ? "SI" : "inch-pound"}. Site check: ${request.zone === "own" ? "each detail at the first climate zone it is written for" : `climate zone ${request.zone}`}.`,
+    `Units: ${UNIT_SYSTEM_LABELS[request.units]}. Site check: ${request.zone === "own" ? "each detail at the first climate zone it is written for" : `climate zone ${request.zone}`}.`,
     "",
     "Contents (one PDF sheet and the Markdown source per detail):",
     ...members.map((m) => `  ${m.slug}.pdf / ${m.slug}.md (revision ${m.revisionNumber})`),
     "",
-    "Caution: these are reference designs, not approvals. Check each detail against the code adopted where you build,",
-    "the manufacturers' instructions for each product, and a licensed design professional where one is required.",
+    `Caution: ${STANDING_CAUTION}`,
     "",
   ].join("\n");
 
 /** The "## Cautions" list of a body as plain sentences, one per bullet. */
 export function cautionsOf(body: string): string[] {
   const items: string[] = [];
-  for (const line of markdownSection(body, "Cautions").split("\n")) {
+  for (const line of bodySection(body, BODY_SECTION_HEADINGS.cautions).split("\n")) {
     const bullet = /^\s*(?:[-*+]|\d+[.)])\s+(.*)$/.exec(line);
     if (bullet) items.push(bullet[1]);
     else if (line.trim() && items.length > 0) items[items.length - 1] += ` ${line.trim()}`;
@@ -199,7 +199,6 @@ export type PackDownload =
  * logs the download and returns the stream.
  */
 export async function downloadPack(viewer: Viewer, setSlug: string, request: PackRequest): Promise<PackDownload> {
-  models();
   const set = await DetailSet.findOne({ where: { slug: setSlug } });
   if (!set) return { ok: false, status: 404, message: `No set called “${setSlug}”.` };
   const allowed = await downloadableSetIds(viewer);

@@ -1,6 +1,6 @@
 import { receiptMail } from "~/mail/templates";
 import { sendMailOrLog } from "~/mail/mailer.server";
-import { Payment, type User, models } from "~/models";
+import { Payment, type User } from "~/models/index.server";
 import { formatMoney } from "./money";
 
 export interface PaymentRecord {
@@ -20,7 +20,6 @@ export interface PaymentRecord {
  * stays listed on the billing page and receipt_sent_at stays empty.
  */
 export async function recordPayment(record: PaymentRecord): Promise<boolean> {
-  models();
   const where = record.stripeInvoiceId ? { stripeInvoiceId: record.stripeInvoiceId } : { stripeCheckoutSessionId: record.stripeCheckoutSessionId };
   let payment: Payment;
   let created: boolean;
@@ -67,7 +66,6 @@ export interface ReceiptRow {
 }
 
 export async function receiptsFor(userId: number): Promise<ReceiptRow[]> {
-  models();
   const rows = await Payment.findAll({ where: { userId }, order: [["paidAt", "DESC"]], limit: 100 });
   return rows.map((row) => ({ id: row.id, description: row.description, amount: formatMoney(row.amountCents, row.currency), paidAt: row.paidAt.toISOString(), emailed: row.receiptSentAt !== null }));
 }

@@ -1,9 +1,9 @@
 import type Stripe from "stripe";
 import { UniqueConstraintError, type Transaction } from "sequelize";
 import { env } from "~/config/env.server";
-import { DetailSet, Entitlement, PaymentEvent, User, models } from "~/models";
-import type { EntitlementStatus } from "~/models/entitlement";
-import type { PaymentEventResult } from "~/models/payment-event";
+import { DetailSet, Entitlement, PaymentEvent, User, sequelize } from "~/models/index.server";
+import type { EntitlementStatus } from "~/vocabulary/entitlements";
+import type { PaymentEventResult } from "~/models/payment-event.server";
 import { findPlan, planForLookupKey } from "./catalogue.server";
 import { recordPayment } from "./receipts.server";
 import { stripe } from "./stripe.server";
@@ -30,7 +30,6 @@ interface Applied {
 
 /** Verifies, records and applies one webhook delivery. */
 export async function handlePaymentWebhook(rawBody: string, signature: string | null): Promise<WebhookReply> {
-  models();
   if (!signature) return { status: 400, body: { received: false, error: "missing_signature" } };
   let event: Stripe.Event;
   try {
@@ -221,7 +220,7 @@ async function syncSubscription(subscriptionId: string, created: number, hints: 
   const customerId = idOf(subscription.customer);
 
   const attempt = async (): Promise<Applied> =>
-    models().transaction(async (transaction: Transaction) => {
+    sequelize.transaction(async (transaction: Transaction) => {
       const existing = await Entitlement.findOne({ where: { stripeSubscriptionId: subscriptionId }, transaction, lock: transaction.LOCK.UPDATE });
       if (existing) {
         if (existing.status === "canceled" && status !== "canceled") {

@@ -11,13 +11,17 @@ export function testServer() {
 
 export async function createEmptyDatabase(prefix = "t"): Promise<string> {
   const name = `${prefix}_${randomBytes(5).toString("hex")}`;
+  await createNamedDatabase(name);
+  return name;
+}
+
+async function createNamedDatabase(name: string): Promise<void> {
   const connection = await createConnection(testServer());
   try {
     await connection.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
   } finally {
     await connection.end();
   }
-  return name;
 }
 
 export async function dropDatabase(name: string): Promise<void> {
@@ -30,21 +34,21 @@ export async function dropDatabase(name: string): Promise<void> {
 }
 
 /**
- * Gives this test file its own migrated database and points the app's `db()` at it.
- * Call at the top level of a test file, before anything touches the database.
+ * Gives this test file its own migrated database: the one tests/setup/database-name.ts named before the
+ * app was imported, so the app's `sequelize` already points at it. Call at the top level of a test file.
  */
 export function useMigratedDatabase(): { name: () => string } {
-  let name = "";
+  const name = process.env.DB_NAME;
+  if (!name) throw new Error("DB_NAME is not set: vitest.config.ts must list tests/setup/database-name.ts in setupFiles");
   beforeAll(async () => {
-    name = await createEmptyDatabase();
-    process.env.DB_NAME = name;
-    const { db } = await import("~/db/sequelize.server");
+    await createNamedDatabase(name);
+    const { sequelize } = await import("~/db/sequelize.server");
     const { createMigrator } = await import("../../db/migrator.ts");
-    await createMigrator(db()).up();
+    await createMigrator(sequelize).up();
   });
   afterAll(async () => {
-    const { db } = await import("~/db/sequelize.server");
-    await db().close();
+    const { sequelize } = await import("~/db/sequelize.server");
+    await sequelize.close();
     await dropDatabase(name);
   });
   return { name: () => name };

@@ -70,8 +70,7 @@ test("sign up, confirm the e-mail from the caught mail, sign in, see the account
 
 test("a signed-out session id cannot be replayed: the server-side row is revoked", async () => {
   const r = await routes();
-  const { User, models } = await import("~/models");
-  models();
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   await User.create({ email: "replay@example.test", displayName: "Replay Test", passwordHash: await hashPassword(password), emailVerifiedAt: new Date() });
   const browser = new RouteClient();
@@ -84,7 +83,7 @@ test("a signed-out session id cannot be replayed: the server-side row is revoked
 
 test("sign-in issues a new session id, so an id planted before sign-in is never promoted", async () => {
   const r = await routes();
-  const { Session } = await import("~/models");
+  const { Session } = await import("~/models/index.server");
   const browser = new RouteClient();
   await browser.submit(r.signIn.action, "/sign-in", { email: "replay@example.test", password });
   const before = await Session.count();

@@ -9,10 +9,9 @@ useMigratedDatabase();
 const password = "guards passphrase here"; // our own minimum is 12 characters
 
 async function signedIn(email: string, role: "member" | "editor" | "reviewer" | "admin") {
-  const { User, models } = await import("~/models");
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
-  models();
   const user = await User.create({ email, displayName: `Guard ${role}`, passwordHash: await hashPassword(password), role, emailVerifiedAt: new Date() });
   const browser = new RouteClient();
   await browser.submit(signIn.action, "/sign-in", { email, password });
@@ -61,7 +60,7 @@ test("an admin's role change is audited with who, from and to, and signs the per
   const result = await admin.submit(users.action, "/admin/users", { intent: "change-role", userId: String(memberUser.id), role: "editor" });
   expect(result.status).toBe(200);
 
-  const { AuditEvent } = await import("~/models");
+  const { AuditEvent } = await import("~/models/index.server");
   const event = await AuditEvent.findOne({ where: { action: "user.role_changed", subjectId: String(memberUser.id) } });
   expect(event).toMatchObject({ actorId: adminUser.id, subjectType: "user" });
   const details = typeof event!.details === "string" ? JSON.parse(event!.details) : event!.details;
@@ -89,13 +88,13 @@ test("an admin can sign a person out of every browser, and that is audited", asy
   const result = await admin.submit(users.action, "/admin/users", { intent: "revoke-sessions", userId: String(user.id) });
   expect(result.body).toMatchObject({ message: "Signed out of 1 browser." });
   expect((await member.root()).user).toBeNull();
-  const { AuditEvent } = await import("~/models");
+  const { AuditEvent } = await import("~/models/index.server");
   expect(await AuditEvent.count({ where: { action: "user.sessions_revoked", subjectId: String(user.id) } })).toBe(1);
 });
 
 test("sign-ins are audited", async () => {
   const { user } = await signedIn("audited@example.test", "member");
-  const { AuditEvent } = await import("~/models");
+  const { AuditEvent } = await import("~/models/index.server");
   expect(await AuditEvent.count({ where: { action: "user.signed_in", subjectId: String(user.id) } })).toBe(1);
 });
 

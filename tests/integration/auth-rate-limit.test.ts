@@ -8,8 +8,7 @@ useMigratedDatabase();
 const password = "the right passphrase"; // our own minimum is 12 characters
 
 async function member(email: string) {
-  const { User, models } = await import("~/models");
-  models();
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   return User.create({ email, displayName: "Limit Tester", passwordHash: await hashPassword(password), emailVerifiedAt: new Date() });
 }

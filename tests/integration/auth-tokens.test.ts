@@ -9,8 +9,7 @@ useMigratedDatabase();
 const password = "a long enough passphrase"; // our own minimum is 12 characters
 
 async function member(email: string) {
-  const { User, models } = await import("~/models");
-  models();
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   return User.create({ email, displayName: "Token Tester", passwordHash: await hashPassword(password), emailVerifiedAt: new Date() });
 }
@@ -46,7 +45,7 @@ test("a reset token expires after one hour and a verification token after 24 hou
 
 test("only the hash of a token is stored", async () => {
   const { issueToken } = await import("~/auth/tokens.server");
-  const { AuthToken } = await import("~/models");
+  const { AuthToken } = await import("~/models/index.server");
   const user = await member("hash@example.test");
   const token = await issueToken(user.id, "reset-password");
   const rows = await AuthToken.findAll({ where: { userId: user.id } });

@@ -13,8 +13,7 @@ function copyOfContent(): string {
 }
 
 async function counts() {
-  const { Detail, DetailRevision, MaterialRecord, DetailSet, models } = await import("~/models");
-  models();
+  const { Detail, DetailRevision, MaterialRecord, DetailSet } = await import("~/models/index.server");
   return {
     details: await Detail.count(),
     revisions: await DetailRevision.count(),
@@ -74,7 +73,7 @@ test("raising a file's revision adds a revision and supersedes the published one
   const summary = await importContent(dir);
   expect(summary.details.revised).toBe(1);
 
-  const { Detail, DetailRevision } = await import("~/models");
+  const { Detail, DetailRevision } = await import("~/models/index.server");
   const detail = await Detail.findOne({ where: { slug: file.replace(/\.md$/, "") } });
   const revisions = await DetailRevision.findAll({ where: { detailId: detail!.id }, order: [["number", "ASC"]] });
   expect(revisions.map((r) => [r.number, r.state])).toEqual([

@@ -31,7 +31,7 @@ const ids = {} as Record<Person, number>;
 beforeAll(async () => {
   const { importContent } = await import("~/catalogue/import.server");
   await importContent("content");
-  const { User } = await import("~/models");
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
   const passwordHash = await hashPassword(password);
@@ -85,7 +85,7 @@ async function startDraft(who: Person, slug: string): Promise<{ id: number; valu
 
 test("a draft goes to review, comes back with comments, is resubmitted, approved and published as the next revision", async () => {
   const r = await routes();
-  const { Detail, DetailRevision, AuditEvent, ReviewComment } = await import("~/models");
+  const { Detail, DetailRevision, AuditEvent, ReviewComment } = await import("~/models/index.server");
   const { getDetailView } = await import("~/catalogue/detail.server");
 
   // A member saves the detail, so the publication must reach them.
@@ -147,7 +147,7 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   expect((await DetailRevision.findByPk(firstRevisionId))!.state).toBe("superseded");
   const published = await DetailRevision.findByPk(id);
   expect(published).toMatchObject({ state: "published", reviewerName: "Corvin Aldersey", reviewerId: ids.reviewer });
-  expect((published!.frontMatter as { reviewer: string }).reviewer).toBe("Corvin Aldersey");
+  expect(published!.frontMatter.reviewer).toBe("Corvin Aldersey");
 
   const view = await getDetailView(FREE_SLUG, null);
   expect(view!.revision).toMatchObject({ number: 2, reviewerName: "Corvin Aldersey", authorName: "Maelis Ortega-Finch" });
@@ -164,7 +164,7 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
 
 test("a reviewer can never approve their own revision, and nothing changes when they try", async () => {
   const r = await routes();
-  const { Detail, DetailRevision, AuditEvent } = await import("~/models");
+  const { Detail, DetailRevision, AuditEvent } = await import("~/models/index.server");
   const { id, values } = await startDraft("reviewer", PREMIUM_SLUG);
   const submitted = await browsers.reviewer.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs({ ...values, change_note: "Cautions reordered for the crew." }, "submit"), { id: String(id) });
   expect(submitted.status).toBe(302);
@@ -190,7 +190,7 @@ test("a reviewer can never approve their own revision, and nothing changes when 
 
 test("an invalid form answers 400 with field errors, keeps what was typed, and saves nothing", async () => {
   const r = await routes();
-  const { DetailRevision } = await import("~/models");
+  const { DetailRevision } = await import("~/models/index.server");
   const slug = "rim-joist-cut-and-cobble-xps";
   const { id, values } = await startDraft("editor", slug);
   const before = await DetailRevision.findByPk(id);
@@ -222,7 +222,7 @@ test("an invalid form answers 400 with field errors, keeps what was typed, and s
 test("a new detail starts as a draft that stays out of the catalogue", async () => {
   const r = await routes();
   const { getDetailView } = await import("~/catalogue/detail.server");
-  const { DetailRevision, Detail } = await import("~/models");
+  const { DetailRevision, Detail } = await import("~/models/index.server");
   const pairs = formPairs(
     {
       slug: "test-wall-with-exterior-mineral-wool",
@@ -260,7 +260,7 @@ const SCRIPTED_SVG = `<?xml version="1.0"?><svg xmlns="http://www.w3.org/2000/sv
 test("uploads are typed by their bytes: a PNG named .svg is refused, a script-bearing SVG is stored sanitised", async () => {
   const { startRevision, DeskError } = await import("~/desk/revisions.server");
   const { storeUpload } = await import("~/desk/uploads.server");
-  const { Upload } = await import("~/models");
+  const { Upload } = await import("~/models/index.server");
   const { blobStorage } = await import("~/storage/storage.server");
   const editor = { id: ids.editor, displayName: people.editor.displayName, role: "editor" as const };
   const { revisionId } = await startRevision(editor, "floor-over-vented-crawl-fibreglass-batts");
@@ -296,7 +296,7 @@ test("a draft's files are for editors only; a published revision's files follow 
   const { startRevision, saveRevision, approveAndPublish } = await import("~/desk/revisions.server");
   const { storeUpload } = await import("~/desk/uploads.server");
   const { valuesFromFrontMatter } = await import("~/desk/draft-form");
-  const { DetailRevision } = await import("~/models");
+  const { DetailRevision } = await import("~/models/index.server");
   const editor = { id: ids.editor, displayName: people.editor.displayName, role: "editor" as const };
   const reviewer = { id: ids.reviewer, displayName: people.reviewer.displayName, role: "reviewer" as const };
   const visitor = new RouteClient();
@@ -319,7 +319,7 @@ test("a draft's files are for editors only; a published revision's files follow 
     expect(asEditor.headers.get("X-Content-Type-Options")).toBe("nosniff");
 
     const revision = await DetailRevision.findByPk(revisionId);
-    const values = valuesFromFrontMatter(revision!.frontMatter as never, revision!.bodyMd);
+    const values = valuesFromFrontMatter(revision!.frontMatter, revision!.bodyMd);
     const saved = await saveRevision(editor, revisionId, { ...values, change_note: "Site photo of the finished rim added." }, true);
     expect(saved.ok).toBe(true);
     await approveAndPublish(reviewer, revisionId);
@@ -330,7 +330,7 @@ test("a draft's files are for editors only; a published revision's files follow 
 
 test("a reviewer withdraws a published detail with a reason; an editor cannot", async () => {
   const r = await routes();
-  const { Detail, DetailRevision, AuditEvent } = await import("~/models");
+  const { Detail, DetailRevision, AuditEvent } = await import("~/models/index.server");
   const { getDetailView } = await import("~/catalogue/detail.server");
   const slug = "basement-exterior-mineral-wool-drainage-board";
   const path = `/desk/details/${slug}/withdraw`;
@@ -352,7 +352,7 @@ test("a reviewer withdraws a published detail with a reason; an editor cannot", 
 
 test("a material edit needs a source for every value, is audit-logged, and recomputes the details that use it", async () => {
   const r = await routes();
-  const { Detail, AuditEvent } = await import("~/models");
+  const { Detail, AuditEvent } = await import("~/models/index.server");
   const { materialToForm, findMaterial } = await import("~/desk/materials-edit.server");
   const slug = "icf-eps-form";
   const values = materialToForm((await findMaterial(slug))!);

@@ -84,8 +84,7 @@ const SET = "below-grade-essentials";
 beforeAll(async () => {
   const { importContent } = await import("~/catalogue/import.server");
   await importContent("content");
-  const { Detail, DetailSet, models } = await import("~/models");
-  models();
+  const { Detail, DetailSet } = await import("~/models/index.server");
   const set = await DetailSet.findOne({ where: { slug: SET }, include: [{ model: Detail, as: "details" }] });
   const inSet = ((set as unknown as { details: { slug: string; tier: string }[] }).details ?? []).filter((d) => d.tier === "premium").map((d) => d.slug);
   premiumInSet = inSet[0];
@@ -95,10 +94,9 @@ beforeAll(async () => {
 });
 
 async function member(name: string): Promise<{ browser: RouteClient; userId: number }> {
-  const { User, models } = await import("~/models");
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
-  models();
   const email = `${name}@example.test`;
   const user = await User.create({ email, displayName: name, passwordHash: await hashPassword(password), role: "member", emailVerifiedAt: new Date() });
   const browser = new RouteClient();
@@ -128,8 +126,7 @@ async function pay(checkoutUrl: string, card: string): Promise<Response> {
 }
 
 async function entitlementsOf(userId: number) {
-  const { Entitlement, models } = await import("~/models");
-  models();
+  const { Entitlement } = await import("~/models/index.server");
   return Entitlement.findAll({ where: { userId }, order: [["id", "ASC"]] });
 }
 
@@ -160,7 +157,7 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   // One set opens its own details only.
   expect(await detailApi(browser, premiumOutsideSet)).toBe(403);
 
-  const { Payment, PaymentEvent } = await import("~/models");
+  const { Payment, PaymentEvent } = await import("~/models/index.server");
   const payment = await Payment.findOne({ where: { userId } });
   expect(payment).toMatchObject({ kind: "set", amountCents: 6900, currency: "usd" }); // content/sets.yaml: below-grade-essentials price_cents
   expect(payment?.receiptSentAt).not.toBeNull();
@@ -183,7 +180,7 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   expect(again.headers.get("X-Pack-Key")).toBe(first.headers.get("X-Pack-Key"));
   expect(Buffer.from(await again.arrayBuffer()).equals(zip)).toBe(true);
   expect(Date.now() - againStarted).toBeLessThan(1000); // served from storage, not rebuilt
-  const { Download } = await import("~/models");
+  const { Download } = await import("~/models/index.server");
   expect(await Download.count({ where: { userId } })).toBe(2);
 
   const dir = mkdtempSync(join(tmpdir(), "pack-"));
@@ -244,7 +241,7 @@ test("a plan opens every premium detail; stopping at period end keeps access unt
   expect(await detailApi(browser, premiumOutsideSet)).toBe(403);
 
   // Two receipts would be wrong: only the first invoice was paid.
-  const { Payment } = await import("~/models");
+  const { Payment } = await import("~/models/index.server");
   expect(await Payment.count({ where: { userId } })).toBe(1);
 });
 
@@ -256,7 +253,7 @@ test("a renewal moves the period forward and a failed renewal marks the plan pas
   const [renewed] = await entitlementsOf(userId);
   expect(renewed.status).toBe("active");
   expect(renewed.currentPeriodEnd!.getTime()).toBeGreaterThan(before.currentPeriodEnd!.getTime());
-  const { Payment } = await import("~/models");
+  const { Payment } = await import("~/models/index.server");
   expect(await Payment.count({ where: { userId } })).toBe(2);
 
   await fetch(`${standin.url}/_standin/subscriptions/${before.stripeSubscriptionId}/advance`, { method: "POST", body: new URLSearchParams({ fail_renewal: "true" }) });
@@ -266,7 +263,7 @@ test("a renewal moves the period forward and a failed renewal marks the plan pas
 
 test("a forged signature is refused with 400 and changes nothing", async () => {
   const { userId } = await member("forger");
-  const { PaymentEvent, Entitlement } = await import("~/models");
+  const { PaymentEvent, Entitlement } = await import("~/models/index.server");
   const eventsBefore = await PaymentEvent.count();
   const entitlementsBefore = await Entitlement.count();
   const forged = JSON.stringify({
@@ -294,7 +291,7 @@ test("a forged signature is refused with 400 and changes nothing", async () => {
 test("the same event delivered twice grants one entitlement and is logged once", async () => {
   const { browser, userId } = await member("twice");
   await pay(await startCheckout(browser, { kind: "set", set: SET }), CARD_PAYS);
-  const { PaymentEvent, Payment, User } = await import("~/models");
+  const { PaymentEvent, Payment, User } = await import("~/models/index.server");
   const user = await User.findByPk(userId);
   const events = await sdk.events.list({ type: "checkout.session.completed", limit: 100 });
   const completed = events.data.find((e) => (e.data.object as Stripe.Checkout.Session).customer === user?.stripeCustomerId)!;
@@ -321,7 +318,7 @@ test("a customer.subscription.updated that arrives after the deletion does not b
 
   const late = heldEvents.find((e) => e.type === "customer.subscription.updated")!;
   expect(await redeliver(late.id)).toBe(200);
-  const { PaymentEvent } = await import("~/models");
+  const { PaymentEvent } = await import("~/models/index.server");
   const logged = await PaymentEvent.findByPk(late.id);
   expect(logged?.result).toBe("ignored");
   expect((await entitlementsOf(userId))[0].get({ plain: true })).toEqual(snapshot);
@@ -332,7 +329,7 @@ test("the admin payments page lists events with their results; members are refus
   const admin = await import("~/routes/admin/payments");
   const { browser } = await member("curious");
   expect((await browser.call(admin.loader, "/admin/payments", {})).status).toBe(403);
-  const { User } = await import("~/models");
+  const { User } = await import("~/models/index.server");
   await User.update({ role: "admin" }, { where: { email: "curious@example.test" } });
   const view = await browser.call(admin.loader, "/admin/payments", {});
   expect(view.status).toBe(200);
@@ -341,10 +338,6 @@ test("the admin payments page lists events with their results; members are refus
   expect(body.counts.ignored).toBeGreaterThan(0);
 });
 
-async function waitFor(check: () => Promise<boolean>, timeoutMs = 5000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (!(await check())) {
-    if (Date.now() > deadline) throw new Error("condition not reached in time");
-    await new Promise((resolve) => setTimeout(resolve, 25));
-  }
+function waitFor(check: () => Promise<boolean>): Promise<void> {
+  return expect.poll(check, { timeout: 5000, interval: 25 }).toBe(true);
 }

@@ -7,7 +7,7 @@ import { useMigratedDatabase } from "../helpers/database";
 import { useMailCatcher } from "../helpers/mail";
 import { RouteClient, type RouteResult } from "../helpers/route-client";
 import routeConfig from "~/routes";
-import { STAFF_ROLES, roleAtLeast, type StaffRole } from "~/auth/roles";
+import { STAFF_ROLES, roleAtLeast, type StaffRole } from "~/vocabulary/roles";
 
 useMailCatcher();
 useMigratedDatabase();
@@ -95,10 +95,9 @@ const browsers = new Map<StaffRole, RouteClient>();
 const password = "role table passphrase"; // our own minimum is 12 characters
 
 beforeAll(async () => {
-  const { User, models } = await import("~/models");
+  const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
-  models();
   const passwordHash = await hashPassword(password);
   for (const role of STAFF_ROLES) {
     await User.create({ email: `${role}@example.test`, displayName: `Table ${role}`, passwordHash, role, emailVerifiedAt: new Date() });

@@ -2,7 +2,6 @@ import { data } from "react-router";
 import type { Route } from "./+types/export";
 import { requireRole } from "~/auth/guards.server";
 import { exportDetailMarkdown } from "~/catalogue/export-markdown";
-import type { DetailFrontMatter } from "~/content/detail-schema";
 import { loadRevision } from "~/desk/revisions.server";
 
 // GET /desk/revisions/:id/export — the revision as a content file (content/details/<slug>.md).
@@ -10,7 +9,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   await requireRole(request, "editor");
   const found = await loadRevision(Number(params.id) || 0);
   if (!found) throw data({ message: "No such revision." }, { status: 404 });
-  const front = found.revision.frontMatter as DetailFrontMatter;
+  const front = found.revision.frontMatter;
   return new Response(exportDetailMarkdown(front, found.revision.bodyMd), {
     headers: {
       "Content-Type": "text/markdown; charset=utf-8",

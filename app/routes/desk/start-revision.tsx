@@ -5,16 +5,16 @@ import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { DeskError, startRevision } from "~/desk/revisions.server";
-import { Detail, DetailRevision, models } from "~/models";
+import { Detail, DetailRevision } from "~/models/index.server";
+import { OPEN_REVISION_STATES, REVISION_STATE_LABELS } from "~/vocabulary/revision-states";
 
 export const meta: Route.MetaFunction = () => [{ title: "Revise a detail — Desk — Dryside" }];
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireRole(request, "editor");
-  models();
   const detail = await Detail.findOne({ where: { slug: params.slug }, attributes: ["id", "slug", "title", "publishedRevisionId"] });
   if (!detail) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
-  const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: ["draft", "in_review", "changes_requested"] } }, attributes: ["id", "number", "state", "authorName"] });
+  const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: OPEN_REVISION_STATES } }, attributes: ["id", "number", "state", "authorName"] });
   const published = detail.publishedRevisionId ? await DetailRevision.findByPk(detail.publishedRevisionId, { attributes: ["number"] }) : null;
   return {
     slug: detail.slug,
@@ -44,7 +44,7 @@ export default function StartRevision({ loaderData, actionData }: Route.Componen
       {actionData?.message ? <p role="alert" className="text-stop">{actionData.message}</p> : null}
       {open ? (
         <p>
-          Revision {open.number} is already open ({open.state.replace("_", " ")}, by {open.authorName}).{" "}
+          Revision {open.number} is already open ({REVISION_STATE_LABELS[open.state]}, by {open.authorName}).{" "}
           <Link to={`/desk/revisions/${open.id}`}>Open it</Link>.
         </p>
       ) : (

@@ -4,13 +4,12 @@ import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { DeskError, withdrawPublished } from "~/desk/revisions.server";
-import { Detail, models } from "~/models";
+import { Detail } from "~/models/index.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Withdraw a detail — Desk — Dryside" }];
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireRole(request, "reviewer");
-  models();
   const detail = await Detail.findOne({ where: { slug: params.slug }, attributes: ["slug", "title", "publishedRevisionId", "withdrawnAt"] });
   if (!detail) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
   return { slug: detail.slug, title: detail.title, live: Boolean(detail.publishedRevisionId && !detail.withdrawnAt) };
