@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, SUBSTRATES, TIERS } from "~/content/vocabularies";
-import { CLIMATE_ZONE_IDS } from "~/content/zones";
+import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES } from "~/vocabulary/climate-zones";
 import { FILTER_KEYS, PARAM, SORTS, type CatalogueQuery } from "./query";
 
 // Validation of the catalogue URL, for loaders and API routes (zod stays out of the client bundle).
@@ -9,7 +9,7 @@ const multi = <T extends readonly [string, ...string[]]>(values: T) => z.array(z
 export const catalogueQuerySchema = z.object({
   q: z.string().trim().max(120, "search text is limited to 120 characters").default(""),
   zone: multi(CLIMATE_ZONE_IDS),
-  regime: multi(["A", "B", "C"] as const),
+  regime: multi(MOISTURE_REGIMES),
   assembly: multi(ASSEMBLY_KINDS),
   substrate: multi(SUBSTRATES),
   belowGrade: multi(BELOW_GRADE_CONDITIONS),

@@ -1,5 +1,5 @@
 import type { ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, SUBSTRATES, TIERS } from "~/content/vocabularies";
-import type { ClimateZoneId } from "~/content/zones";
+import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
 
 // The catalogue's URL is its state: one parser for the page, the API and the client, so a shared
 // link always means the same search.
@@ -12,7 +12,7 @@ export const PER_PAGE = 24;
 export interface CatalogueQuery {
   q: string;
   zone: ClimateZoneId[];
-  regime: ("A" | "B" | "C")[];
+  regime: MoistureRegime[];
   assembly: (typeof ASSEMBLY_KINDS)[number][];
   substrate: (typeof SUBSTRATES)[number][];
   belowGrade: (typeof BELOW_GRADE_CONDITIONS)[number][];

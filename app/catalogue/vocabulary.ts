@@ -1,4 +1,5 @@
-// Labels and search synonyms for the catalogue's facets. Shared by server and client (no imports).
+// Labels and search synonyms for the catalogue's facets. Shared by server and client (pure imports only).
+import { MOISTURE_REGIME_LABELS } from "~/vocabulary/climate-zones";
 
 export const FACET_LABELS = {
   zone: "Climate zone",
@@ -15,9 +16,7 @@ export type FacetKey = keyof typeof FACET_LABELS;
 
 export const VALUE_LABELS: Record<string, string> = {
   // moisture regimes (ASHRAE 169 / IECC R301)
-  A: "Moist (A)",
-  B: "Dry (B)",
-  C: "Marine (C)",
+  ...MOISTURE_REGIME_LABELS,
   // assemblies
   "above-grade-wall": "Above-grade wall",
   roof: "Roof or ceiling",

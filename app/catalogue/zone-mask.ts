@@ -1,15 +1,14 @@
-import { CLIMATE_ZONE_IDS, moistureRegime, type ClimateZoneId } from "~/content/zones";
+import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES, moistureRegime, type ClimateZoneId, type MoistureRegime } from "~/vocabulary/climate-zones";
 
-// Bit i stands for CLIMATE_ZONE_IDS[i]; regimes A, B, C are bits 0, 1, 2. The facet-index migration
-// backfills with the same order.
-export const REGIMES = ["A", "B", "C"] as const;
+// Bit i stands for CLIMATE_ZONE_IDS[i]; regimes A, B, C are bits 0, 1, 2 (MOISTURE_REGIMES order).
+// The facet-index migration backfilled with the same order, so the vocabulary's lists only grow at the end.
 
 export function zoneBit(zone: ClimateZoneId): number {
   return 2 ** CLIMATE_ZONE_IDS.indexOf(zone);
 }
 
-export function regimeBit(regime: (typeof REGIMES)[number]): number {
-  return 2 ** REGIMES.indexOf(regime);
+export function regimeBit(regime: MoistureRegime): number {
+  return 2 ** MOISTURE_REGIMES.indexOf(regime);
 }
 
 export function zoneMask(zones: readonly ClimateZoneId[]): number {

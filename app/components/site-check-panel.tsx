@@ -1,9 +1,8 @@
 import { Form, useFetcher } from "react-router";
 import type { SiteCheckResult } from "~/envelope";
 import type { UnitSystem } from "~/envelope/units";
+import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES, MOISTURE_REGIME_LABELS } from "~/vocabulary/climate-zones";
 import { SiteCheckResults } from "./site-check-results";
-
-const ZONES = ["1A", "2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
 
 type CheckResponse = { result: SiteCheckResult; units: UnitSystem } | { error: string; fieldErrors?: Record<string, string[]> };
 
@@ -60,7 +59,7 @@ export function SiteCheckPanel({
           <span className="block text-xs text-graphite-soft">Climate zone</span>
           <select name="zone" defaultValue={values.zone} className="mt-1 w-full rounded border border-rule bg-sheet px-2 py-1.5" aria-invalid={Boolean(fieldErrors.zone)}>
             <option value="">from degree-days…</option>
-            {ZONES.map((zone) => (
+            {CLIMATE_ZONE_IDS.map((zone) => (
               <option key={zone} value={zone}>
                 {zone}
                 {claimedZones.includes(zone) ? " ✓" : ""}
@@ -80,9 +79,7 @@ export function SiteCheckPanel({
           <span className="block text-xs text-graphite-soft">Moisture regime</span>
           <select name="moisture" defaultValue={values.moisture} title="Needed with degree-days below zone 7" className="mt-1 w-full rounded border border-rule bg-sheet px-2 py-1.5" aria-invalid={Boolean(fieldErrors.moisture)}>
             <option value="">—</option>
-            <option value="A">A, moist</option>
-            <option value="B">B, dry</option>
-            <option value="C">C, marine</option>
+            {MOISTURE_REGIMES.map((regime) => <option key={regime} value={regime}>{MOISTURE_REGIME_LABELS[regime]}</option>)}
           </select>
         </label>
         <label className="text-sm">

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { CLIMATE_ZONE_IDS } from "./zones";
+import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 
 import { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS } from "./vocabularies";
 

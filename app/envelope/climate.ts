@@ -6,11 +6,9 @@ import type {
   ClimateNormals, CodeEdition, MoistureRegime, NbcZone, ResolvedSite, SiteInput, ZoneId,
 } from "./types";
 import { degreeDaysFToC } from "./units";
+import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 
-export const CLIMATE_ZONES: readonly ZoneId[] = [
-  "0A", "0B", "1A", "1B", "2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B",
-  "7", "8",
-];
+export const CLIMATE_ZONES: readonly ZoneId[] = CLIMATE_ZONE_IDS;
 
 /** Thermal zone number 0–8 from degree-days (ASHRAE 169-2013 Table A-3 order: CDD10 decides
  * zones 0–2, then HDD18 decides 3–8). */

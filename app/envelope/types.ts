@@ -1,5 +1,6 @@
 // Public input and result shapes of the site check. Results are plain JSON (no class instances,
 // no NaN/Infinity) so a page, an API route and a PDF sheet show the same numbers.
+import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
 
 export const ASSEMBLY_KINDS = [
   "above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor", "basement-wall", "slab",
@@ -35,10 +36,8 @@ export interface AssemblyInput {
   layers: readonly LayerInput[];
 }
 
-export type MoistureRegime = "A" | "B" | "C";
-export type ZoneId =
-  | "0A" | "0B" | "1A" | "1B" | "2A" | "2B" | "3A" | "3B" | "3C" | "4A" | "4B" | "4C"
-  | "5A" | "5B" | "5C" | "6A" | "6B" | "7" | "8";
+export type { MoistureRegime };
+export type ZoneId = ClimateZoneId;
 export type NbcZone = "4" | "5" | "6" | "7A" | "7B" | "8";
 export type CodeEdition = "IECC/IRC 2021" | "IECC/IRC 2018";
 

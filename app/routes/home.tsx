@@ -1,6 +1,7 @@
 import { Form, Link } from "react-router";
 import type { Route } from "./+types/home";
 import { getLibraryOverview } from "~/catalogue/overview.server";
+import { FEATURED_ZONES, zoneLabel } from "~/vocabulary/climate-zones";
 
 export const meta: Route.MetaFunction = () => [
   { title: "Dryside — reviewed building-envelope details" },
@@ -10,8 +11,6 @@ export const meta: Route.MetaFunction = () => [
 export async function loader() {
   return { overview: await getLibraryOverview() };
 }
-
-const ZONE_SHORTCUTS = ["2A", "3A", "4A", "4C", "5A", "5B", "6A", "7"];
 
 export default function Home({ loaderData }: Route.ComponentProps) {
   const { overview } = loaderData;
@@ -37,10 +36,10 @@ export default function Home({ loaderData }: Route.ComponentProps) {
         <div className="mt-6">
           <p className="text-sm text-graphite-soft">Or start from your climate zone:</p>
           <ul className="mt-2 flex flex-wrap gap-2">
-            {ZONE_SHORTCUTS.map((zone) => (
+            {FEATURED_ZONES.map((zone) => (
               <li key={zone}>
                 <Link to={`/details?zone=${zone}`} className="inline-block rounded border border-rule bg-sheet px-3 py-1 text-sm no-underline hover:border-ochre">
-                  Zone {zone}
+                  {zoneLabel(zone)}
                 </Link>
               </li>
             ))}

@@ -1,10 +1,11 @@
 // Multiplies the imported demo library into a large catalogue for benchmarks (never for the app's data).
 import { QueryTypes, type Sequelize } from "sequelize";
-import type { ClimateZoneId } from "../../app/content/zones.ts";
 import { regimeBit, zoneBit } from "../../app/catalogue/zone-mask.ts";
+import { CLIMATE_ZONE_IDS, moistureRegime, zoneNumber } from "../../app/vocabulary/climate-zones.ts";
 
 const VARIANTS = ["coastal", "upland", "prairie", "river", "lakeside", "ridge", "valley", "harbour", "forest", "mesa"];
-const ZONE_POOL = ["2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
+// Zones 2 to 8: where the demo library's details are written for.
+const ZONE_POOL = CLIMATE_ZONE_IDS.filter((zone) => zoneNumber(zone) >= 2);
 
 export async function growLargeCatalogue(sequelize: Sequelize, target: number): Promise<number> {
   const [{ n }] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM details", { type: QueryTypes.SELECT });
@@ -30,13 +31,13 @@ export async function growLargeCatalogue(sequelize: Sequelize, target: number): 
       await sequelize.query(
         `INSERT INTO detail_zones (detail_id, zone, zone_number, regime)
          SELECT id, :zone, :zoneNumber, :regime FROM details WHERE slug LIKE CONCAT('%--g', :copy)`,
-        { replacements: { zone, zoneNumber: Number.parseInt(zone, 10), regime: zone.length > 1 ? zone.slice(1) : null, copy } },
+        { replacements: { zone, zoneNumber: zoneNumber(zone), regime: moistureRegime(zone), copy } },
       );
-      const regime = zone.length > 1 ? (zone.slice(1) as "A" | "B" | "C") : null;
+      const regime = moistureRegime(zone);
       await sequelize.query(
         `UPDATE details SET zone_mask = zone_mask | :zoneBit, regime_mask = regime_mask | :regimeBit, zones_label = CONCAT(zones_label, ' ', :zone)
           WHERE slug LIKE CONCAT('%--g', :copy) AND (zone_mask & :zoneBit) = 0`,
-        { replacements: { zoneBit: zoneBit(zone as ClimateZoneId), regimeBit: regime ? regimeBit(regime) : 0, zone, copy } },
+        { replacements: { zoneBit: zoneBit(zone), regimeBit: regime ? regimeBit(regime) : 0, zone, copy } },
       );
     }
   }

@@ -2,7 +2,7 @@ import path from "node:path";
 import { expect, test } from "vitest";
 import { formatProblem } from "~/content/content-error";
 import { loadContent } from "~/content/load-content";
-import { moistureRegime, zoneNumber } from "~/content/zones";
+import { moistureRegime, zoneNumber } from "~/vocabulary/climate-zones";
 
 const CONTENT_ROOT = path.resolve(__dirname, "../../../content");
 const loaded = loadContent(CONTENT_ROOT);
