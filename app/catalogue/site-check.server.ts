@@ -2,9 +2,10 @@ import { runSiteCheck, SiteCheckInputError, type SiteCheckResult } from "~/envel
 import type { DetailFrontMatter } from "~/content/detail-schema";
 import { materialLibrary } from "./materials.server";
 import { siteFormSchema, siteInputFromForm } from "./site-form";
+import type { UnitSystem } from "~/vocabulary/units";
 
 export type SiteCheckOutcome =
-  | { ok: true; result: SiteCheckResult; units: "si" | "ip" }
+  | { ok: true; result: SiteCheckResult; units: UnitSystem }
   | { ok: false; fieldErrors: Record<string, string[]> };
 
 /** Validates a site form and runs the engine for one assembly; input problems come back per field. */

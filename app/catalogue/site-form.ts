@@ -1,7 +1,8 @@
 import { z } from "zod";
-import { CLIMATE_ZONE_IDS } from "~/content/zones";
 import type { SiteInput } from "~/envelope";
 import { fToC } from "~/envelope/units";
+import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES } from "~/vocabulary/climate-zones";
+import { DEFAULT_UNIT_SYSTEM, UNIT_SYSTEMS } from "~/vocabulary/units";
 
 // What the site-check panel (and the API) accepts. Temperatures and degree-days arrive in the
 // user's units; the engine takes SI.
@@ -13,11 +14,11 @@ const optionalNumber = (label: string) =>
 
 export const siteFormSchema = z
   .object({
-    units: z.enum(["si", "ip"]).default("ip"),
+    units: z.enum(UNIT_SYSTEMS).default(DEFAULT_UNIT_SYSTEM),
     zone: z.union([z.enum(CLIMATE_ZONE_IDS), z.literal("")]).optional(),
     hdd: optionalNumber("Heating degree-days").pipe(z.number().min(0, "Heating degree-days cannot be negative").max(20000, "Heating degree-days above 20,000 are outside every climate zone").optional()),
     cdd: optionalNumber("Cooling degree-days").pipe(z.number().min(0, "Cooling degree-days cannot be negative").max(20000, "Cooling degree-days look too high").optional()),
-    moisture: z.union([z.enum(["A", "B", "C"]), z.literal("")]).optional(),
+    moisture: z.union([z.enum(MOISTURE_REGIMES), z.literal("")]).optional(),
     indoorRh: optionalNumber("Indoor relative humidity").pipe(z.number().min(5, "Indoor relative humidity below 5 % is not a realistic design value").max(95, "Indoor relative humidity above 95 % is not a design condition").optional()),
     indoorT: optionalNumber("Indoor temperature").optional(),
     winterT: optionalNumber("Winter design temperature").optional(),

@@ -1,14 +1,14 @@
 import { useFetcher } from "react-router";
-import type { UnitSystem } from "~/envelope/units";
+import { UNIT_SYSTEMS, UNIT_SYSTEM_LABELS, parseUnitSystem, type UnitSystem } from "~/vocabulary/units";
 
 /** Switches inch-pound / SI; the choice is kept in a cookie so every page and sheet agrees. */
 export function UnitsToggle({ units }: { units: UnitSystem }) {
   const fetcher = useFetcher();
   const pending = fetcher.formData?.get("units");
-  const current = (pending === "si" || pending === "ip" ? pending : units) as UnitSystem;
+  const current = parseUnitSystem(pending) ?? units;
   return (
     <fetcher.Form method="post" action="/preferences/units" className="inline-flex overflow-hidden rounded border border-rule text-xs" data-testid="units-toggle">
-      {(["ip", "si"] as const).map((system) => (
+      {UNIT_SYSTEMS.map((system) => (
         <button
           key={system}
           name="units"
@@ -16,7 +16,7 @@ export function UnitsToggle({ units }: { units: UnitSystem }) {
           aria-pressed={current === system}
           className={`px-2 py-1 ${current === system ? "bg-graphite text-paper" : "bg-sheet text-graphite-soft hover:text-graphite"}`}
         >
-          {system === "ip" ? "inch-pound" : "SI"}
+          {UNIT_SYSTEM_LABELS[system]}
         </button>
       ))}
     </fetcher.Form>

@@ -29,7 +29,9 @@ export const degreeDaysFToC = (dd: number): number => dd / 1.8;
 /** Vapour flow kg/(m²·s) → g/(m²·day). */
 export const kgPerSToGPerDay = (kgPerS: number): number => kgPerS * 1000 * 86400;
 
-export type UnitSystem = "si" | "ip";
+import type { UnitSystem } from "~/vocabulary/units";
+
+export type { UnitSystem };
 
 function fixed(value: number, digits: number): string {
   // −0.0 reads as a sign error on a drawing; show 0.
