@@ -1,4 +1,5 @@
 import { NavLink, Link } from "react-router";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { AccountMenu } from "./account-menu";
 
 const nav = [
@@ -7,9 +8,6 @@ const nav = [
   { to: "/pricing", label: "Pricing" },
 ];
 
-export const STANDING_CAUTION =
-  "Dryside details are reference designs, not approvals. Check every detail against the code adopted where you build, " +
-  "the manufacturer's instructions for each product, and a licensed design professional where one is required.";
 
 export function AppShell({ children }: { children: React.ReactNode }) {
   return (

@@ -342,5 +342,4 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
   return flags;
 }
 
-export const LOCAL_CODE_CAUTION =
-  "This check is a steady-state screening of one design day against the tables named. It does not replace the code adopted where you build, the local building official, or a licensed design professional; confirm every detail with them before building.";
+export { SITE_CHECK_CAUTION as LOCAL_CODE_CAUTION } from "~/vocabulary/caution";

@@ -4,6 +4,7 @@
 import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
 import PDFDocument from "pdfkit";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { sectionGeometry, type SectionLayer } from "~/drawing/section-geometry";
 import { INK, type Shape } from "~/drawing/shapes";
 import type { AssemblyKind, Flag, ProfileCase, SiteCheckResult } from "~/envelope/types";
@@ -26,9 +27,6 @@ export interface DetailSheetInput {
   /** Generation time (defaults to now); fixed in tests. */
   generatedAt?: Date;
 }
-
-export const STANDING_CAUTION =
-  "Reference design, not an approval: check against the code adopted where you build, the manufacturer's instructions, and a licensed design professional where one is required.";
 
 const PAGE = { width: 612, height: 792, margin: 36 } as const;
 const CONTENT_WIDTH = PAGE.width - 2 * PAGE.margin;

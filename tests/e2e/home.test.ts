@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { BrowserContext } from "playwright-core";
 import { baseUrl, openBrowser, screenshot } from "./browser";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -35,7 +36,7 @@ test("the home page loads with the shipped fonts, the palette and the standing c
   expect(fontRequests.length).toBeGreaterThan(0);
   for (const url of fontRequests) expect(url.startsWith(baseUrl())).toBe(true);
 
-  await expect(page.getByTestId("standing-caution").textContent()).resolves.toContain("licensed design professional");
+  await expect(page.getByTestId("standing-caution").textContent()).resolves.toContain(STANDING_CAUTION);
   await screenshot(page, "home-desktop");
   await page.close();
 });

@@ -8,7 +8,8 @@ import { parse } from "yaml";
 import type { SectionLayer } from "~/drawing/section-geometry";
 import { buildMaterialLibrary, materialSchema, runSiteCheck, type AssemblyInput, type LayerInput } from "~/envelope";
 import { formatR, formatU } from "~/envelope/units";
-import { renderDetailSheet, STANDING_CAUTION } from "~/packs/sheet-pdf.server";
+import { renderDetailSheet } from "~/packs/sheet-pdf.server";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 const materials = buildMaterialLibrary(
   readdirSync("content/materials")
