@@ -1,4 +1,4 @@
-import { markdownSection } from "~/markdown/sections";
+import { BODY_SECTION_HEADINGS, bodySection } from "~/vocabulary/body-sections";
 import { labelFor } from "./vocabulary";
 
 /** Markdown reduced to plain words for the FULLTEXT index. */
@@ -31,6 +31,6 @@ const RATIONALE_CHARS = 600;
 export function buildSearchText(detail: SearchableDetail, materialName: (slug: string) => string): string {
   const facets = [detail.assembly, detail.substrate, detail.below_grade, detail.strategy].map((value) => labelFor(value));
   const layers = detail.layers.map((layer) => `${materialName(layer.material)} ${layer.role.replaceAll("-", " ")}`);
-  const rationale = plainText(markdownSection(detail.body, "Why it works") || detail.body).slice(0, RATIONALE_CHARS);
+  const rationale = plainText(bodySection(detail.body, BODY_SECTION_HEADINGS["why-it-works"]) || detail.body).slice(0, RATIONALE_CHARS);
   return [...facets, ...layers, ...detail.references, rationale].join(" · ");
 }

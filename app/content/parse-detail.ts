@@ -2,9 +2,7 @@ import { ContentError, type ContentProblem } from "./content-error";
 import { detailFrontMatterSchema, type DetailFrontMatter } from "./detail-schema";
 import { lineOfPath, parseLocated, syntaxProblems, type LocatedDocument } from "./yaml-locate";
 import { problemsFromZod } from "./zod-problems";
-
-/** The headings every detail body carries, in this order. */
-export const REQUIRED_BODY_SECTIONS = ["Why it works", "Install sequence", "Cautions"] as const;
+import { missingBodySections } from "~/vocabulary/body-sections";
 
 export interface ParsedDetail extends DetailFrontMatter {
   /** Markdown after the closing `---`. */
@@ -130,11 +128,7 @@ function referenceProblems(
 }
 
 function bodyProblems(file: string, split: SplitFile): ContentProblem[] {
-  const headings = split.body
-    .split("\n")
-    .map((line) => /^##\s+(.+?)\s*$/.exec(line)?.[1])
-    .filter((heading): heading is string => heading !== undefined);
-  const missing = REQUIRED_BODY_SECTIONS.filter((section) => !headings.includes(section));
+  const missing = missingBodySections(split.body);
   if (missing.length === 0) return [];
   return [{
     file,

@@ -1,4 +1,6 @@
-/** The parts of a revision a reviewer comments on, in page order. */
+import { BODY_SECTION_HEADINGS } from "~/vocabulary/body-sections";
+
+/** The parts of a revision a reviewer comments on, in page order. Stored as review_comments.section. */
 export const REVIEW_SECTIONS = ["metadata", "layers", "why-it-works", "install-sequence", "cautions", "references"] as const;
 export type ReviewSection = (typeof REVIEW_SECTIONS)[number];
 
@@ -6,8 +8,6 @@ export type ReviewSection = (typeof REVIEW_SECTIONS)[number];
 export const REVIEW_SECTION_LABELS: Record<ReviewSection, string> = {
   metadata: "Metadata",
   layers: "Layers",
-  "why-it-works": "Why it works",
-  "install-sequence": "Install sequence",
-  cautions: "Cautions",
+  ...BODY_SECTION_HEADINGS,
   references: "References",
 };

@@ -11,5 +11,3 @@ export function renderMarkdown(markdown: string): string {
   const html = marked.parse(markdown) as string;
   return purify.sanitize(html, { USE_PROFILES: { html: true }, FORBID_TAGS: ["style", "form", "input"], FORBID_ATTR: ["style"] });
 }
-
-export { markdownSection } from "./sections";
