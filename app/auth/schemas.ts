@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { STAFF_ROLES } from "./roles";
+import { STAFF_ROLES } from "~/vocabulary/roles";
 
 // Shared by the forms (client-side hints) and the actions (the check that counts).
 const PASSWORD_MIN = 12; // same as password.server.ts; NIST SP 800-63B asks for at least 8, we ask a little more

@@ -1,5 +1,5 @@
 import { Form, Link, NavLink } from "react-router";
-import { roleAtLeast } from "~/auth/roles";
+import { roleAtLeast } from "~/vocabulary/roles";
 import { CsrfField } from "./csrf-field";
 import { useOptionalUser } from "./root-data";
 

@@ -1,5 +1,5 @@
 import { useRouteLoaderData } from "react-router";
-import type { StaffRole } from "~/auth/roles";
+import type { StaffRole } from "~/vocabulary/roles";
 
 export interface RootData {
   user: { id: number; displayName: string; role: StaffRole } | null;
