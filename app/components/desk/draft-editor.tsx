@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Form, useFetcher, useNavigation } from "react-router";
 import { ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, SUBSTRATES, TIERS } from "~/content/detail-schema";
-import { CLIMATE_ZONE_IDS } from "~/content/zones";
+import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 import { labelFor } from "~/catalogue/vocabulary";
 import type { DraftFormValues, FieldErrors } from "~/desk/draft-form";
 import type { AssemblyKind, SiteCheckResult } from "~/envelope";

@@ -5,6 +5,7 @@ import { requireCsrf } from "~/auth/csrf.server";
 import { requireUser } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { billingOverview, requestPlanEnd } from "~/payments/billing.server";
+import { ENTITLEMENT_STATUS_LABELS } from "~/vocabulary/entitlements";
 
 export const meta: Route.MetaFunction = () => [{ title: "Billing — Dryside" }];
 
@@ -35,16 +36,9 @@ function day(iso: string | null): string {
   return iso ? iso.slice(0, 10) : "—";
 }
 
-const STATUS_WORDS = {
-  active: "Active",
-  past_due: "Renewal payment failed: update your card soon",
-  canceled: "Ended",
-  expired: "Paused",
-} as const;
-
 export default function Billing({ loaderData, actionData }: Route.ComponentProps) {
   const { plan, sets, receipts, downloads, waiting } = loaderData;
-  const running = plan && (plan.status === "active" || plan.status === "past_due");
+  const running = plan?.live;
   return (
     <div className="flex flex-col gap-10">
       {waiting && <meta httpEquiv="refresh" content="2" />}
@@ -63,7 +57,7 @@ export default function Billing({ loaderData, actionData }: Route.ComponentProps
               <dt className="text-graphite-soft">Plan</dt>
               <dd>{plan.name}</dd>
               <dt className="text-graphite-soft">State</dt>
-              <dd data-testid="plan-status">{STATUS_WORDS[plan.status]}</dd>
+              <dd data-testid="plan-status">{ENTITLEMENT_STATUS_LABELS[plan.status]}</dd>
               <dt className="text-graphite-soft">{running && !plan.cancelAtPeriodEnd ? "Renews on" : "Access until"}</dt>
               <dd data-testid="plan-date">{day(plan.renewsOrEndsAt)}</dd>
             </dl>

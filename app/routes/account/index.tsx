@@ -3,6 +3,7 @@ import { Link } from "react-router";
 import { requireUser, type StaffRole } from "~/auth/guards.server";
 import { listSaved } from "~/desk/saved.server";
 import { billingOverview } from "~/payments/billing.server";
+import { STAFF_ROLE_DESCRIPTIONS } from "~/vocabulary/roles";
 
 export const meta: Route.MetaFunction = () => [{ title: "Your account — Dryside" }];
 
@@ -22,13 +23,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
-const ROLE_WORDS = {
-  member: "Member",
-  editor: "Editor — writes and revises details",
-  reviewer: "Reviewer — may approve others' submissions",
-  admin: "Admin",
-} as const;
-
 export default function Account({ loaderData }: Route.ComponentProps) {
   const { profile, saved, billing } = loaderData;
   return (
@@ -43,7 +37,7 @@ export default function Account({ loaderData }: Route.ComponentProps) {
           <dt className="text-graphite-soft">E-mail</dt>
           <dd data-testid="account-email">{profile.email}</dd>
           <dt className="text-graphite-soft">Role</dt>
-          <dd data-testid="account-role">{ROLE_WORDS[profile.role]}</dd>
+          <dd data-testid="account-role">{STAFF_ROLE_DESCRIPTIONS[profile.role]}</dd>
           <dt className="text-graphite-soft">E-mail confirmed</dt>
           <dd data-testid="account-verified">{profile.verifiedAt ? `Yes, on ${profile.verifiedAt.slice(0, 10)}` : "Not yet"}</dd>
           <dt className="text-graphite-soft">Member since</dt>
@@ -77,7 +71,7 @@ export default function Account({ loaderData }: Route.ComponentProps) {
       </section>
       <section id="downloads" aria-labelledby="downloads-heading">
         <h2 id="downloads-heading" className="text-xl">Downloads</h2>
-        {billing.plan?.status === "active" || billing.sets.length ? (
+        {billing.plan?.live || billing.sets.length ? (
           <p className="mt-2 text-sm">
             Packs of printable sheets are on the <Link to="/sets">sets page</Link>, one download per set.
           </p>

@@ -3,7 +3,7 @@ import { Form, data, useSearchParams } from "react-router";
 import type { Route } from "./+types/users";
 import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
-import { STAFF_ROLES } from "~/auth/roles";
+import { STAFF_ROLES, STAFF_ROLE_LABELS } from "~/vocabulary/roles";
 import { userAdminSchema } from "~/auth/schemas";
 import { UserAdminError, changeRole, listUsers, revokeSessionsByAdmin } from "~/auth/user-admin.server";
 import { CsrfField } from "~/components/csrf-field";
@@ -69,7 +69,7 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                     <input type="hidden" name="userId" value={user.id} />
                     <label className="sr-only" htmlFor={`role-${user.id}`}>Role of {user.displayName}</label>
                     <select id={`role-${user.id}`} name="role" defaultValue={user.role} className="rounded border border-rule bg-sheet px-2 py-1">
-                      {STAFF_ROLES.map((role) => <option key={role} value={role}>{role}</option>)}
+                      {STAFF_ROLES.map((role) => <option key={role} value={role}>{STAFF_ROLE_LABELS[role]}</option>)}
                     </select>
                     <button className="rounded border border-rule px-2 py-1">Change</button>
                   </Form>

@@ -1,7 +1,8 @@
 import type { Route } from "./+types/detail";
 import { getViewer } from "~/access/viewer.server";
 import { getDetailView } from "~/catalogue/detail.server";
-import { API_CAUTION, jsonError } from "~/http/json";
+import { jsonError } from "~/http/json";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 // GET /api/details/:slug — premium content only with access; otherwise 403 with the public preview.
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -14,5 +15,5 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       preview: { slug: preview.slug, title: preview.title, summary: preview.summary, tier: preview.tier, zones: preview.zones, excerpt: preview.preview?.excerpt, sets: preview.sets },
     });
   }
-  return Response.json({ detail, caution: API_CAUTION });
+  return Response.json({ detail, caution: STANDING_CAUTION });
 }

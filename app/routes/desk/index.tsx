@@ -1,7 +1,8 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/index";
 import { requireRole } from "~/auth/guards.server";
-import { roleAtLeast } from "~/auth/roles";
+import { REVISION_STATE_LABELS } from "~/vocabulary/revision-states";
+import { roleAtLeast } from "~/vocabulary/roles";
 import { deskOverview, type RevisionRow } from "~/desk/revisions.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Desk — Dryside" }];
@@ -11,15 +12,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   return { overview: await deskOverview(user), reviewer: roleAtLeast(user.role, "reviewer") };
 }
 
-const STATE_WORDS: Record<RevisionRow["state"], string> = {
-  draft: "draft",
-  in_review: "in review",
-  changes_requested: "changes requested",
-  published: "published",
-  superseded: "superseded",
-  withdrawn: "withdrawn",
-};
-
 function RevisionList({ rows, hrefFor, empty, testId }: { rows: RevisionRow[]; hrefFor: (row: RevisionRow) => string; empty: string; testId: string }) {
   if (!rows.length) return <p className="text-sm text-graphite-soft">{empty}</p>;
   return (
@@ -28,7 +20,7 @@ function RevisionList({ rows, hrefFor, empty, testId }: { rows: RevisionRow[]; h
         <li key={row.id} className="flex flex-wrap items-baseline justify-between gap-2 px-4 py-2">
           <Link to={hrefFor(row)}>{row.title}</Link>
           <span className="text-xs text-graphite-soft">
-            revision {row.number} · <span data-state={row.state}>{STATE_WORDS[row.state]}</span> · {row.authorName}
+            revision {row.number} · <span data-state={row.state}>{REVISION_STATE_LABELS[row.state]}</span> · {row.authorName}
             {row.reviewerName && row.state !== "draft" ? ` · reviewer ${row.reviewerName}` : ""} · {row.updatedAt.slice(0, 10)}
           </span>
         </li>

@@ -11,10 +11,9 @@ import { DeskError, commentsOn, loadRevision, saveRevision } from "~/desk/revisi
 import { uploadsOf } from "~/desk/uploads.server";
 import { REVIEW_SECTION_LABELS } from "~/desk/review-sections";
 import { unitsFor } from "~/preferences/units.server";
+import { REVISION_STATE_LABELS, isEditableRevisionState } from "~/vocabulary/revision-states";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.values.title ?? "Revision"} — Desk — Dryside` }];
-
-const STATE_WORDS = { draft: "draft", in_review: "in review", changes_requested: "changes requested", published: "published", superseded: "superseded", withdrawn: "withdrawn" } as const;
 
 // The preview and the site check change nothing: re-running this page's loader after them would only cost a query.
 export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
@@ -27,7 +26,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!found) throw data({ message: "No such revision." }, { status: 404 });
   const { revision, detail } = found;
   const [choices, units, comments, uploads] = await Promise.all([editorChoices(), unitsFor(request), commentsOn(revision.id), uploadsOf(revision.id)]);
-  const editable = revision.authorId === user.id && (revision.state === "draft" || revision.state === "changes_requested");
+  const editable = revision.authorId === user.id && isEditableRevisionState(revision.state);
   return {
     ...choices,
     units,
@@ -61,14 +60,14 @@ export default function RevisionEditor({ loaderData, actionData }: Route.Compone
   const { revision, comments, uploads, editable, notice } = loaderData;
   const values = actionData?.values ?? loaderData.values;
   const errors: FieldErrors = actionData?.errors ?? {};
-  const heading = `Revision ${revision.number} · ${STATE_WORDS[revision.state]} · written by ${revision.authorName}`;
+  const heading = `Revision ${revision.number} · ${REVISION_STATE_LABELS[revision.state]} · written by ${revision.authorName}`;
   return (
     <div className="space-y-10">
       {notice && !actionData ? <p role="status" className="rounded border border-vapour/40 bg-vapour/5 px-3 py-2 text-sm text-vapour" data-testid="desk-notice">{notice}</p> : null}
       {errors.form ? <p role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop">{errors.form.join(" ")}</p> : null}
       {!editable ? (
         <p className="rounded border border-rule bg-sheet px-3 py-2 text-sm" data-testid="read-only-note">
-          {revision.state === "in_review" ? "Waiting for review: the form is read-only until a reviewer answers." : revision.mine ? `This revision is ${STATE_WORDS[revision.state]}.` : `Only ${revision.authorName} edits this revision.`}{" "}
+          {revision.state === "in_review" ? "Waiting for review: the form is read-only until a reviewer answers." : revision.mine ? `This revision is ${REVISION_STATE_LABELS[revision.state]}.` : `Only ${revision.authorName} edits this revision.`}{" "}
           {loaderData.published ? <Link to={`/desk/details/${loaderData.slug}/edit`}>Start or open the next revision</Link> : null}
         </p>
       ) : null}

@@ -8,7 +8,7 @@ import { LayerTable } from "~/components/layer-table";
 import { SectionDrawing } from "~/components/section-drawing";
 import { SiteCheckPanel } from "~/components/site-check-panel";
 import { UnitsToggle } from "~/components/units-toggle";
-import { STANDING_CAUTION } from "~/components/app-shell";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { SaveDetailButton } from "~/components/save-detail-button";
 import { isSaved } from "~/desk/saved.server";
 import { unitsFor } from "~/preferences/units.server";

@@ -7,6 +7,7 @@ import { BuyButton } from "~/components/buy-button";
 import { checkoutFormSchema } from "~/payments/checkout-form";
 import { startCheckout } from "~/payments/checkout.server";
 import { offersFor } from "~/payments/offers.server";
+import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 export const meta: Route.MetaFunction = () => [{ title: "Pricing — Dryside" }];
 
@@ -80,8 +81,7 @@ export default function Pricing({ loaderData, actionData }: Route.ComponentProps
         </table>
       </section>
       <p className="max-w-3xl text-sm text-graphite-soft">
-        Prices in US dollars. Payment happens on the payments service's own page; Dryside never sees your card. Every detail is a reference
-        design: check it against the code adopted where you build and with a licensed design professional where one is required.
+        Prices in US dollars. Payment happens on the payments service's own page; Dryside never sees your card. {STANDING_CAUTION}
       </p>
     </div>
   );
