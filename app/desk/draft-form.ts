@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import { REQUIRED_BODY_SECTIONS } from "~/content/parse-detail";
+import { missingBodySections } from "~/vocabulary/body-sections";
 import { detailFrontMatterSchema, type DetailFrontMatter } from "~/content/detail-schema";
 
 // The desk's detail form as the browser posts it, and its validation against the same schema the
@@ -205,8 +205,7 @@ export function validateDraft(values: DraftFormValues, context: DraftContext): D
   });
   for (const set of values.sets) if (!context.knownSets.has(set)) add("sets", `There is no set “${set}”.`);
   if (context.forSubmission) {
-    const headings = values.body.split("\n").map((line) => /^##\s+(.+?)\s*$/.exec(line)?.[1]);
-    const missing = REQUIRED_BODY_SECTIONS.filter((section) => !headings.includes(section));
+    const missing = missingBodySections(values.body);
     if (missing.length) add("body", `Before review the body needs the section${missing.length > 1 ? "s" : ""} ${missing.map((m) => `“## ${m}”`).join(", ")}.`);
   }
   if (!parsed.success || Object.keys(errors).length > 0) return { ok: false, errors };
