@@ -50,10 +50,11 @@ export function SiteCheckResults({ result, units }: { result: SiteCheckResult; u
         <CaseSummary profile={profiles.winter} units={units} />
         <CaseSummary profile={profiles.summer} units={units} />
       </div>
-      <figure>
-        <ProfileChart profile={profiles.winter} units={units} />
-        <figcaption className="mt-1 text-xs text-graphite-soft">Winter temperature and dew point through the layers (steady state, dew-point method).</figcaption>
-      </figure>
+      <div className="space-y-4" data-testid="profile-charts">
+        <ProfileChart profile={profiles.winter} units={units} className="rounded border border-rule bg-sheet p-2" />
+        <ProfileChart profile={profiles.summer} units={units} className="rounded border border-rule bg-sheet p-2" />
+        <p className="text-xs text-graphite-soft">Steady state on design-day conditions (dew-point method); layer numbers as in the section drawing.</p>
+      </div>
 
       {flags.length ? (
         <ul className="space-y-2" data-testid="flags">
