@@ -1,6 +1,7 @@
 import { QueryTypes } from "sequelize";
 import { roleAtLeast, type StaffRole } from "~/vocabulary/roles";
 import { sequelize } from "~/models/index.server";
+import type { EntitlementKind } from "~/vocabulary/entitlements";
 import { LIVE_ENTITLEMENT_SQL } from "~/vocabulary/entitlements.server";
 
 export interface Viewer {
@@ -29,7 +30,7 @@ export async function canReadDetail(viewer: Viewer | null, detail: { id: number;
 export async function downloadableSetIds(viewer: Viewer | null): Promise<Set<number> | "all"> {
   if (!viewer) return new Set();
   if (roleAtLeast(viewer.role, "editor")) return "all";
-  const rows = await sequelize.query<{ kind: "plan" | "set"; set_id: number | null }>(
+  const rows = await sequelize.query<{ kind: EntitlementKind; set_id: number | null }>(
     `SELECT e.kind, e.set_id FROM entitlements e WHERE e.user_id = :userId AND ${LIVE_ENTITLEMENT_SQL}`,
     { type: QueryTypes.SELECT, replacements: { userId: viewer.id } },
   );

@@ -1,11 +1,12 @@
 import { Form } from "react-router";
+import type { EntitlementKind } from "~/vocabulary/entitlements";
 import { CsrfField } from "./csrf-field";
 
 /**
  * Posts to the checkout action on /pricing, which answers with a redirect to the hosted checkout page.
  * A full document submission, because the next page lives on the payments service's own site.
  */
-export function BuyButton({ kind, item, label, testId }: { kind: "plan" | "set"; item: string; label: string; testId?: string }) {
+export function BuyButton({ kind, item, label, testId }: { kind: EntitlementKind; item: string; label: string; testId?: string }) {
   return (
     <Form method="post" action="/pricing" reloadDocument>
       <CsrfField />

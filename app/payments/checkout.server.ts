@@ -3,6 +3,7 @@ import { env } from "~/config/env.server";
 import { DetailSet, Entitlement, type User } from "~/models/index.server";
 import { ensurePrice, findPlan, findSetOffer, planPriceSpec, setPriceSpec } from "./catalogue.server";
 import { stripe } from "./stripe.server";
+import type { EntitlementKind } from "~/vocabulary/entitlements";
 
 export type Purchase = { kind: "plan"; plan: string } | { kind: "set"; set: string };
 
@@ -73,7 +74,7 @@ export async function startCheckout(user: User, purchase: Purchase): Promise<Che
 }
 
 export type CheckoutState =
-  | { state: "granted"; kind: "plan" | "set"; label: string; setSlug: string | null }
+  | { state: "granted"; kind: EntitlementKind; label: string; setSlug: string | null }
   | { state: "pending" }
   | { state: "unpaid" }
   | { state: "unknown" };

@@ -2,10 +2,11 @@ import { receiptMail } from "~/mail/templates";
 import { sendMailOrLog } from "~/mail/mailer.server";
 import { Payment, type User } from "~/models/index.server";
 import { formatMoney } from "./money";
+import type { EntitlementKind } from "~/vocabulary/entitlements";
 
 export interface PaymentRecord {
   user: User;
-  kind: "plan" | "set";
+  kind: EntitlementKind;
   description: string;
   amountCents: number;
   currency: string;

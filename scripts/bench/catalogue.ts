@@ -6,6 +6,7 @@ import { sequelize } from "../../app/db/sequelize.server.ts";
 import { measureFirstLoad } from "./first-load.ts";
 import { growLargeCatalogue } from "./grow-catalogue.ts";
 import { freePort } from "../lib/free-port.ts";
+import type { ClimateZoneId } from "../../app/vocabulary/climate-zones.ts";
 
 const TARGET = Number(process.env.BENCH_DETAILS ?? 10000);
 const DURATION = Number(process.env.BENCH_SECONDS ?? 8);
@@ -29,7 +30,8 @@ for (let i = 0; i < 200; i++) {
 }
 
 // Varied searches defeat the per-process result cache: every request is a different combination.
-const ZONES = ["2A", "3A", "3B", "4A", "4C", "5A", "5B", "6A", "6B", "7", "8"];
+// Eleven zones (a count the salts below rely on), checked against the vocabulary's zone ids.
+const ZONES: ClimateZoneId[] = ["2A", "3A", "3B", "4A", "4C", "5A", "5B", "6A", "6B", "7", "8"];
 const KINDS = ["above-grade-wall", "roof", "basement-wall", "slab", "crawlspace-wall", "rim-joist"];
 const WORDS = ["foam", "crawlspace", "exterior", "cellulose", "drainage", "polyiso", "mineral wool", "spray foam"];
 const SORTS = ["revised", "title", "r-value"];
