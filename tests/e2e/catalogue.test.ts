@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
-import type { BrowserContext, Page } from "playwright-core";
+import { mkdirSync } from "node:fs";
+import type { BrowserContext, Locator, Page } from "playwright-core";
 import { baseUrl, openBrowser, screenshot } from "./browser";
 
 let browser: BrowserContext;
@@ -133,4 +134,43 @@ test("the catalogue and a detail read well at phone width", async () => {
   await screenshot(page, "detail-phone");
   await page.close();
   await context.close();
+});
+
+/** Saves one chart figure as test output for people to look at (not committed). */
+async function chartShot(chart: Locator, name: string): Promise<void> {
+  mkdirSync("test-results/screenshots", { recursive: true });
+  await chart.screenshot({ path: `test-results/screenshots/${name}.png` });
+}
+
+test("the profile charts show a winter, a summer and a below-grade case, wide and at phone width", async () => {
+  const page = await browser.newPage();
+  await page.goto(`${baseUrl()}/details?tier=free&assembly=above-grade-wall`);
+  await page.getByTestId("detail-card").first().getByRole("link").click();
+  await page.waitForURL(/\/details\/[a-z0-9-]+$/);
+  const winter = page.getByTestId("profile-chart-winter");
+  const summer = page.getByTestId("profile-chart-summer");
+  await winter.locator('svg[data-layout="wide"]').waitFor();
+  // Separate, titled figures: the section drawing, then one chart per case.
+  expect(await winter.locator("figcaption").textContent()).toBe("Winter profile");
+  expect(await summer.locator("figcaption").textContent()).toBe("Summer profile");
+  expect(await winter.locator('svg[data-layout="wide"] title').textContent()).toContain("temperature by thermal resistance");
+  expect(await winter.locator('svg[data-layout="narrow"]').isVisible()).toBe(false);
+  await chartShot(winter, "profile-winter");
+  await chartShot(summer, "profile-summer");
+
+  await page.goto(`${baseUrl()}/details/basement-icf-wall`);
+  const below = page.getByTestId("profile-chart-winter");
+  await below.locator('svg[data-layout="wide"]').waitFor();
+  expect(await below.locator('svg[data-layout="wide"]').textContent()).toContain("soil side");
+  await chartShot(below, "profile-below-grade");
+
+  // At phone width the one-column drawing shows instead, its type drawn near 1:1.
+  await page.setViewportSize({ width: 360, height: 800 });
+  const narrow = below.locator('svg[data-layout="narrow"]');
+  await narrow.waitFor();
+  expect(await below.locator('svg[data-layout="wide"]').isVisible()).toBe(false);
+  const box = await narrow.boundingBox();
+  expect(box?.width).toBeGreaterThan(300); // 360 units wide: 10-unit labels stay above 8 px
+  await chartShot(below, "profile-below-grade-phone");
+  await page.close();
 });
