@@ -1,6 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { roleAtLeast, type StaffRole } from "~/vocabulary/roles";
-import { sequelize } from "~/models/index.server";
+import { Detail, DetailSet, sequelize } from "~/models/index.server";
+import { jsonError } from "~/http/json";
+import { premiumRefusal, type PremiumRefusal } from "./refusal";
 import type { EntitlementKind } from "~/vocabulary/entitlements";
 import { LIVE_ENTITLEMENT_SQL } from "~/vocabulary/entitlements.server";
 
@@ -46,4 +48,34 @@ export async function hasLivePlan(viewer: Viewer | null): Promise<boolean> {
     replacements: { userId: viewer.id },
   });
   return rows.length > 0;
+}
+
+/** What a premium guard protects: one detail (its drawings, its site check) or one set's pack. */
+export type PremiumContent = { what: string; detail: { id: number; tier: "free" | "premium" } } | { what: string; set: { id: number; slug: string; title: string } };
+
+/** The refusal for content this viewer may not read, naming the sets that would give access. */
+export async function refusalFor(content: PremiumContent): Promise<PremiumRefusal> {
+  if ("set" in content) return premiumRefusal(content.what, [content.set]);
+  const sets = await DetailSet.findAll({
+    attributes: ["slug", "title"],
+    include: [{ model: Detail, as: "details", attributes: [], where: { id: content.detail.id }, required: true }],
+    order: [["title", "ASC"]],
+  });
+  return premiumRefusal(content.what, sets);
+}
+
+/**
+ * The premium guard: returns when the viewer may use the content, else throws the one refusal
+ * (403, JSON `PremiumRefusal`). Pages that show a preview instead use `canReadDetail` and `refusalFor`.
+ */
+export async function requireEntitlement(viewer: Viewer | null, content: PremiumContent): Promise<void> {
+  const allowed = "set" in content ? await canDownloadSet(viewer, content.set.id) : await canReadDetail(viewer, content.detail);
+  if (allowed) return;
+  const { error, message, ...details } = await refusalFor(content);
+  throw jsonError(403, error, message, details);
+}
+
+async function canDownloadSet(viewer: Viewer | null, setId: number): Promise<boolean> {
+  const allowed = await downloadableSetIds(viewer);
+  return allowed === "all" || allowed.has(setId);
 }

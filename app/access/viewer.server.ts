@@ -1,8 +1,9 @@
+import type { RouterContextProvider } from "react-router";
 import { getUser } from "~/auth/guards.server";
 import type { Viewer } from "./premium.server";
 
-/** The signed-in person as the access rules need them, or null for a visitor. */
-export async function getViewer(request: Request): Promise<Viewer | null> {
-  const user = await getUser(request);
+/** The signed-in person as the access rules need them, or null for a visitor (loaded once by the root middleware). */
+export function getViewer(context: Readonly<RouterContextProvider>): Viewer | null {
+  const user = getUser(context);
   return user ? { id: user.id, role: user.role } : null;
 }

@@ -1,5 +1,6 @@
 import { Op } from "sequelize";
 import { canReadDetail, type Viewer } from "~/access/premium.server";
+import { premiumRefusal, type PremiumRefusal } from "~/access/refusal";
 import type { DetailFrontMatter, DetailLayer } from "~/content/detail-schema";
 import type { Material } from "~/envelope";
 import { renderMarkdown } from "~/markdown/render.server";
@@ -58,6 +59,8 @@ export interface DetailView {
     attachments: UploadRow[];
   };
   preview?: { excerpt: string };
+  /** Without access: the same refusal the API, drawings and packs give, shown beside the preview. */
+  refusal?: PremiumRefusal;
 }
 
 function materialName(library: ReadonlyMap<string, Material>, slug: string): string {
@@ -132,6 +135,7 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
   } else {
     const why = plainText(bodySection(revision.bodyMd, BODY_SECTION_HEADINGS["why-it-works"]));
     view.preview = { excerpt: why.length > 280 ? `${why.slice(0, 280).replace(/\s+\S*$/, "")}…` : why };
+    view.refusal = premiumRefusal("This detail", sets);
   }
   return view;
 }

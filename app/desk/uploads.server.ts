@@ -2,7 +2,7 @@ import { createHash, randomBytes } from "node:crypto";
 import type { Readable } from "node:stream";
 import createDOMPurify from "dompurify";
 import { JSDOM } from "jsdom";
-import { canReadDetail, type Viewer } from "~/access/premium.server";
+import { requireEntitlement, type Viewer } from "~/access/premium.server";
 import { isEditableRevisionState } from "~/vocabulary/revision-states";
 import { roleAtLeast } from "~/vocabulary/roles";
 import { Detail, DetailRevision, Upload } from "~/models/index.server";
@@ -114,18 +114,26 @@ export interface ServedUpload {
  * The file, when this viewer may read it: a published revision's files follow the detail's tier
  * (premium needs a plan or the set); anything else (drafts, submissions, history) is for editors only.
  * A draft's file answers "not found" to non-editors, so its existence is not revealed; a premium
- * published file answers "premium" to those without access.
+ * published file is refused (the premium refusal, 403) to those without access.
  */
-export async function readUpload(viewer: Viewer | null, uploadId: number): Promise<ServedUpload | "premium" | null> {
-  const upload = await Upload.findByPk(uploadId);
-  if (!upload) return null;
-  const revision = await DetailRevision.findByPk(upload.revisionId, { attributes: ["id", "detailId", "state"] });
-  const detail = revision ? await Detail.findByPk(revision.detailId, { attributes: ["id", "tier", "publishedRevisionId", "withdrawnAt"] }) : null;
-  if (!revision || !detail) return null;
+export async function readUpload(viewer: Viewer | null, uploadId: number): Promise<ServedUpload | null> {
+  const upload = await Upload.findByPk(uploadId, {
+    include: [
+      {
+        model: DetailRevision,
+        as: "revision",
+        attributes: ["id", "detailId", "state"],
+        include: [{ model: Detail, as: "detail", attributes: ["id", "tier", "publishedRevisionId", "withdrawnAt"] }],
+      },
+    ],
+  });
+  const revision = upload?.revision;
+  const detail = revision?.detail;
+  if (!upload || !revision || !detail) return null;
   const live = revision.state === "published" && detail.publishedRevisionId === revision.id && detail.isLive();
   const editor = viewer !== null && roleAtLeast(viewer.role, "editor");
   if (!editor && !live) return null;
-  if (!editor && !(await canReadDetail(viewer, detail))) return "premium";
+  if (!editor) await requireEntitlement(viewer, { what: "This drawing", detail });
   const stored = await blobStorage().get(upload.storageKey);
   if (!stored) return null;
   return { body: stored.body, size: stored.size, contentType: upload.contentType, name: upload.originalName };

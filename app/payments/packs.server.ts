@@ -2,7 +2,7 @@ import { createHash } from "node:crypto";
 import { PassThrough, type Readable } from "node:stream";
 import { ZipArchive } from "archiver";
 import { Op } from "sequelize";
-import { downloadableSetIds, type Viewer } from "~/access/premium.server";
+import { requireEntitlement, type Viewer } from "~/access/premium.server";
 import { exportDetailMarkdown } from "~/catalogue/export-markdown";
 import { materialLibrary } from "~/catalogue/materials.server";
 import { plainText } from "~/catalogue/search-text";
@@ -192,7 +192,7 @@ async function openPack(key: string, build: () => Readable): Promise<{ body: Rea
 
 export type PackDownload =
   | { ok: true; key: string; fileName: string; body: Readable; size: number | null; built: boolean }
-  | { ok: false; status: 403 | 404; message: string };
+  | { ok: false; status: 404; message: string };
 
 /**
  * Checks access again (a plan can have lapsed since the page was drawn), builds or reuses the pack,
@@ -201,8 +201,7 @@ export type PackDownload =
 export async function downloadPack(viewer: Viewer, setSlug: string, request: PackRequest): Promise<PackDownload> {
   const set = await DetailSet.findOne({ where: { slug: setSlug } });
   if (!set) return { ok: false, status: 404, message: `No set called “${setSlug}”.` };
-  const allowed = await downloadableSetIds(viewer);
-  if (allowed !== "all" && !allowed.has(set.id)) return { ok: false, status: 403, message: `A plan or the “${set.title}” set is needed to download this pack.` };
+  await requireEntitlement(viewer, { what: `The “${set.title}” pack`, set });
   const members = await packMembers(set.id);
   if (members.length === 0) return { ok: false, status: 404, message: `“${set.title}” has no published details yet.` };
   const key = packKey(set.slug, request, members, await materialsVersion());

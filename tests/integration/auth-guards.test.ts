@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { expect, test } from "vitest";
 import { useMigratedDatabase } from "../helpers/database";
 import { useMailCatcher } from "../helpers/mail";
@@ -18,9 +19,17 @@ async function signedIn(email: string, role: "member" | "editor" | "reviewer" | 
   return { user, browser };
 }
 
-async function thrownBy(promise: Promise<unknown>): Promise<Response> {
+/** A request context as the root middleware leaves it: the session's user (or null) loaded once. */
+async function contextFor(request: Request): Promise<RouterContextProvider> {
+  const { loadUser } = await import("~/auth/guards.server");
+  const context = new RouterContextProvider();
+  await loadUser({ request, params: {}, context, url: new URL(request.url), pattern: new URL(request.url).pathname }, async () => new Response(null));
+  return context;
+}
+
+async function thrownBy(guard: () => unknown): Promise<Response> {
   try {
-    await promise;
+    await guard();
   } catch (error) {
     if (error instanceof Response) return error;
     const init = (error as { init?: ResponseInit }).init;
@@ -31,10 +40,11 @@ async function thrownBy(promise: Promise<unknown>): Promise<Response> {
 
 test("requireUser sends a visitor on a page to sign in and back, and answers an API call with JSON 401", async () => {
   const { requireUser } = await import("~/auth/guards.server");
-  const page = await thrownBy(requireUser(new Request("http://127.0.0.1:3000/account?tab=plan")));
+  const visitor = new RouterContextProvider();
+  const page = await thrownBy(() => requireUser(new Request("http://127.0.0.1:3000/account?tab=plan"), visitor));
   expect(page.status).toBe(302);
   expect(page.headers.get("Location")).toBe("/sign-in?next=%2Faccount%3Ftab%3Dplan");
-  const api = await thrownBy(requireUser(new Request("http://127.0.0.1:3000/api/saved")));
+  const api = await thrownBy(() => requireUser(new Request("http://127.0.0.1:3000/api/saved"), visitor));
   expect(api.status).toBe(401);
   expect(await api.json()).toMatchObject({ error: "unauthorised" });
 });
@@ -43,11 +53,32 @@ test("requireRole answers 403 below the role and returns the user at or above it
   const { requireRole } = await import("~/auth/guards.server");
   const { browser: editor } = await signedIn("editor@example.test", "editor");
   const request = editor.request("/desk");
-  expect((await thrownBy(requireRole(request, "reviewer"))).status).toBe(403);
-  expect((await requireRole(editor.request("/desk"), "editor")).email).toBe("editor@example.test");
-  const api = await thrownBy(requireRole(editor.request("/api/review"), "admin"));
+  const context = await contextFor(request);
+  expect((await thrownBy(() => requireRole(request, context, "reviewer"))).status).toBe(403);
+  expect(requireRole(request, context, "editor").email).toBe("editor@example.test");
+  const apiRequest = editor.request("/api/review");
+  const api = await thrownBy(async () => requireRole(apiRequest, await contextFor(apiRequest), "admin"));
   expect(api.status).toBe(403);
   expect(await api.json()).toMatchObject({ error: "forbidden" });
+});
+
+test("a page request looks the session up once: the root loader, the desk's guard and the page share the user", async () => {
+  const { Session } = await import("~/models/index.server");
+  const root = await import("~/root");
+  const desk = await import("~/routes/desk/index");
+  const { browser: editor } = await signedIn("once@example.test", "editor");
+  let lookups = 0;
+  Session.addHook("beforeFind", "count-lookups", () => {
+    lookups++;
+  });
+  try {
+    const [shell, page] = await editor.document([root.loader, desk.loader], "/desk", {});
+    expect((shell.body as { user: { displayName: string } | null }).user?.displayName).toBe("Guard editor");
+    expect(page.status).toBe(200);
+  } finally {
+    Session.removeHook("beforeFind", "count-lookups");
+  }
+  expect(lookups).toBe(1);
 });
 
 test("an admin's role change is audited with who, from and to, and signs the person out", async () => {

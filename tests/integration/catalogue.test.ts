@@ -2,6 +2,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import { beforeAll, expect, test } from "vitest";
 import { parse } from "yaml";
 import { useMigratedDatabase } from "../helpers/database";
+import { RouteClient } from "../helpers/route-client";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 useMigratedDatabase();
@@ -28,11 +29,13 @@ beforeAll(async () => {
 async function api(path: string, init?: RequestInit) {
   const url = new URL(path, "http://test.local");
   const request = new Request(url, init);
-  if (url.pathname === "/api/details") return (await import("~/routes/api/details")).loader({ request, params: {}, context: {} } as never);
+  const visitor = new RouteClient();
+  // API routes answer Responses; respond() runs them behind the root middleware, as the server does.
+  if (url.pathname === "/api/details") return (await visitor.respond((await import("~/routes/api/details")).loader, request, {})) as Response;
   const check = /^\/api\/details\/([^/]+)\/check$/.exec(url.pathname);
-  if (check) return (await import("~/routes/api/detail-check")).action({ request, params: { slug: check[1] }, context: {} } as never);
+  if (check) return (await visitor.respond((await import("~/routes/api/detail-check")).action, request, { slug: check[1] })) as Response;
   const one = /^\/api\/details\/([^/]+)$/.exec(url.pathname);
-  if (one) return (await import("~/routes/api/detail")).loader({ request, params: { slug: one[1] }, context: {} } as never);
+  if (one) return (await visitor.respond((await import("~/routes/api/detail")).loader, request, { slug: one[1] })) as Response;
   throw new Error(`no route for ${path}`);
 }
 
@@ -106,9 +109,13 @@ test("a premium detail is refused to a visitor with 403 and never carries its bo
   expect(response.status).toBe(403);
   const text = await response.text();
   expect(text).not.toContain("Install sequence");
-  expect(JSON.parse(text).preview.slug).toBe(premium.slug);
+  const refusal = JSON.parse(text);
+  expect(refusal.preview.slug).toBe(premium.slug);
+  expect(refusal).toMatchObject({ error: "premium_required", offers: [{ href: "/pricing" }] });
   const check = await api(`/api/details/${premium.slug}/check`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ zone: "5A" }) });
   expect(check.status).toBe(403);
+  // The same refusal everywhere premium content is asked for (the pack and drawing refusals are in payments and desk tests).
+  expect(await check.json()).toMatchObject({ error: "premium_required", offers: refusal.offers });
 });
 
 test("a free detail is served whole, and its site check answers with the engine's result", async () => {

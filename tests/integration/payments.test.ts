@@ -170,13 +170,13 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   // The pack: access checked at download, built once, then served from storage.
   const pack = await import("~/routes/sets/pack");
   const packStarted = Date.now();
-  const first = (await pack.loader({ request: browser.request(`/sets/${SET}/pack?units=ip`), params: { slug: SET }, context: {} } as never)) as Response;
+  const first = (await browser.respond(pack.loader, `/sets/${SET}/pack?units=ip`, { slug: SET })) as Response;
   expect(first.status).toBe(200);
   expect(first.headers.get("Content-Type")).toBe("application/zip");
   const zip = Buffer.from(await first.arrayBuffer());
   console.log(`pack ${SET}: ${zip.length} bytes built in ${Date.now() - packStarted} ms`);
   const againStarted = Date.now();
-  const again = (await pack.loader({ request: browser.request(`/sets/${SET}/pack?units=ip`), params: { slug: SET }, context: {} } as never)) as Response;
+  const again = (await browser.respond(pack.loader, `/sets/${SET}/pack?units=ip`, { slug: SET })) as Response;
   expect(again.headers.get("X-Pack-Key")).toBe(first.headers.get("X-Pack-Key"));
   expect(Buffer.from(await again.arrayBuffer()).equals(zip)).toBe(true);
   expect(Date.now() - againStarted).toBeLessThan(1000); // served from storage, not rebuilt
@@ -197,8 +197,9 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
 
   // Another member without the set is refused at download time; a visitor is sent to sign in.
   const other = await member("nosetyet");
-  const refused = (await pack.loader({ request: other.browser.request(`/sets/${SET}/pack`), params: { slug: SET }, context: {} } as never)) as Response;
+  const refused = (await other.browser.respond(pack.loader, `/sets/${SET}/pack`, { slug: SET })) as Response;
   expect(refused.status).toBe(403);
+  expect(await refused.json()).toMatchObject({ error: "premium_required", offers: [{ href: "/pricing" }, { href: `/sets#${SET}` }] });
   const visitor = await new RouteClient().call(pack.loader, `/sets/${SET}/pack`, { slug: SET });
   expect(visitor.status).toBe(302);
 });

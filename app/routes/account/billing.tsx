@@ -2,15 +2,15 @@ import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/billing";
 import { requireCsrf } from "~/auth/csrf.server";
-import { requireUser } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { billingOverview, requestPlanEnd } from "~/payments/billing.server";
 import { ENTITLEMENT_STATUS_LABELS } from "~/vocabulary/entitlements";
 
 export const meta: Route.MetaFunction = () => [{ title: "Billing — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = context.get(userContext);
   const requested = new URL(request.url).searchParams.get("requested");
   const overview = await billingOverview(user);
   // After a change request the page refreshes itself until the service's webhook has confirmed it.
@@ -21,8 +21,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 const planChangeSchema = z.object({ intent: z.enum(["end-at-period-end", "keep-running"]) });
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = context.get(userContext);
   const form = await requireCsrf(request);
   const parsed = planChangeSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) return data({ message: "That change was not understood." }, { status: 400 });

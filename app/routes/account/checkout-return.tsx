@@ -1,14 +1,14 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/checkout-return";
-import { requireUser } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { readCheckoutState } from "~/payments/checkout.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Your purchase — Dryside" }];
 
 // Where the hosted checkout sends the buyer back. It only reads: access is granted by the signed
 // webhook, which may land a moment after the buyer does, so the page refreshes itself while pending.
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = context.get(userContext);
   const sessionId = new URL(request.url).searchParams.get("session_id");
   if (!sessionId || !/^cs_[A-Za-z0-9_]+$/.test(sessionId)) return { state: "unknown" as const };
   return readCheckoutState(user, sessionId);

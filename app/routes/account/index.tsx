@@ -1,14 +1,14 @@
 import type { Route } from "./+types/index";
 import { Link } from "react-router";
-import { requireUser, type StaffRole } from "~/auth/guards.server";
+import { type StaffRole, userContext } from "~/auth/guards.server";
 import { listSaved } from "~/desk/saved.server";
 import { billingOverview } from "~/payments/billing.server";
 import { STAFF_ROLE_DESCRIPTIONS } from "~/vocabulary/roles";
 
 export const meta: Route.MetaFunction = () => [{ title: "Your account — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ context }: Route.LoaderArgs) {
+  const user = context.get(userContext);
   const role: StaffRole = user.role;
   return {
     profile: {

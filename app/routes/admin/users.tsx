@@ -2,7 +2,7 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import { Form, data, useSearchParams } from "react-router";
 import type { Route } from "./+types/users";
 import { requireCsrf } from "~/auth/csrf.server";
-import { requireRole } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { STAFF_ROLES, STAFF_ROLE_LABELS } from "~/vocabulary/roles";
 import { userAdminSchema } from "~/auth/schemas";
 import { UserAdminError, changeRole, listUsers, revokeSessionsByAdmin } from "~/auth/user-admin.server";
@@ -10,14 +10,14 @@ import { CsrfField } from "~/components/csrf-field";
 
 export const meta: Route.MetaFunction = () => [{ title: "Users — Dryside admin" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const admin = await requireRole(request, "admin");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const admin = context.get(userContext);
   const q = new URL(request.url).searchParams.get("q") ?? "";
   return { users: await listUsers({ q }), selfId: admin.id };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const admin = await requireRole(request, "admin");
+export async function action({ request, context }: Route.ActionArgs) {
+  const admin = context.get(userContext);
   const formData = await requireCsrf(request);
   const submission = parseWithZod(formData, { schema: userAdminSchema });
   if (submission.status !== "success") return data({ message: "That change was not understood." }, { status: 400 });

@@ -13,9 +13,9 @@ import { FormErrors, SubmitButton, TextField } from "~/components/form-field";
 
 export const meta: Route.MetaFunction = () => [{ title: "Sign in — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
+export async function loader({ request, context }: Route.LoaderArgs) {
   const next = safeNext(new URL(request.url).searchParams.get("next"));
-  if (await getUser(request)) throw redirect(next);
+  if (getUser(context)) throw redirect(next);
   return null;
 }
 

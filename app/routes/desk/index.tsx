@@ -1,14 +1,14 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/index";
-import { requireRole } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { REVISION_STATE_LABELS } from "~/vocabulary/revision-states";
 import { roleAtLeast } from "~/vocabulary/roles";
 import { deskOverview, type RevisionRow } from "~/desk/revisions.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Desk — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "editor");
+export async function loader({ context }: Route.LoaderArgs) {
+  const user = context.get(userContext);
   return { overview: await deskOverview(user), reviewer: roleAtLeast(user.role, "reviewer") };
 }
 

@@ -1,7 +1,7 @@
 import { Form, Link, data } from "react-router";
 import type { Route } from "./+types/material";
 import { requireCsrf } from "~/auth/csrf.server";
-import { requireRole } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { MATERIAL_FAMILIES } from "~/envelope/material-schema";
 import { MATERIAL_FLAGS, type MaterialFormValues } from "~/desk/material-form";
@@ -9,15 +9,14 @@ import { findMaterial, materialFormFromData, materialToForm, updateMaterial } fr
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.values.name ?? "Material"} — Desk — Dryside` }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  await requireRole(request, "editor");
+export async function loader({ params }: Route.LoaderArgs) {
   const material = await findMaterial(params.slug);
   if (!material) throw data({ message: `No material “${params.slug}”.` }, { status: 404 });
   return { slug: material.slug, values: materialToForm(material) };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "editor");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = context.get(userContext);
   const form = await requireCsrf(request);
   const values = materialFormFromData(form);
   const outcome = await updateMaterial(user, params.slug, values);

@@ -1,7 +1,7 @@
 import { data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/new";
 import { requireCsrf } from "~/auth/csrf.server";
-import { requireRole } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
 import { DraftEditor } from "~/components/desk/draft-editor";
 import { BLANK_LAYER } from "~/components/desk/layer-editor";
 import { valuesFromFormData, type DraftFormValues, type FieldErrors } from "~/desk/draft-form";
@@ -25,13 +25,12 @@ export function shouldRevalidate({ formAction, defaultShouldRevalidate }: Should
 }
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, "editor");
   const [choices, units] = await Promise.all([editorChoices(), unitsFor(request)]);
   return { ...choices, units, values: EMPTY };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "editor");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = context.get(userContext);
   const form = await requireCsrf(request);
   const values = valuesFromFormData(form);
   const outcome = await createDetailDraft(user, values);

@@ -4,7 +4,6 @@ import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
 import { materialLibrary } from "~/catalogue/materials.server";
 import { describeChanges } from "~/catalogue/revision-diff";
-import type { DetailFrontMatter } from "~/content/detail-schema";
 import { CsrfField } from "~/components/csrf-field";
 import { LayerTable } from "~/components/layer-table";
 import { changedHunks, diffLines } from "~/desk/line-diff";
@@ -16,13 +15,13 @@ import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `Review: ${data?.title ?? "revision"} — Desk — Dryside` }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "reviewer");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = requireRole(request, context, "reviewer");
   const found = await loadRevision(Number(params.id) || 0);
   if (!found) throw data({ message: "No such revision." }, { status: 404 });
   const { revision, detail, published } = found;
-  const front = revision.frontMatter as DetailFrontMatter;
-  const before = published ? (published.frontMatter as DetailFrontMatter) : null;
+  const front = revision.frontMatter;
+  const before = published ? published.frontMatter : null;
   const [library, comments, uploads, units] = await Promise.all([materialLibrary(), commentsOn(revision.id), uploadsOf(revision.id), unitsFor(request)]);
   const own = revision.authorId === user.id;
   return {
@@ -48,8 +47,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "reviewer");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = requireRole(request, context, "reviewer");
   const form = await requireCsrf(request);
   const comments: Partial<Record<ReviewSection, string>> = {};
   for (const section of REVIEW_SECTIONS) {

@@ -1,8 +1,7 @@
 import { Link, data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/revision";
 import { requireCsrf } from "~/auth/csrf.server";
-import { requireRole } from "~/auth/guards.server";
-import type { DetailFrontMatter } from "~/content/detail-schema";
+import { userContext } from "~/auth/guards.server";
 import { DraftEditor } from "~/components/desk/draft-editor";
 import { UploadPanel } from "~/components/desk/upload-panel";
 import { valuesFromFormData, valuesFromFrontMatter, type FieldErrors } from "~/desk/draft-form";
@@ -20,8 +19,8 @@ export function shouldRevalidate({ formAction, defaultShouldRevalidate }: Should
   return formAction?.startsWith("/desk/api/") ? false : defaultShouldRevalidate;
 }
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "editor");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = context.get(userContext);
   const found = await loadRevision(Number(params.id) || 0);
   if (!found) throw data({ message: "No such revision." }, { status: 404 });
   const { revision, detail } = found;
@@ -36,13 +35,13 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     revision: { id: revision.id, number: revision.number, state: revision.state, authorName: revision.authorName, mine: revision.authorId === user.id },
     slug: detail.slug,
     published: Boolean(detail.publishedRevisionId && !detail.withdrawnAt),
-    values: valuesFromFrontMatter(revision.frontMatter as DetailFrontMatter, revision.bodyMd),
+    values: valuesFromFrontMatter(revision.frontMatter, revision.bodyMd),
     notice: new URL(request.url).searchParams.get("saved") ? "Saved." : new URL(request.url).searchParams.get("submitted") ? "Submitted for review." : null,
   };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "editor");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = context.get(userContext);
   const form = await requireCsrf(request);
   const values = valuesFromFormData(form);
   const submit = form.get("intent") === "submit";

@@ -8,15 +8,15 @@ import { Detail } from "~/models/index.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Withdraw a detail — Desk — Dryside" }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  await requireRole(request, "reviewer");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  requireRole(request, context, "reviewer");
   const detail = await Detail.findOne({ where: { slug: params.slug }, attributes: ["slug", "title", "publishedRevisionId", "withdrawnAt"] });
   if (!detail) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
   return { slug: detail.slug, title: detail.title, live: Boolean(detail.publishedRevisionId && !detail.withdrawnAt) };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "reviewer");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = requireRole(request, context, "reviewer");
   const form = await requireCsrf(request);
   const reason = form.get("reason");
   try {

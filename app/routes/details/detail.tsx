@@ -18,8 +18,8 @@ export const meta: Route.MetaFunction = ({ data }) => [
   { name: "description", content: data?.detail.summary ?? "" },
 ];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const [viewer, units] = await Promise.all([getViewer(request), unitsFor(request)]);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const [viewer, units] = await Promise.all([getViewer(context), unitsFor(request)]);
   const detail = await getDetailView(params.slug, viewer);
   if (!detail) throw data("No published detail has this address. It may have been withdrawn or renamed.", { status: 404 });
 
@@ -138,13 +138,12 @@ export default function DetailPage({ loaderData }: Route.ComponentProps) {
         <section className="rounded border border-ochre/60 bg-sheet p-6" data-testid="premium-preview">
           <h2 className="text-xl">Preview</h2>
           <p className="mt-2 max-w-prose text-graphite-soft">{detail.preview?.excerpt}</p>
-          <p className="mt-4 max-w-prose">
-            The layer table, the site check for your climate, the install sequence and the cautions are part of the premium library.
+          <p className="mt-4 max-w-prose" data-testid="premium-refusal">
+            {detail.refusal?.message} The layer table, the site check for your climate, the install sequence and the cautions come with it.
           </p>
           <p className="mt-4 flex flex-wrap gap-3">
-            <Link to="/pricing" className="rounded bg-ochre px-4 py-2 font-medium text-white no-underline hover:bg-ochre-deep">See plans</Link>
-            {detail.sets.map((set) => (
-              <Link key={set.slug} to={`/sets#${set.slug}`} className="rounded border border-rule px-4 py-2 no-underline">Buy “{set.title}”</Link>
+            {detail.refusal?.offers.map((offer, i) => (
+              <Link key={offer.href} to={offer.href} className={i === 0 ? "rounded bg-ochre px-4 py-2 font-medium text-white no-underline hover:bg-ochre-deep" : "rounded border border-rule px-4 py-2 no-underline"}>{offer.label}</Link>
             ))}
           </p>
         </section>

@@ -11,13 +11,13 @@ import { STANDING_CAUTION } from "~/vocabulary/caution";
 
 export const meta: Route.MetaFunction = () => [{ title: "Pricing — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  return offersFor(await getViewer(request));
+export async function loader({ context }: Route.LoaderArgs) {
+  return offersFor(getViewer(context));
 }
 
 // POST /pricing: opens a hosted checkout for a plan or a set. Signed-in members only; grants nothing.
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = requireUser(request, context);
   const form = await requireCsrf(request);
   const parsed = checkoutFormSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) return data({ message: "Choose a plan or a set to buy." }, { status: 400 });

@@ -6,8 +6,8 @@ import { offersFor } from "~/payments/offers.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Sets — Dryside" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  return offersFor(await getViewer(request));
+export async function loader({ context }: Route.LoaderArgs) {
+  return offersFor(getViewer(context));
 }
 
 export default function Sets({ loaderData }: Route.ComponentProps) {

@@ -5,10 +5,9 @@ import { getViewer } from "~/access/viewer.server";
 import { readUpload } from "~/desk/uploads.server";
 
 // GET /uploads/:id — a revision's drawing or photo, only for those who may read it (see readUpload).
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const file = await readUpload(await getViewer(request), Number(params.id) || 0);
+export async function loader({ params, context }: Route.LoaderArgs) {
+  const file = await readUpload(getViewer(context), Number(params.id) || 0);
   if (file === null) throw data({ message: "No file is filed under that address." }, { status: 404 });
-  if (file === "premium") throw data({ message: "This drawing belongs to a premium detail: it comes with a plan or the set that contains it." }, { status: 403 });
   const safeName = file.name.replace(/[^A-Za-z0-9._ -]/g, "_");
   return new Response(Readable.toWeb(file.body) as ReadableStream, {
     headers: {
