@@ -1,5 +1,17 @@
 import { getInputProps, type FieldMetadata } from "@conform-to/react";
 
+/** conform's prop getters include React's `key`, which JSX must receive directly, not in a spread. */
+export function withoutKey<Props extends { key?: unknown }>(props: Props): Omit<Props, "key"> {
+  const { key: _key, ...rest } = props;
+  return rest;
+}
+
+/** A field's messages under it, where the field's `aria-describedby` points. */
+export function FieldError({ meta, testId }: { meta: Pick<FieldMetadata<unknown>, "errorId" | "errors" | "name">; testId?: string }) {
+  if (!meta.errors?.length) return null;
+  return <p id={meta.errorId} className="text-sm text-stop" data-testid={testId ?? `error-${meta.name}`}>{meta.errors.join(" ")}</p>;
+}
+
 interface TextFieldProps {
   label: string;
   meta: FieldMetadata<string>;

@@ -39,7 +39,7 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   const revisionId = revisionPath.split("/").pop()!;
 
   await editor.getByLabel(/^Change note/).fill("Install sequence now says when to staple the batt supports.");
-  const body = editor.locator("#f-body");
+  const body = editor.getByLabel("Body (Markdown)");
   await body.fill(`${await body.inputValue()}\n\nStaple the batt supports every 450 mm before the subfloor goes down.`);
   // The live preview renders through the server's sanitiser as the editor types.
   await editor.getByTestId("body-preview").getByText("Staple the batt supports every 450 mm").waitFor();
@@ -72,7 +72,7 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   // The editor sees the comment and resubmits.
   await editor.goto(`${baseUrl()}${revisionPath}`);
   await editor.getByTestId("review-comments").getByText("Say which side of the joist the supports go.").waitFor();
-  const again = editor.locator("#f-body");
+  const again = editor.getByLabel("Body (Markdown)");
   await again.fill((await again.inputValue()).replace("every 450 mm", "every 450 mm on the underside of the joists"));
   await editor.getByRole("button", { name: "Submit for review" }).click();
   await editor.getByTestId("desk-notice").getByText("Submitted for review.").waitFor();

@@ -44,13 +44,15 @@ beforeAll(async () => {
   }
 });
 
-/** The editor form's fields, repeated the way the browser posts checkbox groups and layer rows. */
+/** The editor form's fields as the browser posts them: checkbox groups repeated, layer rows named `layers[i].field`. */
 function formPairs(values: DraftFormValues, intent: "save" | "submit"): [string, string][] {
   const pairs: [string, string][] = [["intent", intent]];
   for (const key of ["slug", "title", "summary", "assembly", "substrate", "below_grade", "strategy", "tier", "references", "change_note", "body"] as const) pairs.push([key, values[key]]);
   for (const zone of values.zones) pairs.push(["zones", zone]);
   for (const set of values.sets) pairs.push(["sets", set]);
-  for (const layer of values.layers) for (const [field, value] of Object.entries(layer)) pairs.push([`layer-${field}`, value]);
+  values.layers.forEach((layer, i) => {
+    for (const [field, value] of Object.entries(layer)) pairs.push([`layers[${i}].${field}`, value]);
+  });
   return pairs;
 }
 
@@ -120,7 +122,7 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   expect(review.changes).toContain("icf-eps-form: 63 mm → 100 mm.");
   expect(review.bodyDiff).toContainEqual({ kind: "added", text: "Set the forms plumb before the pour; brace every corner." });
 
-  const sentBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comment-layers": "Say which face is thickened.", "comment-cautions": "Add the termite caution." }, { id: String(id) });
+  const sentBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comments.layers": "Say which face is thickened.", "comments.cautions": "Add the termite caution." }, { id: String(id) });
   expect(sentBack.status).toBe(302);
   expect((await DetailRevision.findByPk(id))!.state).toBe("changes_requested");
   const comments = await ReviewComment.findAll({ where: { revisionId: id }, order: [["id", "ASC"]] });
@@ -173,8 +175,8 @@ test("a reviewer can never approve their own revision, and nothing changes when 
 
   const own = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "approve" }, { id: String(id) });
   expect(own.status).toBe(403);
-  expect((own.body as { message: string }).message).toMatch(/another reviewer/);
-  const ownSendBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comment-metadata": "self" }, { id: String(id) });
+  expect((own.body as { result: { error: Record<string, string[]> } }).result.error[""].join(" ")).toMatch(/another reviewer/);
+  const ownSendBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comments.metadata": "self" }, { id: String(id) });
   expect(ownSendBack.status).toBe(403);
 
   expect((await DetailRevision.findByPk(id))!.state).toBe("in_review");
@@ -203,12 +205,13 @@ test("an invalid form answers 400 with field errors, keeps what was typed, and s
   };
   const result = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs(typed, "save"), { id: String(id) });
   expect(result.status).toBe(400);
-  const body = result.body as { values: DraftFormValues; errors: Record<string, string[]> };
-  expect(body.values.title).toBe("Rim");
-  expect(body.values.layers[0].thickness_mm).toBe("-5");
-  expect(body.values.layers[1].material).toBe("unobtainium-board");
-  expect(Object.keys(body.errors).sort()).toEqual(["change_note", "layers.0.thickness_mm", "layers.1.material", "title", "zones"]);
-  expect(body.errors["layers.1.material"].join(" ")).toMatch(/not in the material library/);
+  // conform's reply: what was typed comes back as the form's values, each error under its field's name.
+  const { result: reply } = result.body as { result: { initialValue: DraftFormValues; error: Record<string, string[]> } };
+  expect(reply.initialValue.title).toBe("Rim");
+  expect(reply.initialValue.layers[0].thickness_mm).toBe("-5");
+  expect(reply.initialValue.layers[1].material).toBe("unobtainium-board");
+  expect(Object.keys(reply.error).sort()).toEqual(["change_note", "layers[0].thickness_mm", "layers[1].material", "title", "zones"]);
+  expect(reply.error["layers[1].material"].join(" ")).toMatch(/not in the material library/);
   const after = await DetailRevision.findByPk(id);
   expect(after!.contentHash).toBe(before!.contentHash);
   expect(after!.updatedAt.getTime()).toBe(before!.updatedAt.getTime());
@@ -216,7 +219,7 @@ test("an invalid form answers 400 with field errors, keeps what was typed, and s
   // Submitting needs the body's required sections as well.
   const noSections = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs({ ...values, change_note: "Body shortened for the crew sheet.", body: "Just a paragraph." }, "submit"), { id: String(id) });
   expect(noSections.status).toBe(400);
-  expect(Object.keys((noSections.body as { errors: object }).errors)).toEqual(["body"]);
+  expect(Object.keys((noSections.body as { result: { error: object } }).result.error)).toEqual(["body"]);
 });
 
 test("a new detail starts as a draft that stays out of the catalogue", async () => {
@@ -250,7 +253,7 @@ test("a new detail starts as a draft that stays out of the catalogue", async () 
 
   const duplicate = await browsers.editor.submitPairs(r.newDetail.action, "/desk/new", pairs);
   expect(duplicate.status).toBe(400);
-  expect((duplicate.body as { errors: Record<string, string[]> }).errors.slug).toBeDefined();
+  expect((duplicate.body as { result: { error: Record<string, string[]> } }).result.error.slug).toBeDefined();
 });
 
 // Minimal valid files, built here byte by byte.
@@ -323,7 +326,9 @@ test("a draft's files are for editors only; a published revision's files follow 
     const saved = await saveRevision(editor, revisionId, { ...values, change_note: "Site photo of the finished rim added." }, true);
     expect(saved.ok).toBe(true);
     await approveAndPublish(reviewer, revisionId);
-    expect((await visitor.call(r.file.loader, path, params)).status, `${c.slug} published, visitor`).toBe(c.visitorAfter);
+    const published = await visitor.call(r.file.loader, path, params);
+    expect(published.status, `${c.slug} published, visitor`).toBe(c.visitorAfter);
+    if (c.visitorAfter === 403) expect(published.body).toMatchObject({ error: "premium_required", offers: [{ href: "/pricing" }] });
     expect((await browsers.member.call(r.file.loader, path, params)).status, `${c.slug} published, member`).toBe(c.memberAfter);
   }
 });
@@ -353,14 +358,15 @@ test("a reviewer withdraws a published detail with a reason; an editor cannot", 
 test("a material edit needs a source for every value, is audit-logged, and recomputes the details that use it", async () => {
   const r = await routes();
   const { Detail, AuditEvent } = await import("~/models/index.server");
-  const { materialToForm, findMaterial } = await import("~/desk/materials-edit.server");
+  const { findMaterial } = await import("~/desk/materials-edit.server");
+  const { materialToForm } = await import("~/desk/material-form");
   const slug = "icf-eps-form";
   const values = materialToForm((await findMaterial(slug))!);
   const toPairs = (v: typeof values): Record<string, string> => ({ ...Object.fromEntries(Object.entries(v).filter(([k]) => k !== "flags")), ...(v.flags[0] ? { flags: v.flags[0] } : {}) }) as Record<string, string>;
 
   const missing = await browsers.editor.submit(r.material.action, `/desk/materials/${slug}`, toPairs({ ...values, thermal_source: "" }), { slug });
   expect(missing.status).toBe(400);
-  expect(Object.keys((missing.body as { errors: object }).errors)).toContain("thermal_source");
+  expect(Object.keys((missing.body as { result: { error: object } }).result.error)).toContain("thermal_source");
 
   const before = await Detail.findOne({ where: { slug: "basement-icf-wall" } });
   const halved = String(Number(values.thermal_value) / 2);

@@ -1,17 +1,20 @@
-import { useEffect, useMemo, useRef, useState } from "react";
+import { getCollectionProps, getFormProps, getInputProps, getSelectProps, getTextareaProps, useForm, type FieldMetadata, type SubmissionResult } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { useEffect, useMemo, useState } from "react";
 import { Form, useFetcher, useNavigation } from "react-router";
 import { ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, SUBSTRATES, TIERS } from "~/content/detail-schema";
 import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 import { labelFor } from "~/catalogue/vocabulary";
-import type { DraftFormValues, FieldErrors } from "~/desk/draft-form";
+import { draftFormSchema, liveLayers, type DraftFormValues } from "~/desk/draft-form";
 import type { AssemblyKind, SiteCheckResult } from "~/envelope";
 import type { UnitSystem } from "~/envelope/units";
 import { CsrfField } from "~/components/csrf-field";
+import { FieldError, withoutKey } from "~/components/form-field";
 import { SectionDrawing } from "~/components/section-drawing";
 import { SiteCheckResults } from "~/components/site-check-results";
-import { LayerEditor, newLayerKey, type EditableLayer, type MaterialOption } from "./layer-editor";
+import { LayerEditor, type MaterialOption } from "./layer-editor";
 
-/** Runs `effect` once `value` has stopped changing for `ms` milliseconds. */
+/** `value` once it has stopped changing for `ms` milliseconds. */
 function useDebounced<T>(value: T, ms: number): T {
   const [settled, setSettled] = useState(value);
   useEffect(() => {
@@ -23,28 +26,26 @@ function useDebounced<T>(value: T, ms: number): T {
 
 const input = "w-full rounded border border-rule bg-sheet px-3 py-2 aria-[invalid=true]:border-stop";
 
-function FieldError({ id, errors }: { id: string; errors?: string[] }) {
-  if (!errors?.length) return null;
-  return <p id={`${id}-error`} className="text-sm text-stop" data-testid={`error-${id}`}>{errors.join(" ")}</p>;
-}
-
-function Select({ name, label, value, options, errors, onChange, disabled }: { name: string; label: string; value: string; options: readonly string[]; errors: FieldErrors; onChange?: (value: string) => void; disabled?: boolean }) {
+function Select({ meta, label, options }: { meta: FieldMetadata<string>; label: string; options: readonly string[] }) {
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={`f-${name}`} className="text-sm font-medium">{label}</label>
-      <select id={`f-${name}`} name={name} defaultValue={onChange ? undefined : value} value={onChange ? value : undefined} onChange={onChange ? (e) => onChange(e.target.value) : undefined} className={input} aria-invalid={errors[name] ? true : undefined} aria-describedby={errors[name] ? `${name}-error` : undefined} disabled={disabled}>
+      <label htmlFor={meta.id} className="text-sm font-medium">{label}</label>
+      <select key={meta.key} {...withoutKey(getSelectProps(meta))} className={input}>
         <option value="">Choose…</option>
         {options.map((option) => <option key={option} value={option}>{labelFor(option)}</option>)}
       </select>
-      <FieldError id={name} errors={errors[name]} />
+      <FieldError meta={meta} />
     </div>
   );
 }
 
 export interface DraftEditorProps {
   mode: "new" | "revision";
+  /** The revision the form writes (1 for a new detail): a later one needs a change note. */
+  revision: number;
   values: DraftFormValues;
-  errors: FieldErrors;
+  /** The action's answer to the last post: its errors and what was typed. */
+  lastResult?: SubmissionResult<string[]> | null;
   materials: MaterialOption[];
   sets: { slug: string; title: string }[];
   units: UnitSystem;
@@ -54,28 +55,28 @@ export interface DraftEditorProps {
 }
 
 /** The detail form: metadata, zones, tier, sets, layers with a live site check, and the body with a live preview. */
-export function DraftEditor({ mode, values, errors, materials, sets, units, editable, heading }: DraftEditorProps) {
+export function DraftEditor({ mode, revision, values, lastResult, materials, sets, units, editable, heading }: DraftEditorProps) {
   const navigation = useNavigation();
   const busy = navigation.state === "submitting";
-  const [assembly, setAssembly] = useState(values.assembly);
-  const [zones, setZones] = useState<string[]>(values.zones);
-  const [layers, setLayers] = useState<EditableLayer[]>(() => values.layers.map((layer) => ({ ...layer, key: newLayerKey() })));
-  const [body, setBody] = useState(values.body);
+  // The page checks with the action's own schema, given the library and the sets it shows.
+  const schema = useMemo(() => draftFormSchema({ revision, knownMaterials: materials.map((m) => m.slug), knownSets: sets.map((s) => s.slug) }), [revision, materials, sets]);
+  // Conform keeps its own copy of the values: a revalidation (after an upload, say) hands over an equal
+  // `values` that must not wipe the typing, and a 400 brings back exactly what was typed.
+  const [form, fields] = useForm({
+    id: `draft-${mode}`,
+    defaultValue: values,
+    lastResult,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema }),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+  });
   const [siteZone, setSiteZone] = useState(values.zones[0] ?? "5A");
   const [indoorRh, setIndoorRh] = useState("");
 
-  // A 400 answer brings back what was typed: reset the controlled parts to it. Compared by content,
-  // because a revalidation (after an upload, say) hands over an equal copy that must not wipe the typing.
-  const lastValues = useRef(JSON.stringify(values));
-  useEffect(() => {
-    const next = JSON.stringify(values);
-    if (lastValues.current === next) return;
-    lastValues.current = next;
-    setAssembly(values.assembly);
-    setZones(values.zones);
-    setLayers(values.layers.map((layer) => ({ ...layer, key: newLayerKey() })));
-    setBody(values.body);
-  }, [values]);
+  // conform's live value follows every keystroke; the preview and the check read it.
+  const assembly = fields.assembly.value ?? "";
+  const layers = useMemo(() => liveLayers(fields.layers.value), [fields.layers.value]);
+  const body = fields.body.value ?? "";
 
   const preview = useFetcher<{ html: string }>();
   const settledBody = useDebounced(body, 400);
@@ -85,10 +86,7 @@ export function DraftEditor({ mode, values, errors, materials, sets, units, edit
   }, [settledBody]);
 
   const check = useFetcher<{ result?: SiteCheckResult; units?: UnitSystem; message?: string }>();
-  const stackPayload = useMemo(
-    () => JSON.stringify({ assembly, layers: layers.map(({ key: _key, ...layer }) => layer), site: { zone: siteZone, indoorRh, units } }),
-    [assembly, layers, siteZone, indoorRh, units],
-  );
+  const stackPayload = useMemo(() => JSON.stringify({ assembly, layers, site: { zone: siteZone, indoorRh, units } }), [assembly, layers, siteZone, indoorRh, units]);
   const settledStack = useDebounced(stackPayload, 450);
   useEffect(() => {
     check.submit({ payload: settledStack }, { method: "post", action: "/desk/api/check" });
@@ -109,9 +107,9 @@ export function DraftEditor({ mode, values, errors, materials, sets, units, edit
     };
   });
 
-  const formErrors = Object.keys(errors).length;
+  const invalidFields = Object.keys(form.allErrors).filter((name) => name !== "").length;
   return (
-    <Form method="post" className="space-y-10" data-testid="draft-editor" noValidate>
+    <Form method="post" {...getFormProps(form)} className="space-y-10" data-testid="draft-editor">
       <CsrfField />
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div>
@@ -126,92 +124,97 @@ export function DraftEditor({ mode, values, errors, materials, sets, units, edit
           </div>
         ) : null}
       </header>
-      {formErrors ? (
+      {form.errors?.length ? (
+        <p id={form.errorId} role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop">{form.errors.join(" ")}</p>
+      ) : null}
+      {invalidFields ? (
         <p role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop" data-testid="form-errors">
-          Nothing was saved: {formErrors} field{formErrors > 1 ? "s need" : " needs"} attention. Your text is kept below.
+          {lastResult?.status === "error" ? "Nothing was saved: " : ""}{invalidFields} field{invalidFields > 1 ? "s need" : " needs"} attention. Your text is kept below.
         </p>
       ) : null}
 
       <fieldset className="grid gap-4 md:grid-cols-2" disabled={!editable}>
         <legend className="mb-2 text-xl font-serif">Metadata</legend>
         <div className="flex flex-col gap-1 md:col-span-2">
-          <label htmlFor="f-title" className="text-sm font-medium">Title</label>
-          <input id="f-title" name="title" defaultValue={values.title} key={`title-${values.title}`} className={input} aria-invalid={errors.title ? true : undefined} />
-          <FieldError id="title" errors={errors.title} />
+          <label htmlFor={fields.title.id} className="text-sm font-medium">Title</label>
+          <input key={fields.title.key} {...withoutKey(getInputProps(fields.title, { type: "text" }))} className={input} />
+          <FieldError meta={fields.title} />
         </div>
         {mode === "new" ? (
           <div className="flex flex-col gap-1 md:col-span-2">
-            <label htmlFor="f-slug" className="text-sm font-medium">Slug (the address: lower-case words joined by hyphens)</label>
-            <input id="f-slug" name="slug" defaultValue={values.slug} key={`slug-${values.slug}`} className={input} aria-invalid={errors.slug ? true : undefined} />
-            <FieldError id="slug" errors={errors.slug} />
+            <label htmlFor={fields.slug.id} className="text-sm font-medium">Slug (the address: lower-case words joined by hyphens)</label>
+            <input key={fields.slug.key} {...withoutKey(getInputProps(fields.slug, { type: "text" }))} className={input} />
+            <FieldError meta={fields.slug} />
           </div>
         ) : (
-          <input type="hidden" name="slug" value={values.slug} />
+          // The slug belongs to the detail; the server ignores a changed one.
+          <input type="hidden" name={fields.slug.name} value={values.slug} />
         )}
         <div className="flex flex-col gap-1 md:col-span-2">
-          <label htmlFor="f-summary" className="text-sm font-medium">Summary</label>
-          <textarea id="f-summary" name="summary" rows={2} defaultValue={values.summary} key={`summary-${values.summary}`} className={input} aria-invalid={errors.summary ? true : undefined} />
-          <FieldError id="summary" errors={errors.summary} />
+          <label htmlFor={fields.summary.id} className="text-sm font-medium">Summary</label>
+          <textarea key={fields.summary.key} {...withoutKey(getTextareaProps(fields.summary))} rows={2} className={input} />
+          <FieldError meta={fields.summary} />
         </div>
-        <Select name="assembly" label="Assembly" value={assembly} options={ASSEMBLY_KINDS} errors={errors} onChange={setAssembly} />
-        <Select name="substrate" label="Substrate" value={values.substrate} options={SUBSTRATES} errors={errors} key={`substrate-${values.substrate}`} />
-        <Select name="below_grade" label="Below grade" value={values.below_grade} options={BELOW_GRADE_CONDITIONS} errors={errors} key={`bg-${values.below_grade}`} />
-        <Select name="strategy" label="Insulation strategy" value={values.strategy} options={INSULATION_STRATEGIES} errors={errors} key={`strategy-${values.strategy}`} />
-        <fieldset className="md:col-span-2">
+        <Select meta={fields.assembly} label="Assembly" options={ASSEMBLY_KINDS} />
+        <Select meta={fields.substrate} label="Substrate" options={SUBSTRATES} />
+        <Select meta={fields.below_grade} label="Below grade" options={BELOW_GRADE_CONDITIONS} />
+        <Select meta={fields.strategy} label="Insulation strategy" options={INSULATION_STRATEGIES} />
+        <fieldset className="md:col-span-2" aria-describedby={fields.zones.errors ? fields.zones.errorId : undefined}>
           <legend className="text-sm font-medium">Climate zones it is written for</legend>
           <div className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
-            {CLIMATE_ZONE_IDS.map((zone) => (
-              <label key={zone} className="flex items-center gap-1 text-sm">
-                <input type="checkbox" name="zones" value={zone} checked={zones.includes(zone)} onChange={(e) => setZones(e.target.checked ? [...zones, zone] : zones.filter((z) => z !== zone))} />
-                {zone}
+            {getCollectionProps(fields.zones, { type: "checkbox", options: [...CLIMATE_ZONE_IDS] }).map(({ key, ...props }) => (
+              <label key={key} className="flex items-center gap-1 text-sm">
+                <input {...props} aria-describedby={undefined} />
+                {props.value}
               </label>
             ))}
           </div>
-          <FieldError id="zones" errors={errors.zones} />
+          <FieldError meta={fields.zones} />
         </fieldset>
-        <fieldset>
+        <fieldset aria-describedby={fields.tier.errors ? fields.tier.errorId : undefined}>
           <legend className="text-sm font-medium">Tier</legend>
-          <div className="mt-1 flex gap-4" key={`tier-${values.tier}`}>
-            {TIERS.map((tier) => (
-              <label key={tier} className="flex items-center gap-1 text-sm">
-                <input type="radio" name="tier" value={tier} defaultChecked={values.tier === tier} /> {tier}
+          <div className="mt-1 flex gap-4">
+            {getCollectionProps(fields.tier, { type: "radio", options: [...TIERS] }).map(({ key, ...props }) => (
+              <label key={key} className="flex items-center gap-1 text-sm">
+                <input {...props} aria-describedby={undefined} /> {props.value}
               </label>
             ))}
           </div>
-          <FieldError id="tier" errors={errors.tier} />
+          <FieldError meta={fields.tier} />
         </fieldset>
-        <fieldset>
+        <fieldset aria-describedby={fields.sets.errors ? fields.sets.errorId : undefined}>
           <legend className="text-sm font-medium">Sets</legend>
-          <div className="mt-1 flex flex-col gap-1" key={`sets-${values.sets.join(",")}`}>
-            {sets.map((set) => (
-              <label key={set.slug} className="flex items-center gap-1 text-sm">
-                <input type="checkbox" name="sets" value={set.slug} defaultChecked={values.sets.includes(set.slug)} /> {set.title}
+          <div className="mt-1 flex flex-col gap-1">
+            {getCollectionProps(fields.sets, { type: "checkbox", options: sets.map((set) => set.slug) }).map(({ key, ...props }, i) => (
+              <label key={key} className="flex items-center gap-1 text-sm">
+                <input {...props} aria-describedby={undefined} /> {sets[i].title}
               </label>
             ))}
           </div>
-          <FieldError id="sets" errors={errors.sets} />
+          <FieldError meta={fields.sets} />
         </fieldset>
         <div className="flex flex-col gap-1 md:col-span-2">
-          <label htmlFor="f-references" className="text-sm font-medium">References (one a line)</label>
-          <textarea id="f-references" name="references" rows={3} defaultValue={values.references} key={`refs-${values.references}`} className={input} aria-invalid={errors.references ? true : undefined} />
-          <FieldError id="references" errors={errors.references} />
+          <label htmlFor={fields.references.id} className="text-sm font-medium">References (one a line)</label>
+          <textarea key={fields.references.key} {...withoutKey(getTextareaProps(fields.references))} rows={3} className={input} />
+          <FieldError meta={fields.references} />
         </div>
         <div className="flex flex-col gap-1 md:col-span-2">
-          <label htmlFor="f-change_note" className="text-sm font-medium">Change note (what changed in this revision; members who saved the detail receive it)</label>
-          <input id="f-change_note" name="change_note" defaultValue={values.change_note} key={`note-${values.change_note}`} className={input} aria-invalid={errors.change_note ? true : undefined} />
-          <FieldError id="change_note" errors={errors.change_note} />
+          <label htmlFor={fields.change_note.id} className="text-sm font-medium">Change note (what changed in this revision; members who saved the detail receive it)</label>
+          <input key={fields.change_note.key} {...withoutKey(getInputProps(fields.change_note, { type: "text" }))} className={input} />
+          <FieldError meta={fields.change_note} />
         </div>
       </fieldset>
 
       <section aria-labelledby="layers-heading" className="space-y-4">
         <h2 id="layers-heading" className="text-xl">Layers, exterior to interior</h2>
-        <LayerEditor layers={layers} onChange={setLayers} materials={materials} errors={errors} disabled={!editable} />
+        <LayerEditor form={form} layers={fields.layers} materials={materials} disabled={!editable} />
         <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
           <figure className="rounded border border-rule bg-sheet p-3">
             {drawing.length >= 1 ? <SectionDrawing assembly={{ kind: (assembly || "above-grade-wall") as AssemblyKind, layers: drawing }} units={units} title={values.title || "Draft"} /> : <p className="text-sm text-graphite-soft">The section appears once a layer has a material and a thickness.</p>}
           </figure>
           <div className="space-y-3" data-testid="desk-site-check">
             <div className="flex flex-wrap items-end gap-3">
+              {/* Not part of the detail: what the live check assumes, so these controls post nothing. */}
               <label className="flex flex-col text-sm">
                 Check for zone
                 <select value={siteZone} onChange={(e) => setSiteZone(e.target.value)} className="rounded border border-rule bg-sheet px-2 py-1" aria-label="Check for zone">
@@ -240,9 +243,9 @@ export function DraftEditor({ mode, values, errors, materials, sets, units, edit
         <p className="text-sm text-graphite-soft">Markdown with the sections “## Why it works”, “## Install sequence” (numbered) and “## Cautions”.</p>
         <div className="grid gap-4 lg:grid-cols-2">
           <div className="flex flex-col gap-1">
-            <label htmlFor="f-body" className="sr-only">Body (Markdown)</label>
-            <textarea id="f-body" name="body" rows={24} value={body} onChange={(e) => setBody(e.target.value)} readOnly={!editable} className={`${input} font-mono text-sm`} aria-invalid={errors.body ? true : undefined} />
-            <FieldError id="body" errors={errors.body} />
+            <label htmlFor={fields.body.id} className="sr-only">Body (Markdown)</label>
+            <textarea key={fields.body.key} {...withoutKey(getTextareaProps(fields.body))} rows={24} readOnly={!editable} className={`${input} font-mono text-sm`} />
+            <FieldError meta={fields.body} />
           </div>
           <div className="prose prose-stone max-w-none rounded border border-rule bg-sheet p-4 prose-headings:font-serif" data-testid="body-preview" dangerouslySetInnerHTML={{ __html: preview.data?.html ?? "" }} />
         </div>

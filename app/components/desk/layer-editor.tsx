@@ -1,5 +1,7 @@
+import { getInputProps, getSelectProps, type FieldMetadata, type FormMetadata } from "@conform-to/react";
+import { withoutKey } from "~/components/form-field";
 import { JOINT_TREATMENTS, LAYER_ROLES } from "~/content/detail-schema";
-import type { LayerFormValues } from "~/desk/draft-form";
+import { BLANK_LAYER, type LayerFormValues } from "~/desk/draft-form";
 
 export interface MaterialOption {
   slug: string;
@@ -7,48 +9,29 @@ export interface MaterialOption {
   family: string;
 }
 
-export interface EditableLayer extends LayerFormValues {
-  /** Stable React key across reorders. */
-  key: string;
-}
-
-let counter = 0;
-export function newLayerKey(): string {
-  counter += 1;
-  return `layer-${Date.now().toString(36)}-${counter}`;
-}
-
-export const BLANK_LAYER: LayerFormValues = { role: "insulation", material: "", thickness_mm: "", framing_material: "", framing_fraction: "", joints: "" };
-
 const cell = "rounded border border-rule bg-sheet px-2 py-1 text-sm aria-[invalid=true]:border-stop";
+const ROW_FIELDS = ["role", "material", "thickness_mm", "framing_fraction", "framing_material", "joints"] as const;
 
-interface LayerEditorProps {
-  layers: EditableLayer[];
-  onChange: (layers: EditableLayer[]) => void;
+interface LayerEditorProps<Schema extends Record<string, unknown>> {
+  // The editor's form, whatever else it holds: only its list intents are used here.
+  form: FormMetadata<Schema, string[]>;
+  layers: FieldMetadata<LayerFormValues[], Record<string, unknown>, string[]>;
   materials: MaterialOption[];
-  errors: Record<string, string[]>;
   disabled?: boolean;
 }
 
 /**
- * The stack as rows, exterior first: add, remove and move layers; each row posts as repeated
- * `layer-*` fields in table order, which is the order the server reads.
+ * The stack as rows, exterior first: add, remove and move layers with conform's list intents, so each
+ * row posts as `layers[i].field` and a row's errors and typed values move with it.
  */
-export function LayerEditor({ layers, onChange, materials, errors, disabled }: LayerEditorProps) {
-  const update = (index: number, patch: Partial<LayerFormValues>) => onChange(layers.map((layer, i) => (i === index ? { ...layer, ...patch } : layer)));
-  const move = (index: number, by: -1 | 1) => {
-    const next = [...layers];
-    const [moved] = next.splice(index, 1);
-    next.splice(index + by, 0, moved);
-    onChange(next);
-  };
-  const remove = (index: number) => onChange(layers.filter((_, i) => i !== index));
-  const insert = (index: number) => onChange([...layers.slice(0, index), { ...BLANK_LAYER, key: newLayerKey() }, ...layers.slice(index)]);
+export function LayerEditor<Schema extends Record<string, unknown>>({ form, layers, materials, disabled }: LayerEditorProps<Schema>) {
+  const rows = layers.getFieldList();
   const lumber = materials.filter((m) => m.family === "lumber" || m.family === "metal");
+  const insertAt = (index: number) => form.insert.getButtonProps({ name: layers.name, index, defaultValue: BLANK_LAYER });
 
   return (
     <div className="space-y-2" data-testid="layer-editor">
-      {errors.layers ? <p className="text-sm text-stop">{errors.layers.join(" ")}</p> : null}
+      {layers.errors ? <p id={layers.errorId} className="text-sm text-stop" data-testid="error-layers">{layers.errors.join(" ")}</p> : null}
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Layers from exterior to interior</caption>
@@ -65,47 +48,50 @@ export function LayerEditor({ layers, onChange, materials, errors, disabled }: L
             </tr>
           </thead>
           <tbody>
-            {layers.map((layer, i) => {
-              const problems = ["role", "material", "thickness_mm", "framing_fraction", "framing_material", "joints"].flatMap((field) => errors[`layers.${i}.${field}`] ?? []);
-              const invalid = (field: string) => (errors[`layers.${i}.${field}`] ? true : undefined);
+            {rows.map((row, i) => {
+              const fields = row.getFieldset();
+              const problems = ROW_FIELDS.flatMap((field) => fields[field].errors ?? []);
+              const problemsId = `${row.id}-problems`;
+              // One message list per row, under the material; each invalid cell points at it.
+              const described = (field: (typeof ROW_FIELDS)[number]) => ({ "aria-describedby": fields[field].errors ? problemsId : undefined });
               return (
-                <tr key={layer.key} className="border-b border-rule align-top" data-testid={`layer-row-${i}`}>
+                <tr key={row.key} className="border-b border-rule align-top" data-testid={`layer-row-${i}`}>
                   <td className="py-1 pr-2 tabular-nums text-graphite-soft">{i + 1}</td>
                   <td className="py-1 pr-2">
-                    <select name="layer-role" aria-label={`Layer ${i + 1} role`} value={layer.role} onChange={(e) => update(i, { role: e.target.value })} className={cell} aria-invalid={invalid("role")} disabled={disabled}>
+                    <select key={fields.role.key} {...withoutKey(getSelectProps(fields.role))} {...described("role")} aria-label={`Layer ${i + 1} role`} className={cell} disabled={disabled}>
                       {LAYER_ROLES.map((role) => <option key={role} value={role}>{role.replaceAll("-", " ")}</option>)}
                     </select>
                   </td>
                   <td className="py-1 pr-2">
-                    <select name="layer-material" aria-label={`Layer ${i + 1} material`} value={layer.material} onChange={(e) => update(i, { material: e.target.value })} className={`${cell} max-w-[16rem]`} aria-invalid={invalid("material")} disabled={disabled}>
+                    <select key={fields.material.key} {...withoutKey(getSelectProps(fields.material))} {...described("material")} aria-label={`Layer ${i + 1} material`} className={`${cell} max-w-[16rem]`} disabled={disabled}>
                       <option value="">Choose…</option>
                       {materials.map((m) => <option key={m.slug} value={m.slug}>{m.name}</option>)}
                     </select>
-                    {problems.length ? <p className="mt-1 max-w-[16rem] text-xs text-stop" data-testid={`layer-error-${i}`}>{problems.join(" ")}</p> : null}
+                    {problems.length ? <p id={problemsId} className="mt-1 max-w-[16rem] text-xs text-stop" data-testid={`layer-error-${i}`}>{problems.join(" ")}</p> : null}
                   </td>
                   <td className="py-1 pr-2">
-                    <input name="layer-thickness_mm" aria-label={`Layer ${i + 1} thickness in mm`} inputMode="decimal" value={layer.thickness_mm} onChange={(e) => update(i, { thickness_mm: e.target.value })} className={`${cell} w-24`} aria-invalid={invalid("thickness_mm")} disabled={disabled} />
+                    <input key={fields.thickness_mm.key} {...withoutKey(getInputProps(fields.thickness_mm, { type: "text" }))} {...described("thickness_mm")} aria-label={`Layer ${i + 1} thickness in mm`} inputMode="decimal" className={`${cell} w-24`} disabled={disabled} />
                   </td>
                   <td className="py-1 pr-2">
-                    <input name="layer-framing_fraction" aria-label={`Layer ${i + 1} framing fraction`} inputMode="decimal" placeholder="none" value={layer.framing_fraction} onChange={(e) => update(i, { framing_fraction: e.target.value })} className={`${cell} w-20`} aria-invalid={invalid("framing_fraction")} disabled={disabled} />
+                    <input key={fields.framing_fraction.key} {...withoutKey(getInputProps(fields.framing_fraction, { type: "text" }))} {...described("framing_fraction")} aria-label={`Layer ${i + 1} framing fraction`} inputMode="decimal" placeholder="none" className={`${cell} w-20`} disabled={disabled} />
                   </td>
                   <td className="py-1 pr-2">
-                    <select name="layer-framing_material" aria-label={`Layer ${i + 1} framing material`} value={layer.framing_material} onChange={(e) => update(i, { framing_material: e.target.value })} className={cell} disabled={disabled}>
-                      <option value="">{layer.framing_fraction ? "softwood lumber" : "—"}</option>
+                    <select key={fields.framing_material.key} {...withoutKey(getSelectProps(fields.framing_material))} {...described("framing_material")} aria-label={`Layer ${i + 1} framing material`} className={cell} disabled={disabled}>
+                      <option value="">{fields.framing_fraction.value ? "softwood lumber" : "—"}</option>
                       {lumber.map((m) => <option key={m.slug} value={m.slug}>{m.name}</option>)}
                     </select>
                   </td>
                   <td className="py-1 pr-2">
-                    <select name="layer-joints" aria-label={`Layer ${i + 1} joints`} value={layer.joints} onChange={(e) => update(i, { joints: e.target.value })} className={cell} disabled={disabled}>
+                    <select key={fields.joints.key} {...withoutKey(getSelectProps(fields.joints))} {...described("joints")} aria-label={`Layer ${i + 1} joints`} className={cell} disabled={disabled}>
                       <option value="">—</option>
                       {JOINT_TREATMENTS.map((joint) => <option key={joint} value={joint}>{joint}</option>)}
                     </select>
                   </td>
                   <td className="whitespace-nowrap py-1">
-                    <button type="button" onClick={() => move(i, -1)} disabled={disabled || i === 0} aria-label={`Move layer ${i + 1} outward`} className="px-1 disabled:opacity-30">↑</button>
-                    <button type="button" onClick={() => move(i, 1)} disabled={disabled || i === layers.length - 1} aria-label={`Move layer ${i + 1} inward`} className="px-1 disabled:opacity-30">↓</button>
-                    <button type="button" onClick={() => insert(i + 1)} disabled={disabled} aria-label={`Add a layer after layer ${i + 1}`} className="px-1">+</button>
-                    <button type="button" onClick={() => remove(i)} disabled={disabled} aria-label={`Remove layer ${i + 1}`} className="px-1 text-stop">×</button>
+                    <button {...form.reorder.getButtonProps({ name: layers.name, from: i, to: i - 1 })} disabled={disabled || i === 0} aria-label={`Move layer ${i + 1} outward`} className="px-1 disabled:opacity-30">↑</button>
+                    <button {...form.reorder.getButtonProps({ name: layers.name, from: i, to: i + 1 })} disabled={disabled || i === rows.length - 1} aria-label={`Move layer ${i + 1} inward`} className="px-1 disabled:opacity-30">↓</button>
+                    <button {...insertAt(i + 1)} disabled={disabled} aria-label={`Add a layer after layer ${i + 1}`} className="px-1">+</button>
+                    <button {...form.remove.getButtonProps({ name: layers.name, index: i })} disabled={disabled} aria-label={`Remove layer ${i + 1}`} className="px-1 text-stop">×</button>
                   </td>
                 </tr>
               );
@@ -114,7 +100,7 @@ export function LayerEditor({ layers, onChange, materials, errors, disabled }: L
         </table>
       </div>
       {!disabled ? (
-        <button type="button" onClick={() => insert(layers.length)} className="rounded border border-rule px-3 py-1 text-sm">Add a layer on the interior side</button>
+        <button {...insertAt(rows.length)} className="rounded border border-rule px-3 py-1 text-sm">Add a layer on the interior side</button>
       ) : null}
     </div>
   );

@@ -1,6 +1,7 @@
 import { useRef, useState } from "react";
 import { useRevalidator } from "react-router";
 import { useRootData } from "~/components/root-data";
+import { readUploadRequest } from "~/desk/upload-form";
 
 export interface UploadItem {
   id: number;
@@ -48,11 +49,14 @@ export function UploadPanel({ revisionId, uploads, editable }: { revisionId: num
 
   function send() {
     const file = fileInput.current?.files?.[0];
-    if (!file) return setProgress({ state: "failed", message: "Choose a file first." });
-    if (file.size > 5 * 1024 * 1024) return setProgress({ state: "failed", message: "That file is larger than 5 MB." });
+    if (file && file.size > 5 * 1024 * 1024) return setProgress({ state: "failed", message: "That file is larger than 5 MB." });
     const body = new FormData();
-    body.set("file", file);
+    body.set("intent", "attach");
+    if (file) body.set("file", file);
     body.set("caption", caption);
+    // The same check the server makes, so a missing file or an overlong caption is said at once.
+    const request = readUploadRequest(body);
+    if (!request.success || !file) return setProgress({ state: "failed", message: request.success ? "Choose a file to attach." : request.error.issues[0].message });
     setProgress({ state: "sending", percent: 0 });
     post(body, () => {
       setProgress({ state: "done", name: file.name });

@@ -1,10 +1,10 @@
+import { parseWithZod } from "@conform-to/zod/v4";
 import { data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/new";
 import { requireCsrf } from "~/auth/csrf.server";
 import { userContext } from "~/auth/guards.server";
 import { DraftEditor } from "~/components/desk/draft-editor";
-import { BLANK_LAYER } from "~/components/desk/layer-editor";
-import { valuesFromFormData, type DraftFormValues, type FieldErrors } from "~/desk/draft-form";
+import { BLANK_LAYER, draftPostSchema, type DraftFormValues } from "~/desk/draft-form";
 import { editorChoices } from "~/desk/editor-data.server";
 import { createDetailDraft } from "~/desk/revisions.server";
 import { unitsFor } from "~/preferences/units.server";
@@ -32,14 +32,14 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   const user = context.get(userContext);
   const form = await requireCsrf(request);
-  const values = valuesFromFormData(form);
+  const submission = parseWithZod(form, { schema: draftPostSchema });
+  if (submission.status !== "success") return data({ result: submission.reply() }, { status: submission.status === "error" ? 400 : 200 });
+  const { intent: _intent, ...values } = submission.value;
   const outcome = await createDetailDraft(user, values);
-  if (!outcome.ok) return data({ values, errors: outcome.errors }, { status: 400 });
+  if (!outcome.ok) return data({ result: submission.reply({ fieldErrors: outcome.errors }) }, { status: 400 });
   return redirect(`/desk/revisions/${outcome.revisionId}?saved=1`);
 }
 
 export default function NewDetail({ loaderData, actionData }: Route.ComponentProps) {
-  const values = actionData?.values ?? loaderData.values;
-  const errors: FieldErrors = actionData?.errors ?? {};
-  return <DraftEditor mode="new" heading="New detail: the first save creates revision 1 as a draft." values={values} errors={errors} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable />;
+  return <DraftEditor mode="new" heading="New detail: the first save creates revision 1 as a draft." revision={1} values={loaderData.values} lastResult={actionData?.result} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable />;
 }

@@ -1,70 +1,43 @@
+import { getFormProps, getTextareaProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
 import { Form, Link, data, redirect } from "react-router";
 import type { Route } from "./+types/review";
 import { requireCsrf } from "~/auth/csrf.server";
 import { requireRole } from "~/auth/guards.server";
-import { materialLibrary } from "~/catalogue/materials.server";
-import { describeChanges } from "~/catalogue/revision-diff";
 import { CsrfField } from "~/components/csrf-field";
+import { FieldError, withoutKey } from "~/components/form-field";
 import { LayerTable } from "~/components/layer-table";
-import { changedHunks, diffLines } from "~/desk/line-diff";
+import { reviewFormSchema } from "~/desk/review-form";
 import { REVIEW_SECTIONS, REVIEW_SECTION_LABELS, type ReviewSection } from "~/desk/review-sections";
-import { DeskError, approveAndPublish, commentsOn, loadRevision, requestChanges } from "~/desk/revisions.server";
-import { uploadsOf } from "~/desk/uploads.server";
-import { renderMarkdown } from "~/markdown/render.server";
+import { reviewPage } from "~/desk/desk-pages.server";
+import { DeskError, approveAndPublish, requestChanges } from "~/desk/revisions.server";
 import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `Review: ${data?.title ?? "revision"} — Desk — Dryside` }];
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = requireRole(request, context, "reviewer");
-  const found = await loadRevision(Number(params.id) || 0);
-  if (!found) throw data({ message: "No such revision." }, { status: 404 });
-  const { revision, detail, published } = found;
-  const front = revision.frontMatter;
-  const before = published ? published.frontMatter : null;
-  const [library, comments, uploads, units] = await Promise.all([materialLibrary(), commentsOn(revision.id), uploadsOf(revision.id), unitsFor(request)]);
-  const own = revision.authorId === user.id;
-  return {
-    id: revision.id,
-    slug: detail.slug,
-    title: revision.title,
-    summary: revision.summary,
-    number: revision.number,
-    state: revision.state,
-    authorName: revision.authorName,
-    changeNote: revision.changeNote,
-    own,
-    canDecide: !own && revision.state === "in_review",
-    front: { assembly: front.assembly, substrate: front.substrate, below_grade: front.below_grade, strategy: front.strategy, zones: front.zones, tier: front.tier, sets: front.sets, references: front.references },
-    layers: front.layers.map((layer) => ({ ...layer, materialName: library.get(layer.material)?.name ?? layer.material })),
-    bodyHtml: renderMarkdown(revision.bodyMd),
-    comparedWith: published ? published.number : null,
-    changes: before ? describeChanges(before, front, published!.bodyMd, revision.bodyMd) : [],
-    bodyDiff: published ? changedHunks(diffLines(published.bodyMd, revision.bodyMd)) : [],
-    comments,
-    uploads,
-    units,
-  };
+  const page = await reviewPage(user, Number(params.id) || 0, await unitsFor(request));
+  if (!page) throw data({ message: "No such revision." }, { status: 404 });
+  return page;
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = requireRole(request, context, "reviewer");
   const form = await requireCsrf(request);
-  const comments: Partial<Record<ReviewSection, string>> = {};
-  for (const section of REVIEW_SECTIONS) {
-    const value = form.get(`comment-${section}`);
-    if (typeof value === "string") comments[section] = value;
-  }
+  const submission = parseWithZod(form, { schema: reviewFormSchema });
+  if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
+  const { intent, comments } = submission.value;
   const id = Number(params.id) || 0;
   try {
-    if (form.get("intent") === "approve") {
+    if (intent === "approve") {
       const published = await approveAndPublish(user, id, { comments });
       return redirect(`/details/${published.slug}?published=${published.number}`);
     }
     await requestChanges(user, id, { comments });
     return redirect(`/desk?sent-back=${id}`);
   } catch (error) {
-    if (error instanceof DeskError) return data({ message: error.message, comments }, { status: error.status });
+    if (error instanceof DeskError) return data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
     throw error;
   }
 }
@@ -75,7 +48,13 @@ const FACT_LABELS: [keyof Route.ComponentProps["loaderData"]["front"], string][]
 
 export default function Review({ loaderData, actionData }: Route.ComponentProps) {
   const r = loaderData;
-  const typed = actionData?.comments ?? {};
+  const [form, fields] = useForm({
+    lastResult: actionData?.result,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: reviewFormSchema }),
+    shouldValidate: "onSubmit",
+    shouldRevalidate: "onInput",
+  });
+  const comments = fields.comments.getFieldset();
   return (
     <div className="space-y-8">
       <header>
@@ -84,7 +63,7 @@ export default function Review({ loaderData, actionData }: Route.ComponentProps)
         <p className="mt-2 text-graphite-soft">{r.summary}</p>
         <p className="mt-2 text-sm" data-testid="review-status">Revision {r.number} by {r.authorName} · {r.state.replace("_", " ")}{r.changeNote ? ` · “${r.changeNote}”` : ""}</p>
       </header>
-      {actionData?.message ? <p role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop" data-testid="review-error">{actionData.message}</p> : null}
+      {form.errors?.length ? <p id={form.errorId} role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop" data-testid="review-error">{form.errors.join(" ")}</p> : null}
       {r.own ? <p className="rounded border border-caution/50 bg-caution/5 px-3 py-2 text-sm" data-testid="own-revision">You wrote this revision: another reviewer must approve or send it back.</p> : null}
 
       <section aria-labelledby="changes-heading" className="space-y-3">
@@ -139,21 +118,24 @@ export default function Review({ loaderData, actionData }: Route.ComponentProps)
       ) : null}
 
       {r.canDecide ? (
-        <Form method="post" className="space-y-4 rounded border border-rule bg-sheet p-4" data-testid="review-form">
+        <Form method="post" {...getFormProps(form)} className="space-y-4 rounded border border-rule bg-sheet p-4" data-testid="review-form">
           <CsrfField />
           <h2 className="text-xl">Your review</h2>
           <p className="text-sm text-graphite-soft">Comment on any section. “Request changes” needs at least one comment; approving publishes this revision at once and e-mails everyone who saved the detail.</p>
-          <div className="grid gap-3 md:grid-cols-2">
+          <fieldset className="grid gap-3 md:grid-cols-2" aria-describedby={fields.comments.errors ? fields.comments.errorId : undefined}>
+            <legend className="sr-only">Comments by section</legend>
             {REVIEW_SECTIONS.map((section) => (
-              <label key={section} className="flex flex-col gap-1 text-sm">
-                {REVIEW_SECTION_LABELS[section]}
-                <textarea name={`comment-${section}`} rows={2} defaultValue={typed[section] ?? ""} className="rounded border border-rule bg-paper px-2 py-1" />
-              </label>
+              <div key={section} className="flex flex-col gap-1 text-sm">
+                <label htmlFor={comments[section].id}>{REVIEW_SECTION_LABELS[section]}</label>
+                <textarea key={comments[section].key} {...withoutKey(getTextareaProps(comments[section]))} rows={2} className="rounded border border-rule bg-paper px-2 py-1" />
+                <FieldError meta={comments[section]} />
+              </div>
             ))}
-          </div>
+          </fieldset>
+          <FieldError meta={fields.comments} />
           <div className="flex gap-3">
-            <button type="submit" name="intent" value="request-changes" className="rounded border border-rule px-4 py-2">Request changes</button>
-            <button type="submit" name="intent" value="approve" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Approve and publish</button>
+            <button type="submit" name={fields.intent.name} value="request-changes" className="rounded border border-rule px-4 py-2">Request changes</button>
+            <button type="submit" name={fields.intent.name} value="approve" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Approve and publish</button>
           </div>
         </Form>
       ) : null}

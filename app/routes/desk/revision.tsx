@@ -1,10 +1,11 @@
+import { parseWithZod } from "@conform-to/zod/v4";
 import { Link, data, redirect, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/revision";
 import { requireCsrf } from "~/auth/csrf.server";
 import { userContext } from "~/auth/guards.server";
 import { DraftEditor } from "~/components/desk/draft-editor";
 import { UploadPanel } from "~/components/desk/upload-panel";
-import { valuesFromFormData, valuesFromFrontMatter, type FieldErrors } from "~/desk/draft-form";
+import { draftPostSchema, valuesFromFrontMatter } from "~/desk/draft-form";
 import { editorChoices } from "~/desk/editor-data.server";
 import { DeskError, commentsOn, loadRevision, saveRevision } from "~/desk/revisions.server";
 import { uploadsOf } from "~/desk/uploads.server";
@@ -43,27 +44,25 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = context.get(userContext);
   const form = await requireCsrf(request);
-  const values = valuesFromFormData(form);
-  const submit = form.get("intent") === "submit";
+  const submission = parseWithZod(form, { schema: draftPostSchema });
+  if (submission.status !== "success") return data({ result: submission.reply() }, { status: submission.status === "error" ? 400 : 200 });
+  const { intent, ...values } = submission.value;
   try {
-    const outcome = await saveRevision(user, Number(params.id) || 0, values, submit);
-    if (!outcome.ok) return data({ values, errors: outcome.errors }, { status: 400 });
-    return redirect(`/desk/revisions/${outcome.revisionId}?${submit ? "submitted" : "saved"}=1`);
+    const outcome = await saveRevision(user, Number(params.id) || 0, values, intent === "submit");
+    if (!outcome.ok) return data({ result: submission.reply({ fieldErrors: outcome.errors }) }, { status: 400 });
+    return redirect(`/desk/revisions/${outcome.revisionId}?${intent === "submit" ? "submitted" : "saved"}=1`);
   } catch (error) {
-    if (error instanceof DeskError) return data({ values, errors: { form: [error.message] } as FieldErrors }, { status: error.status });
+    if (error instanceof DeskError) return data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
     throw error;
   }
 }
 
 export default function RevisionEditor({ loaderData, actionData }: Route.ComponentProps) {
   const { revision, comments, uploads, editable, notice } = loaderData;
-  const values = actionData?.values ?? loaderData.values;
-  const errors: FieldErrors = actionData?.errors ?? {};
   const heading = `Revision ${revision.number} · ${REVISION_STATE_LABELS[revision.state]} · written by ${revision.authorName}`;
   return (
     <div className="space-y-10">
       {notice && !actionData ? <p role="status" className="rounded border border-vapour/40 bg-vapour/5 px-3 py-2 text-sm text-vapour" data-testid="desk-notice">{notice}</p> : null}
-      {errors.form ? <p role="alert" className="rounded border border-stop/40 bg-stop/5 px-3 py-2 text-sm text-stop">{errors.form.join(" ")}</p> : null}
       {!editable ? (
         <p className="rounded border border-rule bg-sheet px-3 py-2 text-sm" data-testid="read-only-note">
           {revision.state === "in_review" ? "Waiting for review: the form is read-only until a reviewer answers." : revision.mine ? `This revision is ${REVISION_STATE_LABELS[revision.state]}.` : `Only ${revision.authorName} edits this revision.`}{" "}
@@ -80,7 +79,7 @@ export default function RevisionEditor({ loaderData, actionData }: Route.Compone
           </ul>
         </section>
       ) : null}
-      <DraftEditor key={revision.id} mode="revision" heading={heading} values={values} errors={errors} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable={editable} />
+      <DraftEditor key={revision.id} mode="revision" heading={heading} revision={revision.number} values={loaderData.values} lastResult={actionData?.result} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable={editable} />
       <UploadPanel revisionId={revision.id} uploads={uploads} editable={editable} />
       <p className="text-sm"><a href={`/desk/revisions/${revision.id}/export`} download>Export as Markdown</a> <span className="text-graphite-soft">(the content-file form of this revision)</span></p>
     </div>
