@@ -1,4 +1,3 @@
-import { Op } from "sequelize";
 import { Detail, DetailRevision } from "~/models/index.server";
 
 export interface LibraryOverview {

@@ -213,18 +213,15 @@ export async function deskOverview(actor: DeskActor) {
 
 /** Every round's comments: a resubmission keeps its review history across the author's edits. */
 export async function commentsOn(revisionId: number): Promise<{ id: number; section: string; body: string; authorName: string; at: string }[]> {
-  const comments = await ReviewComment.findAll({ where: { revisionId }, order: [["id", "ASC"]] });
-  const authors = await User.findAll({ attributes: ["id", "displayName"], where: { id: comments.map((c) => c.authorId ?? 0) } });
-  const names = new Map(authors.map((author) => [author.id, author.displayName]));
-  return comments.map((comment) => ({ id: comment.id, section: comment.section, body: comment.body, authorName: names.get(comment.authorId ?? 0) ?? "a former reviewer", at: comment.createdAt.toISOString() }));
+  const comments = await ReviewComment.findAll({ where: { revisionId }, include: [{ model: User, as: "author", attributes: ["displayName"] }], order: [["id", "ASC"]] });
+  return comments.map((comment) => ({ id: comment.id, section: comment.section, body: comment.body, authorName: comment.author?.displayName ?? "a former reviewer", at: comment.createdAt.toISOString() }));
 }
 
 /** A revision with its detail and the detail's published revision (when that is another one). */
 export async function loadRevision(revisionId: number): Promise<{ revision: DetailRevision; detail: Detail; published: DetailRevision | null } | null> {
-  const revision = await DetailRevision.findByPk(revisionId);
-  if (!revision) return null;
-  const detail = await Detail.findByPk(revision.detailId);
-  if (!detail) return null;
+  const revision = await DetailRevision.findByPk(revisionId, { include: [{ model: Detail, as: "detail" }] });
+  const detail = revision?.detail;
+  if (!revision || !detail) return null;
   const published = detail.publishedRevisionId && detail.publishedRevisionId !== revision.id ? await DetailRevision.findByPk(detail.publishedRevisionId) : null;
   return { revision, detail, published };
 }

@@ -1,4 +1,3 @@
-import { Op } from "sequelize";
 import { downloadableSetIds, hasLivePlan, type Viewer } from "~/access/premium.server";
 import { Detail, DetailSet } from "~/models/index.server";
 import { PLANS, planPriceLabel, setOffers, type SetOffer } from "./catalogue.server";

@@ -10,7 +10,8 @@ import { LayerTable } from "~/components/layer-table";
 import { reviewFormSchema } from "~/desk/review-form";
 import { REVIEW_SECTIONS, REVIEW_SECTION_LABELS, type ReviewSection } from "~/desk/review-sections";
 import { reviewPage } from "~/desk/desk-pages.server";
-import { DeskError, approveAndPublish, requestChanges } from "~/desk/revisions.server";
+import { deskStep, refusedForm } from "~/desk/desk-step.server";
+import { approveAndPublish, requestChanges } from "~/desk/revisions.server";
 import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `Review: ${data?.title ?? "revision"} — Desk — Dryside` }];
@@ -29,17 +30,14 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
   const { intent, comments } = submission.value;
   const id = Number(params.id) || 0;
-  try {
+  return deskStep(async () => {
     if (intent === "approve") {
       const published = await approveAndPublish(user, id, { comments });
       return redirect(`/details/${published.slug}?published=${published.number}`);
     }
     await requestChanges(user, id, { comments });
     return redirect(`/desk?sent-back=${id}`);
-  } catch (error) {
-    if (error instanceof DeskError) return data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
-    throw error;
-  }
+  }, refusedForm(submission));
 }
 
 const FACT_LABELS: [keyof Route.ComponentProps["loaderData"]["front"], string][] = [

@@ -7,7 +7,8 @@ import { DraftEditor } from "~/components/desk/draft-editor";
 import { UploadPanel } from "~/components/desk/upload-panel";
 import { draftPostSchema, valuesFromFrontMatter } from "~/desk/draft-form";
 import { editorChoices } from "~/desk/editor-data.server";
-import { DeskError, commentsOn, loadRevision, saveRevision } from "~/desk/revisions.server";
+import { deskStep, refusedForm } from "~/desk/desk-step.server";
+import { commentsOn, loadRevision, saveRevision } from "~/desk/revisions.server";
 import { uploadsOf } from "~/desk/uploads.server";
 import { REVIEW_SECTION_LABELS } from "~/desk/review-sections";
 import { unitsFor } from "~/preferences/units.server";
@@ -47,14 +48,11 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const submission = parseWithZod(form, { schema: draftPostSchema });
   if (submission.status !== "success") return data({ result: submission.reply() }, { status: submission.status === "error" ? 400 : 200 });
   const { intent, ...values } = submission.value;
-  try {
+  return deskStep(async () => {
     const outcome = await saveRevision(user, Number(params.id) || 0, values, intent === "submit");
     if (!outcome.ok) return data({ result: submission.reply({ fieldErrors: outcome.errors }) }, { status: 400 });
     return redirect(`/desk/revisions/${outcome.revisionId}?${intent === "submit" ? "submitted" : "saved"}=1`);
-  } catch (error) {
-    if (error instanceof DeskError) return data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
-    throw error;
-  }
+  }, refusedForm(submission));
 }
 
 export default function RevisionEditor({ loaderData, actionData }: Route.ComponentProps) {

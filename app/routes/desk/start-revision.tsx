@@ -1,38 +1,28 @@
 import { Form, Link, data, redirect } from "react-router";
-import { Op } from "sequelize";
 import type { Route } from "./+types/start-revision";
 import { requireCsrf } from "~/auth/csrf.server";
 import { userContext } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
-import { DeskError, startRevision } from "~/desk/revisions.server";
-import { Detail, DetailRevision } from "~/models/index.server";
-import { OPEN_REVISION_STATES, REVISION_STATE_LABELS } from "~/vocabulary/revision-states";
+import { startRevisionPage } from "~/desk/desk-pages.server";
+import { deskStep } from "~/desk/desk-step.server";
+import { startRevision } from "~/desk/revisions.server";
+import { REVISION_STATE_LABELS } from "~/vocabulary/revision-states";
 
 export const meta: Route.MetaFunction = () => [{ title: "Revise a detail — Desk — Dryside" }];
 
 export async function loader({ params }: Route.LoaderArgs) {
-  const detail = await Detail.findOne({ where: { slug: params.slug }, attributes: ["id", "slug", "title", "publishedRevisionId"] });
-  if (!detail) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
-  const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: OPEN_REVISION_STATES } }, attributes: ["id", "number", "state", "authorName"] });
-  const published = detail.publishedRevisionId ? await DetailRevision.findByPk(detail.publishedRevisionId, { attributes: ["number"] }) : null;
-  return {
-    slug: detail.slug,
-    title: detail.title,
-    publishedNumber: published?.number ?? null,
-    open: open ? { id: open.id, number: open.number, state: open.state, authorName: open.authorName } : null,
-  };
+  const page = await startRevisionPage(params.slug);
+  if (!page) throw data({ message: `No detail “${params.slug}”.` }, { status: 404 });
+  return page;
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = context.get(userContext);
   await requireCsrf(request);
-  try {
-    const { revisionId } = await startRevision(user, params.slug);
-    return redirect(`/desk/revisions/${revisionId}`);
-  } catch (error) {
-    if (error instanceof DeskError) return data({ message: error.message }, { status: error.status });
-    throw error;
-  }
+  return deskStep(
+    async () => redirect(`/desk/revisions/${(await startRevision(user, params.slug)).revisionId}`),
+    (error) => data({ message: error.message }, { status: error.status }),
+  );
 }
 
 export default function StartRevision({ loaderData, actionData }: Route.ComponentProps) {

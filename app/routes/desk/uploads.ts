@@ -1,7 +1,7 @@
 import type { Route } from "./+types/uploads";
 import { requireCsrf } from "~/auth/csrf.server";
 import { userContext } from "~/auth/guards.server";
-import { DeskError } from "~/desk/revisions.server";
+import { deskStep, refusedJson } from "~/desk/desk-step.server";
 import { readUploadRequest } from "~/desk/upload-form";
 import { MAX_UPLOAD_BYTES, removeUpload, storeUpload } from "~/desk/uploads.server";
 import { jsonError } from "~/http/json";
@@ -17,15 +17,12 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const posted = readUploadRequest(form);
   if (!posted.success) return jsonError(400, "invalid_request", posted.error.issues[0].message);
   const upload = posted.data;
-  try {
+  return deskStep(async () => {
     if (upload.intent === "remove") {
       await removeUpload(user, upload.uploadId);
       return Response.json({ removed: true });
     }
     const stored = await storeUpload(user, Number(params.id) || 0, upload.file, upload.caption);
     return Response.json({ upload: stored }, { status: 201 });
-  } catch (error) {
-    if (error instanceof DeskError) return jsonError(error.status, "refused", error.message);
-    throw error;
-  }
+  }, refusedJson);
 }

@@ -7,7 +7,8 @@ import { requireRole } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { FieldError, FormErrors, withoutKey } from "~/components/form-field";
 import { withdrawPage } from "~/desk/desk-pages.server";
-import { DeskError, withdrawPublished } from "~/desk/revisions.server";
+import { deskStep, refusedForm } from "~/desk/desk-step.server";
+import { withdrawPublished } from "~/desk/revisions.server";
 import { withdrawFormSchema } from "~/desk/withdraw-form";
 
 export const meta: Route.MetaFunction = () => [{ title: "Withdraw a detail — Desk — Dryside" }];
@@ -24,13 +25,10 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const form = await requireCsrf(request);
   const submission = parseWithZod(form, { schema: withdrawFormSchema });
   if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
-  try {
+  return deskStep(async () => {
     await withdrawPublished(user, params.slug, submission.value.reason);
     return redirect(`/desk?withdrawn=${encodeURIComponent(params.slug)}`);
-  } catch (error) {
-    if (error instanceof DeskError) return data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
-    throw error;
-  }
+  }, refusedForm(submission));
 }
 
 export default function Withdraw({ loaderData, actionData }: Route.ComponentProps) {

@@ -1,8 +1,7 @@
 import { data, Link } from "react-router";
 import type { Route } from "./+types/detail";
 import { getViewer } from "~/access/viewer.server";
-import { getDetailView } from "~/catalogue/detail.server";
-import { checkAssemblyForSite } from "~/catalogue/site-check.server";
+import { detailPage } from "~/catalogue/detail-page.server";
 import { labelFor } from "~/catalogue/vocabulary";
 import { LayerTable } from "~/components/layer-table";
 import { SectionDrawing } from "~/components/section-drawing";
@@ -10,7 +9,6 @@ import { SiteCheckPanel } from "~/components/site-check-panel";
 import { UnitsToggle } from "~/components/units-toggle";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { SaveDetailButton } from "~/components/save-detail-button";
-import { isSaved } from "~/desk/saved.server";
 import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
@@ -19,25 +17,9 @@ export const meta: Route.MetaFunction = ({ data }) => [
 ];
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
-  const [viewer, units] = await Promise.all([getViewer(context), unitsFor(request)]);
-  const detail = await getDetailView(params.slug, viewer);
-  if (!detail) throw data("No published detail has this address. It may have been withdrawn or renamed.", { status: 404 });
-
-  const search = new URL(request.url).searchParams;
-  const siteValues = {
-    zone: search.get("zone") ?? (search.get("hdd") ? "" : detail.zones[0] ?? ""),
-    hdd: search.get("hdd") ?? "",
-    cdd: search.get("cdd") ?? "",
-    moisture: search.get("moisture") ?? "",
-    indoorRh: search.get("indoorRh") ?? "",
-  };
-  let initialCheck = null;
-  if (detail.full) {
-    const outcome = await checkAssemblyForSite({ assembly: detail.assembly, layers: detail.full.layers }, { ...siteValues, units });
-    initialCheck = outcome.ok ? { result: outcome.result } : { fieldErrors: outcome.fieldErrors };
-  }
-  const saved = viewer ? await isSaved(viewer.id, detail.id) : null;
-  return { detail, units, siteValues, initialCheck, saved };
+  const page = await detailPage(params.slug, getViewer(context), await unitsFor(request), new URL(request.url).searchParams);
+  if (!page) throw data("No published detail has this address. It may have been withdrawn or renamed.", { status: 404 });
+  return page;
 }
 
 function formatDate(iso: string | null): string {

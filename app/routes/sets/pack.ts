@@ -2,7 +2,8 @@ import { Readable } from "node:stream";
 import type { Route } from "./+types/pack";
 import { requireUser } from "~/auth/guards.server";
 import { jsonError } from "~/http/json";
-import { downloadPack, parsePackRequest } from "~/payments/packs.server";
+import { parsePackRequest } from "~/packs/pack-request";
+import { downloadPack } from "~/packs/packs.server";
 import { unitsFor } from "~/preferences/units.server";
 
 // GET /sets/:slug/pack[?units=si|ip&zone=5A] — the set's ZIP. A visitor is sent to sign in (it is a

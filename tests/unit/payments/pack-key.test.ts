@@ -1,5 +1,6 @@
 import { expect, test } from "vitest";
-import { cautionsOf, packKey, parsePackRequest } from "~/payments/packs.server";
+import { parsePackRequest } from "~/packs/pack-request";
+import { cautionsOf, packKey } from "~/packs/packs.server";
 import { formatMoney, formatRecurring } from "~/payments/money";
 import { PLANS, setLookupKey } from "~/payments/catalogue.server";
 

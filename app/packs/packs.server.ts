@@ -1,7 +1,6 @@
 import { createHash } from "node:crypto";
 import { PassThrough, type Readable } from "node:stream";
 import { ZipArchive } from "archiver";
-import { Op } from "sequelize";
 import { requireEntitlement, type Viewer } from "~/access/premium.server";
 import { exportDetailMarkdown } from "~/catalogue/export-markdown";
 import { materialLibrary } from "~/catalogue/materials.server";
@@ -11,11 +10,11 @@ import type { DetailFrontMatter } from "~/content/detail-schema";
 import type { Material } from "~/envelope";
 import { Detail, DetailRevision, DetailSet, Download, MaterialRecord } from "~/models/index.server";
 import { blobStorage } from "~/storage/storage.server";
-import { renderDetailSheet } from "~/packs/sheet-pdf.server";
+import { renderDetailSheet } from "./sheet-pdf.server";
 import { BODY_SECTION_HEADINGS, bodySection } from "~/vocabulary/body-sections";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
-import { isClimateZoneId, type ClimateZoneId } from "~/vocabulary/climate-zones";
-import { UNIT_SYSTEM_LABELS, parseUnitSystem, type UnitSystem } from "~/vocabulary/units";
+import { UNIT_SYSTEM_LABELS } from "~/vocabulary/units";
+import type { PackRequest } from "./pack-request";
 
 // A pack is a set's download: one PDF sheet and one Markdown source file per published detail.
 // Packs are built once per (set, published revisions, material library, units, zone) and kept in blob
@@ -23,22 +22,6 @@ import { UNIT_SYSTEM_LABELS, parseUnitSystem, type UnitSystem } from "~/vocabula
 
 /** Raise when the pack layout or the sheet changes, so cached packs are rebuilt. */
 const PACK_FORMAT = 1;
-
-export type PackZone = ClimateZoneId | "own";
-
-export interface PackRequest {
-  units: UnitSystem;
-  /** One zone for every sheet, or "own": each detail checked for the first zone it is written for. */
-  zone: PackZone;
-}
-
-export function parsePackRequest(search: URLSearchParams, fallbackUnits: UnitSystem): PackRequest | null {
-  const units = search.has("units") ? parseUnitSystem(search.get("units")) : fallbackUnits;
-  const zone = search.get("zone") ?? "own";
-  if (!units) return null;
-  if (zone !== "own" && !isClimateZoneId(zone)) return null;
-  return { units, zone };
-}
 
 interface PackMember {
   slug: string;

@@ -1,0 +1,27 @@
+// What the detail page shows: the detail as this viewer may see it, the site check already run for the
+// site in the address (or the detail's first zone), and whether the member saved it.
+import type { Viewer } from "~/access/premium.server";
+import { isSaved } from "~/desk/saved.server";
+import type { UnitSystem } from "~/vocabulary/units";
+import { getDetailView } from "./detail.server";
+import { checkAssemblyForSite } from "./site-check.server";
+
+/** Null: no published detail under that slug. */
+export async function detailPage(slug: string, viewer: Viewer | null, units: UnitSystem, search: URLSearchParams) {
+  const detail = await getDetailView(slug, viewer);
+  if (!detail) return null;
+  const siteValues = {
+    zone: search.get("zone") ?? (search.get("hdd") ? "" : detail.zones[0] ?? ""),
+    hdd: search.get("hdd") ?? "",
+    cdd: search.get("cdd") ?? "",
+    moisture: search.get("moisture") ?? "",
+    indoorRh: search.get("indoorRh") ?? "",
+  };
+  let initialCheck = null;
+  if (detail.full) {
+    const outcome = await checkAssemblyForSite({ assembly: detail.assembly, layers: detail.full.layers }, { ...siteValues, units });
+    initialCheck = outcome.ok ? { result: outcome.result } : { fieldErrors: outcome.fieldErrors };
+  }
+  const saved = viewer ? await isSaved(viewer.id, detail.id) : null;
+  return { detail, units, siteValues, initialCheck, saved };
+}
