@@ -5,6 +5,7 @@ import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
 import PDFDocument from "pdfkit";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
+import { profileGeometry } from "~/drawing/profile-geometry";
 import { sectionGeometry, type SectionLayer } from "~/drawing/section-geometry";
 import { INK, type Shape } from "~/drawing/shapes";
 import type { AssemblyKind, Flag, ProfileCase, SiteCheckResult } from "~/envelope/types";
@@ -267,14 +268,14 @@ function render(doc: Doc, input: DetailSheetInput): void {
   footer(doc, input, generatedAt);
 }
 
-/** Renders one detail sheet to a one-page Letter PDF. */
-export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
+/** A Letter document with the sheet's fonts, drawn by `draw`, as bytes. */
+function letterPdf(info: PDFKit.DocumentInfo, draw: (doc: Doc) => void): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     // Bottom margin 0: the footer sits below the text area and must not start a second page.
     const doc = new PDFDocument({
       size: "LETTER",
       margins: { top: PAGE.margin, left: PAGE.margin, right: PAGE.margin, bottom: 0 },
-      info: { Title: pdfText(input.title), Subject: `Dryside detail sheet ${input.slug}, revision ${input.revision.number}`, Creator: "Dryside" },
+      info,
     });
     doc.registerFont(FONTS.sans, fontFile("inter", 400));
     doc.registerFont(FONTS.sansBold, fontFile("inter", 700));
@@ -285,10 +286,39 @@ export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
     doc.on("end", () => resolve(Buffer.concat(chunks)));
     doc.on("error", reject);
     try {
-      render(doc, input);
+      draw(doc);
       doc.end();
     } catch (error) {
       reject(error);
+    }
+  });
+}
+
+/** Renders one detail sheet to a one-page Letter PDF. */
+export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
+  return letterPdf(
+    { Title: pdfText(input.title), Subject: `Dryside detail sheet ${input.slug}, revision ${input.revision.number}`, Creator: "Dryside" },
+    (doc) => render(doc, input),
+  );
+}
+
+/** Draws a site-check case's profile chart (the page's wide layout) across the content width at y;
+ * returns the y below it. The type is 10 drawing units, 7.5 pt at this scale. */
+export function drawProfileChart(doc: Doc, profile: ProfileCase, units: UnitSystem, y: number): number {
+  const chart = profileGeometry(profile, { units, width: 720 });
+  const k = CONTENT_WIDTH / chart.width;
+  drawShapes(doc, chart.shapes, PAGE.margin, y, k);
+  return y + chart.height * k;
+}
+
+/** The winter and summer profile charts of a site check, one Letter page each, for a pack or a review. */
+export function renderProfilePages(title: string, siteCheck: SiteCheckResult, units: UnitSystem): Promise<Buffer> {
+  return letterPdf({ Title: pdfText(`${title}: profiles`), Creator: "Dryside" }, (doc) => {
+    for (const profile of [siteCheck.profiles.winter, siteCheck.profiles.summer]) {
+      if (profile.name === "summer") doc.addPage();
+      doc.font(FONTS.serifBold).fontSize(12).fillColor(INK.graphite)
+        .text(pdfText(`${title}: ${profile.name} profile`), PAGE.margin, PAGE.margin, { width: CONTENT_WIDTH, lineBreak: false, ellipsis: "…", height: 16 });
+      drawProfileChart(doc, profile, units, PAGE.margin + 22);
     }
   });
 }
