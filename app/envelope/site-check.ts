@@ -1,9 +1,12 @@
 // The one entry point: resolves the site and the layers, then runs thermal, vapour, profile,
 // code and rule checks and returns a plain-JSON result.
 import { resolveSite } from "./climate";
+import { resolveClimateYear } from "./climate-year";
 import { codeRows } from "./code-tables";
 import { resolveAssembly, type ResolvedAssembly } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
+import { seasonalBalance } from "./monthly-balance";
+import { nbcRows } from "./nbc";
 import { computeProfile, type CaseConditions } from "./profile";
 import { saturationPressure } from "./psychrometrics";
 import { evaluateRules, isReservoirCladding, LOCAL_CODE_CAUTION } from "./rules";
@@ -82,8 +85,10 @@ export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials
     thermal,
     profiles: { winter, summer },
     vapour,
-    code: { edition: resolvedSite.edition, rows },
+    // Canadian sites are compared with the NBC; the IRC/IECC rows still feed the rules above.
+    code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
   };
 }
+    seasonal: seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),

@@ -1,5 +1,6 @@
 // Public input and result shapes of the site check. Results are plain JSON (no class instances,
 // no NaN/Infinity) so a page, an API route and a PDF sheet show the same numbers.
+import type { IndoorMethodId } from "./indoor-climate";
 
 export const ASSEMBLY_KINDS = [
   "above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor", "basement-wall", "slab",
@@ -69,13 +70,20 @@ export interface SiteInput {
   summer?: { t_c?: number; rh?: number; cladding_t_c?: number };
   /** Soil-side temperature for below-grade assemblies (winter case). */
   ground_t_c?: number;
-  indoor?: { t_c?: number; rh?: number; summer_t_c?: number; summer_rh?: number };
+  /** method: indoor humidity method id (indoor-climate.ts); a given rh overrides it. */
+  indoor?: { t_c?: number; rh?: number; summer_t_c?: number; summer_rh?: number; method?: IndoorMethodId };
   edition?: CodeEdition;
 }
 
 export interface ResolvedSite {
   zone: ZoneId;
   zoneNumber: number;
+  /** Canada: a province or territory, an NBC zone, or hdd18 with country "CA" (nbc.ts). */
+  country?: Country;
+  province?: ProvinceCode;
+  nbcZone?: NbcZone;
+  /** The site year for the seasonal balance: 12 months typed, or a 12-row CSV; else generated. */
+  year?: ClimateYearInput;
   moisture: MoistureRegime | null;
   zoneSource: "given" | "degree-days";
   hdd18: number | null;
@@ -84,13 +92,19 @@ export interface ResolvedSite {
   winter: { t_c: number; rh: number };
   summer: { t_c: number; rh: number; cladding_t_c: number };
   ground_t_c: number;
-  indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number };
+  /** method and basis: how the winter indoor RH was set, and the sentence that says so. */
+  indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number; method: IndoorMethodId | "given"; basis: string };
   edition: CodeEdition;
   /** Which values were defaults (so the page can say "assumed"). */
   defaulted: string[];
   notes: string[];
 }
 
+  country: Country;
+  /** Canadian sites: where the degree-days came from, the NBC zone and the code compared. */
+  canada: CanadianSite | null;
+  /** Units to show first: SI for Canadian sites, inch-pound otherwise (the viewer may override). */
+  preferredUnits: "SI" | "IP";
 export type RetarderClass = "I" | "II" | "III";
 export type LayerVapourClass = RetarderClass | "permeable";
 export type InteriorClass = RetarderClass | "none";
@@ -175,6 +189,9 @@ export interface ProfileCase {
   interior: { t_c: number; rh: number; p_v_pa: number };
   interfaces: ProfileInterface[];
   condensingPlanes: CondensationPlane[];
+  /** The heat and vapour path the profile runs along: through the clear cavity of framed layers
+   * (the worst case; the stud path's temperatures are in `studPath`). */
+  path: "clear-cavity";
   firstCondensingSurface: { interfaceIndex: number; label: string; t_c: number } | null;
   /** Coldest (winter) / most at-risk (summer) surface temperature minus the source air's dew point;
    * negative means that surface is below the dew point. */
@@ -190,8 +207,15 @@ export interface VapourResult {
   interiorClass: InteriorClass;
   interiorPerm_us: number | null;
   exteriorPerm_us: number | null;
+  /** Interface temperatures through the framing, and the margin at the same surface; null when no
+   * framed layer is in the heat path. */
+  studPath: { interfaces_t_c: number[]; margin_c: number } | null;
+  /** How this case was modelled, in sentences to show beside it (sky radiation, cold-weather R …). */
+  notes: string[];
   dryingDirections: ("inward" | "outward")[];
   bothSidesClosed: boolean;
+export interface UpperWallProfiles { aboveGrade: ProfileCase; frostDepth: ProfileCase }
+
   explanation: string;
 }
 
@@ -205,7 +229,7 @@ export interface CodeRow {
 }
 
 export interface CodeResult {
-  edition: CodeEdition;
+  edition: CodeEdition | NbcEdition;
   rows: CodeRow[];
 }
 
@@ -221,9 +245,107 @@ export interface Flag {
 export interface SiteCheckResult {
   site: ResolvedSite;
   thermal: ThermalResult;
-  profiles: { winter: ProfileCase; summer: ProfileCase };
+  /** upperWall: basement and crawl-space walls only, the band above grade and the soil at frost
+   * depth beside the deep-ground winter case. */
+  profiles: { winter: ProfileCase; summer: ProfileCase; upperWall: UpperWallProfiles | null };
   vapour: VapourResult;
   code: CodeResult;
   flags: Flag[];
   caution: string;
 }
+  /** ISO 13788 monthly balance over the site year (monthly-balance.ts). */
+  seasonal: SeasonalResult;
+}
+
+// Indoor method, site year, seasonal balance and Canada (indoor-climate.ts, climate-year.ts,
+// monthly-balance.ts, nbc.ts).
+export type { IndoorMethodId } from "./indoor-climate";
+export type Country = "US" | "CA";
+export type NbcEdition = "NBC 2020";
+export const PROVINCES = ["AB", "BC", "MB", "NB", "NL", "NS", "NT", "NU", "ON", "PE", "QC", "SK", "YT"] as const;
+export type ProvinceCode = (typeof PROVINCES)[number];
+
+export interface CanadianSite {
+  province: ProvinceCode | null;
+  nbcZone: NbcZone;
+  hdd18: number;
+  /** given: the user's HDD; province: the reference place's HDD; nbc-zone: the cold end of the band. */
+  hddSource: "given" | "province" | "nbc-zone";
+  /** Reference place when the HDD came from the province. */
+  place: string | null;
+  edition: NbcEdition;
+}
+
+export interface MonthInput { t_c: number; rh: number }
+export interface ClimateYearInput {
+  months?: readonly MonthInput[];
+  csv?: string;
+}
+
+export interface MonthClimate { month: number; name: string; t_c: number; rh: number }
+export interface ClimateYear {
+  source: "typed" | "csv" | "generated";
+  months: MonthClimate[];
+  /** How the year was made (for "generated": the fitted curve and what it was fitted to). */
+  note: string;
+}
+
+export interface InterfaceWater {
+  interfaceIndex: number;
+  label: string;
+  /** Held at the end of the month, g/m². */
+  accumulated_g_m2: number;
+  /** Net rate this month, g/(m²·day); negative while drying. */
+  rate_g_m2_day: number;
+}
+
+export interface SeasonalMonth {
+  month: number;
+  name: string;
+  days: number;
+  outdoor: { t_c: number; rh: number; p_v_pa: number };
+  indoor: { t_c: number; rh: number; p_v_pa: number };
+  /** Condensed and evaporated this month, all interfaces, g/m². */
+  condensed_g_m2: number;
+  evaporated_g_m2: number;
+  /** Held at the end of the month, all interfaces, g/m². */
+  accumulated_g_m2: number;
+  /** Held at the critical interface at the end of the month (the chart line), g/m². */
+  critical_g_m2: number;
+  /** Closest interface's temperature minus the dew point of the uncondensed vapour pressure there;
+   * negative where the straight-line profile crosses saturation. */
+  margin_c: number;
+  marginInterface: string;
+  interfaces: InterfaceWater[];
+  /** Interior-surface mould check: the temperature factor this month needs (null: no heat loss). */
+  fRsiMin: number | null;
+}
+
+export interface SurfaceMouldCheck {
+  method: string;
+  /** Temperature factor of the assembly on its coldest path, with Rsi 0.25 and Rse 0.04. */
+  fRsi: number;
+  /** Highest monthly requirement and its month (null: no month asks for one). */
+  fRsiMax: number | null;
+  criticalMonth: number | null;
+  pass: boolean;
+  explanation: string;
+}
+
+export interface SeasonalResult {
+  method: string;
+  climate: ClimateYear;
+  indoorMethod: IndoorMethodId | "given";
+  /** Calendar month (1–12) the balance starts from: the first condensing month; null if none. */
+  startMonth: number | null;
+  months: SeasonalMonth[];
+  criticalInterface: { interfaceIndex: number; label: string } | null;
+  peak_g_m2: number;
+  peakMonth: number | null;
+  /** Month (1–12) by whose end all condensate has evaporated; null if none formed or it stays. */
+  driesOutMonth: number | null;
+  /** Water still held after the twelve months from the start month, g/m². */
+  endOfYear_g_m2: number;
+  verdict: "no-condensation" | "dries-within-year" | "accumulates";
+  surface: SurfaceMouldCheck;
+  explanation: string;
