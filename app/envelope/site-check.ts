@@ -89,6 +89,6 @@ export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials
     code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
+    seasonal: seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),
   };
 }
-    seasonal: seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),

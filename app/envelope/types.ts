@@ -73,17 +73,17 @@ export interface SiteInput {
   /** method: indoor humidity method id (indoor-climate.ts); a given rh overrides it. */
   indoor?: { t_c?: number; rh?: number; summer_t_c?: number; summer_rh?: number; method?: IndoorMethodId };
   edition?: CodeEdition;
-}
-
-export interface ResolvedSite {
-  zone: ZoneId;
-  zoneNumber: number;
   /** Canada: a province or territory, an NBC zone, or hdd18 with country "CA" (nbc.ts). */
   country?: Country;
   province?: ProvinceCode;
   nbcZone?: NbcZone;
   /** The site year for the seasonal balance: 12 months typed, or a 12-row CSV; else generated. */
   year?: ClimateYearInput;
+}
+
+export interface ResolvedSite {
+  zone: ZoneId;
+  zoneNumber: number;
   moisture: MoistureRegime | null;
   zoneSource: "given" | "degree-days";
   hdd18: number | null;
@@ -95,16 +95,16 @@ export interface ResolvedSite {
   /** method and basis: how the winter indoor RH was set, and the sentence that says so. */
   indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number; method: IndoorMethodId | "given"; basis: string };
   edition: CodeEdition;
-  /** Which values were defaults (so the page can say "assumed"). */
-  defaulted: string[];
-  notes: string[];
-}
-
   country: Country;
   /** Canadian sites: where the degree-days came from, the NBC zone and the code compared. */
   canada: CanadianSite | null;
   /** Units to show first: SI for Canadian sites, inch-pound otherwise (the viewer may override). */
   preferredUnits: "SI" | "IP";
+  /** Which values were defaults (so the page can say "assumed"). */
+  defaulted: string[];
+  notes: string[];
+}
+
 export type RetarderClass = "I" | "II" | "III";
 export type LayerVapourClass = RetarderClass | "permeable";
 export type InteriorClass = RetarderClass | "none";
@@ -189,9 +189,6 @@ export interface ProfileCase {
   interior: { t_c: number; rh: number; p_v_pa: number };
   interfaces: ProfileInterface[];
   condensingPlanes: CondensationPlane[];
-  /** The heat and vapour path the profile runs along: through the clear cavity of framed layers
-   * (the worst case; the stud path's temperatures are in `studPath`). */
-  path: "clear-cavity";
   firstCondensingSurface: { interfaceIndex: number; label: string; t_c: number } | null;
   /** Coldest (winter) / most at-risk (summer) surface temperature minus the source air's dew point;
    * negative means that surface is below the dew point. */
@@ -207,15 +204,8 @@ export interface VapourResult {
   interiorClass: InteriorClass;
   interiorPerm_us: number | null;
   exteriorPerm_us: number | null;
-  /** Interface temperatures through the framing, and the margin at the same surface; null when no
-   * framed layer is in the heat path. */
-  studPath: { interfaces_t_c: number[]; margin_c: number } | null;
-  /** How this case was modelled, in sentences to show beside it (sky radiation, cold-weather R …). */
-  notes: string[];
   dryingDirections: ("inward" | "outward")[];
   bothSidesClosed: boolean;
-export interface UpperWallProfiles { aboveGrade: ProfileCase; frostDepth: ProfileCase }
-
   explanation: string;
 }
 
@@ -245,14 +235,11 @@ export interface Flag {
 export interface SiteCheckResult {
   site: ResolvedSite;
   thermal: ThermalResult;
-  /** upperWall: basement and crawl-space walls only, the band above grade and the soil at frost
-   * depth beside the deep-ground winter case. */
-  profiles: { winter: ProfileCase; summer: ProfileCase; upperWall: UpperWallProfiles | null };
+  profiles: { winter: ProfileCase; summer: ProfileCase };
   vapour: VapourResult;
   code: CodeResult;
   flags: Flag[];
   caution: string;
-}
   /** ISO 13788 monthly balance over the site year (monthly-balance.ts). */
   seasonal: SeasonalResult;
 }
@@ -349,3 +336,5 @@ export interface SeasonalResult {
   verdict: "no-condensation" | "dries-within-year" | "accumulates";
   surface: SurfaceMouldCheck;
   explanation: string;
+}
+
