@@ -15,7 +15,7 @@ export const NBC_ZONE_BANDS: Readonly<Record<NbcZone, { from: number; to: number
   "7B": { from: 6000, to: 6999, coldEnd: 6999 },
   "8": { from: 7000, to: null, coldEnd: 7999 },
 };
-export const NBC_ZONES = Object.keys(NBC_ZONE_BANDS) as NbcZone[];
+export const NBC_ZONES: readonly NbcZone[] = ["4", "5", "6", "7A", "7B", "8"];
 
 /** A reference place per province or territory (the capital) and its HDD below 18 °C, NBC 2020
  * Appendix C climatic data — all from memory (M). Used only when the site gives a province and no

@@ -8,6 +8,7 @@ import { resolveAssembly } from "~/envelope/layers";
 import { seasonalBalance } from "~/envelope/monthly-balance";
 import { computeProfile } from "~/envelope/profile";
 import { winterCase } from "~/envelope/site-check";
+import type { MaterialFamily } from "~/envelope/material-schema";
 import type { ClimateYear, LayerInput, MonthInput } from "~/envelope/types";
 import { fixedRsiMaterial, libraryOf, loadLibrary } from "./library";
 
@@ -16,7 +17,7 @@ const psychrolib = createRequire(import.meta.url)("psychrolib") as PsychroLib;
 psychrolib.SetUnitSystem(psychrolib.SI);
 
 /** A fixture layer with a stated RSI and permeance (ng/(s·m²·Pa)). */
-const layerMaterial = (slug: string, rsi: number, perm: number, family = "membrane") =>
+const layerMaterial = (slug: string, rsi: number, perm: number, family: MaterialFamily = "membrane") =>
   fixedRsiMaterial(slug, rsi, { family, vapour: { permeance_ng: perm, source: "fixture, D" } });
 
 const twoLayer = libraryOf(layerMaterial("outer-board", 0.5, 10), layerMaterial("fill", 3.0, 500, "fibrous-insulation"));
