@@ -2,7 +2,7 @@
 // so the thermal, vapour and rule modules work on trusted numbers.
 import { MaterialDataError, SiteCheckInputError } from "./errors";
 import { lookupMaterial, type Material, type MaterialLibrary } from "./material-schema";
-import { ASSEMBLY_KINDS, type AssemblyInput, type AssemblyKind, type LayerInput } from "./types";
+import { ASSEMBLY_KINDS, EXPOSURES, type AssemblyInput, type AssemblyKind, type LayerInput } from "./types";
 
 export interface ResolvedLayer {
   index: number;
@@ -61,6 +61,9 @@ export function resolveAssembly(assembly: AssemblyInput, library: MaterialLibrar
     }
     if (input.adhesive !== undefined && !ADHESIVES.includes(input.adhesive)) {
       throw new SiteCheckInputError(`${at}.adhesive`, `adhesive must be one of ${ADHESIVES.join(", ")}`);
+    }
+    if (input.exposure !== undefined && !(EXPOSURES as readonly string[]).includes(input.exposure)) {
+      throw new SiteCheckInputError(`${at}.exposure`, `exposure must be one of ${EXPOSURES.join(", ")}`);
     }
     let framing: ResolvedLayer["framing"] = null;
     if (input.framing !== undefined) {

@@ -179,7 +179,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const labels = interfaceLabels(a);
   const films = filmsFor(a.kind, c.name);
   const thermalStart = c.thermalStart ?? 0;
-  const extFilm = c.fixedSurface ? 0 : thermalStart > 0 ? films.interior.rsi : c.exteriorFilmRsi ?? films.exterior?.rsi ?? 0;
+  const extFilm = c.fixedSurface ? 0 : c.exteriorFilmRsi ?? (thermalStart > 0 ? films.interior.rsi : films.exterior?.rsi ?? 0);
   const notes = c.notes ? c.notes.slice() : [];
 
   const { t, layerR, coldAdjusted } = pathTemperatures(a, c, "clear-cavity", extFilm, films.interior.rsi, thermalStart);

@@ -17,6 +17,10 @@ export type LayerRole = (typeof LAYER_ROLES)[number];
 
 export type Joints = "taped" | "lapped" | "sealed";
 export type Adhesive = "solvent-based" | "water-based" | "mechanical";
+/** What a layer's open face meets, where that is not simply the next layer: a room, a crawl space
+ * or attic, the weather (above grade), or the soil. */
+export const EXPOSURES = ["interior", "service-space", "weather", "soil"] as const;
+export type Exposure = (typeof EXPOSURES)[number];
 
 /** One layer, exactly as the `layers` of a detail file (docs/content-format.md). */
 export interface LayerInput {
@@ -27,6 +31,7 @@ export interface LayerInput {
   joints?: Joints;
   adhesive?: Adhesive;
   exposed?: boolean;
+  exposure?: Exposure;
   note?: string;
 }
 
@@ -125,6 +130,8 @@ export interface ThermalLayer {
   /** Effective layer RSI (framed layers: area-weighted conductance, i.e. isothermal plane). */
   rsi: number;
   r_ip: number;
+  /** False for layers outboard of a ventilated cavity (and the cavity): outdoors for heat. */
+  counted: boolean;
   framed?: FramedPath;
 }
 
@@ -182,6 +189,9 @@ export interface VapourLayer {
 export interface ProfileCase {
   name: "winter" | "summer";
   description: string;
+  /** The heat and vapour path the profile runs along: through the clear cavity of framed layers
+   * (the worst case; the stud path's temperatures are in `studPath`). */
+  path: "clear-cavity";
   /** Interface where the outdoor (soil, wet-cladding) vapour condition applies; layers outboard of
    * it sit in a ventilated cavity or hold the vapour source, and resist nothing in this case. */
   boundaryIndex: number;
@@ -197,7 +207,14 @@ export interface ProfileCase {
   sourceDewPoint_c: number;
   rate_g_m2_day: number;
   vapourLayers: VapourLayer[];
+  /** Interface temperatures through the framing, and the margin at the same surface; null when no
+   * framed layer is in the heat path. */
+  studPath: { interfaces_t_c: number[]; margin_c: number } | null;
+  /** How this case was modelled, in sentences to show beside it (sky radiation, cold-weather R …). */
+  notes: string[];
 }
+
+export interface UpperWallProfiles { aboveGrade: ProfileCase; frostDepth: ProfileCase }
 
 export interface VapourResult {
   layers: VapourLayer[];
@@ -235,7 +252,9 @@ export interface Flag {
 export interface SiteCheckResult {
   site: ResolvedSite;
   thermal: ThermalResult;
-  profiles: { winter: ProfileCase; summer: ProfileCase };
+  /** upperWall: basement and crawl-space walls only, the band above grade and the soil at frost
+   * depth beside the deep-ground winter case. */
+  profiles: { winter: ProfileCase; summer: ProfileCase; upperWall: UpperWallProfiles | null };
   vapour: VapourResult;
   code: CodeResult;
   flags: Flag[];
@@ -337,4 +356,3 @@ export interface SeasonalResult {
   surface: SurfaceMouldCheck;
   explanation: string;
 }
-
