@@ -184,11 +184,15 @@ const GENERATED_CACHE_SIZE = 256;
 export function generateClimateYear(site: ResolvedSite): ClimateYear {
   const key = `${site.hdd18}|${site.cdd10}|${site.zoneNumber}|${site.winter.t_c}|${site.summer.t_c}|${site.winter.rh}|${site.summer.rh}`;
   const hit = generated.get(key);
-  if (hit) return structuredClone(hit);
+  if (hit) return copyYear(hit);
   const year = fitYear(site);
   if (generated.size >= GENERATED_CACHE_SIZE) generated.delete(generated.keys().next().value as string);
   generated.set(key, year);
-  return structuredClone(year);
+  return copyYear(year);
+}
+
+function copyYear(y: ClimateYear): ClimateYear {
+  return { source: y.source, note: y.note, months: y.months.map((m) => ({ ...m })) };
 }
 
 function fitYear(site: ResolvedSite): ClimateYear {

@@ -1,5 +1,6 @@
 // Public surface of the site-check engine (pure TypeScript; zod is its only dependency).
 export { runSiteCheck, winterCase, summerCase } from "./site-check";
+export type { SiteCheckOptions } from "./site-check";
 export { resolveSite, CLIMATE_ZONES, zoneNumberFromDegreeDays, nbcZoneFromHdd, resolveCanada, moistureRegimeFromNormals, parseZone, DEFAULT_INDOOR } from "./climate";
 export { interiorRetarderClass, retarderClass, seriesPermeance, dryCupPermeance, permeanceAtRh } from "./vapour";
 export { assemblyRValue, filmsFor } from "./thermal";

@@ -88,10 +88,12 @@ function buildStack(a: ResolvedAssembly): Stack {
   return { n, start, extFilm, intFilm: films.interior.rsi, fixedSurface: below, r, tempDependent, dependent, anyDependent: dependent.includes(true), z };
 }
 
-/** One solved month: vapour pressure at each interface and the net rate (kg/(m²·s)) at each. */
+/** One solved month: temperatures, saturation, layer vapour resistances (settled), vapour pressure
+ * and the net rate (kg/(m²·s)) at each interface. */
 interface Solved {
   t: Float64Array;
   pSat: Float64Array;
+  z: Float64Array;
   zCum: Float64Array;
   p: Float64Array;
   rate: Float64Array;
@@ -99,19 +101,53 @@ interface Solved {
   pInt: number;
 }
 
+function newSolved(n: number): Solved {
+  return {
+    t: new Float64Array(n + 1), pSat: new Float64Array(n + 1), z: new Float64Array(n), zCum: new Float64Array(n + 1),
+    p: new Float64Array(n + 1), rate: new Float64Array(n + 1), pExt: 0, pInt: 0,
+  };
+}
+
+/** Scratch reused between calls, per stack size (typed arrays are costly to allocate): twelve dry
+ * months, one wet, and the balance's accumulators. The result copies numbers out of them, so nothing
+ * outside this module holds a reference. */
+interface Scratch {
+  months: Solved[];
+  held: Float64Array;
+  heldBy: Float64Array;
+  rateBy: Float64Array;
+  condensed: Float64Array;
+  evaporated: Float64Array;
+  total: Float64Array;
+  wet: Uint8Array;
+  dry: Uint8Array;
+}
+const pools = new Map<number, Scratch>();
+function scratchFor(n: number): Scratch {
+  let pool = pools.get(n);
+  if (!pool) {
+    pool = {
+      months: Array.from({ length: 13 }, () => newSolved(n)),
+      held: new Float64Array(n + 1), heldBy: new Float64Array(12 * (n + 1)), rateBy: new Float64Array(12 * (n + 1)),
+      condensed: new Float64Array(12), evaporated: new Float64Array(12), total: new Float64Array(12),
+      wet: new Uint8Array(n + 1), dry: new Uint8Array(n + 1),
+    };
+    pools.set(n, pool);
+  }
+  for (const a of [pool.held, pool.heldBy, pool.rateBy, pool.condensed, pool.evaporated, pool.total, pool.wet]) a.fill(0);
+  return pool;
+}
+
+function copySolved(from: Solved, to: Solved): void {
+  to.t.set(from.t); to.pSat.set(from.pSat); to.z.set(from.z); to.pExt = from.pExt; to.pInt = from.pInt;
+}
+
 /** Temperatures at the n + 1 interfaces (clear-cavity path); insulations whose conductivity
  * depends on temperature are re-evaluated once at their mean temperature. */
 function temperatures(a: ResolvedAssembly, s: Stack, te: number, ti: number, out: Float64Array): void {
   let total = s.extFilm + s.intFilm;
   for (let i = s.start; i < s.n; i++) total += s.r[i];
-  const fill = (r: ArrayLike<number>, tot: number): void => {
-    let acc = s.extFilm;
-    for (let k = 0; k <= s.n; k++) {
-      out[k] = te + ((ti - te) * acc) / tot;
-      if (k < s.n && k >= s.start) acc += r[k];
-    }
-  };
-  fill(s.r, total);
+  fillTemperatures(s, s.r, total, te, ti, out);
   if (!s.tempDependent) return;
   const r2 = Float64Array.from(s.r);
   let total2 = s.extFilm + s.intFilm;
@@ -120,95 +156,114 @@ function temperatures(a: ResolvedAssembly, s: Stack, te: number, ti: number, out
     r2[i] = materialRsiAt(l.material, l.thickness_mm, (out[i] + out[i + 1]) / 2);
     total2 += r2[i];
   }
-  fill(r2, total2);
+  fillTemperatures(s, r2, total2, te, ti, out);
 }
 
-/** Lower hull of saturation points between two anchors, appended to the vertex lists. */
-function hullSegment(
-  zCum: Float64Array, pSat: Float64Array, k0: number, z0: number, p0: number, k1: number, z1: number, p1: number,
-  vk: number[], vz: number[], vp: number[],
-): void {
-  const base = vk.length;
-  const push = (k: number, z: number, p: number): void => {
-    while (vk.length - base >= 2) {
-      const ia = vk.length - 2;
-      const ib = vk.length - 1;
-      const cross = (vz[ib] - vz[ia]) * (p - vp[ia]) - (vp[ib] - vp[ia]) * (z - vz[ia]);
-      if (cross <= 0) { vk.pop(); vz.pop(); vp.pop(); } else break;
-    }
-    vk.push(k); vz.push(z); vp.push(p);
-  };
-  push(k0, z0, p0);
-  for (let k = Math.max(k0 + 1, 0); k < k1; k++) if (zCum[k] > z0 && zCum[k] < z1) push(k, zCum[k], pSat[k]);
-  push(k1, z1, p1);
+function fillTemperatures(s: Stack, r: Float64Array, total: number, te: number, ti: number, out: Float64Array): void {
+  let acc = s.extFilm;
+  for (let k = 0; k <= s.n; k++) {
+    out[k] = te + ((ti - te) * acc) / total;
+    if (k < s.n && k >= s.start) acc += r[k];
+  }
 }
 
-function solveMonth(a: ResolvedAssembly, s: Stack, c: MonthConditions, wet: Uint8Array, out: Solved): void {
+// Vertices of the vapour-pressure string (interface index, cumulative resistance, pressure): module
+// scratch, `nv` long, reset by every solve; grown when a stack needs more.
+let vk = new Int32Array(64);
+let vz = new Float64Array(64);
+let vp = new Float64Array(64);
+let nv = 0;
+
+function ensureVertices(n: number): void {
+  if (vk.length >= n + 4) return;
+  vk = new Int32Array(2 * n + 4); vz = new Float64Array(2 * n + 4); vp = new Float64Array(2 * n + 4);
+}
+
+/** Adds a point to the lower hull whose first vertex is at `base`. */
+function hullPush(base: number, k: number, z: number, p: number): void {
+  while (nv - base >= 2) {
+    const ia = nv - 2;
+    const ib = nv - 1;
+    const cross = (vz[ib] - vz[ia]) * (p - vp[ia]) - (vp[ib] - vp[ia]) * (z - vz[ia]);
+    if (cross <= 0) nv--; else break;
+  }
+  vk[nv] = k; vz[nv] = z; vp[nv] = p; nv++;
+}
+
+/** Lower hull of the saturation points between two anchors, appended to the vertex lists. */
+function hullSegment(zCum: Float64Array, pSat: Float64Array, k0: number, z0: number, p0: number, k1: number, z1: number, p1: number): void {
+  const base = nv;
+  hullPush(base, k0, z0, p0);
+  for (let k = Math.max(k0 + 1, 0); k < k1; k++) if (zCum[k] > z0 && zCum[k] < z1) hullPush(base, k, zCum[k], pSat[k]);
+  hullPush(base, k1, z1, p1);
+}
+
+/** The month's temperatures, saturation pressures, boundary pressures and starting resistances
+ * (humidity-dependent layers start from the previous month's settled values when given: months
+ * change slowly, so the iteration settles in fewer passes). */
+function prepareMonth(a: ResolvedAssembly, s: Stack, c: MonthConditions, out: Solved, previous: Solved | null): void {
   const n = s.n;
   temperatures(a, s, c.outdoor.t_c, c.indoor.t_c, out.t);
   for (let k = 0; k <= n; k++) out.pSat[k] = saturationPressure(out.t[k]);
   // The outdoor vapour pressure cannot exceed saturation at the face it meets, nor the indoor at the
   // interior surface (that is surface condensation, which the mould check covers).
-  const pExt = s.fixedSurface ? out.pSat[s.start] : Math.min(c.outdoor.p_v_pa, out.pSat[s.start]);
-  const pInt = Math.min(c.indoor.p_v_pa, out.pSat[n]);
-  out.pExt = pExt;
-  out.pInt = pInt;
-  const zLayer = Float64Array.from(s.z);
+  out.pExt = s.fixedSurface ? out.pSat[s.start] : Math.min(c.outdoor.p_v_pa, out.pSat[s.start]);
+  out.pInt = Math.min(c.indoor.p_v_pa, out.pSat[n]);
+  if (previous && s.anyDependent) { out.z.set(previous.z); return; }
+  out.z.set(s.z);
   if (s.anyDependent) {
     const rh0 = (c.indoor.rh + c.outdoor.rh) / 2;
-    for (let i = 0; i < n; i++) if (s.dependent[i]) zLayer[i] = 1 / (layerPermeance(a.layers[i], rh0) * NG_TO_KG);
+    for (let i = 0; i < n; i++) if (s.dependent[i]) out.z[i] = 1 / (layerPermeance(a.layers[i], rh0) * NG_TO_KG);
   }
-  const vk: number[] = [];
-  const vz: number[] = [];
-  const vp: number[] = [];
+}
+
+/** The string with wet interfaces pinned at saturation; humidity-dependent resistances iterated on
+ * it from their current values until they settle. */
+function solveVapour(a: ResolvedAssembly, s: Stack, wet: Uint8Array, out: Solved): void {
+  const n = s.n;
+  ensureVertices(n);
+  const { zCum, pSat, p, z } = out;
   for (let pass = 0; ; pass++) {
-    out.zCum[0] = 0;
-    for (let i = 0; i < n; i++) out.zCum[i + 1] = out.zCum[i] + zLayer[i];
-    const zTot = out.zCum[n];
+    zCum[0] = 0;
+    for (let i = 0; i < n; i++) zCum[i + 1] = zCum[i] + z[i];
+    const zTot = zCum[n];
     // Anchors: the two boundary air states and every interface holding water (at saturation).
-    vk.length = 0; vz.length = 0; vp.length = 0;
-    let k0 = -1; let z0 = 0; let p0 = pExt;
+    nv = 0;
+    let k0 = -1; let z0 = 0; let p0 = out.pExt;
     for (let k = s.start + 1; k < n; k++) {
       if (!wet[k]) continue;
-      hullSegment(out.zCum, out.pSat, k0, z0, p0, k, out.zCum[k], out.pSat[k], vk, vz, vp);
-      vk.pop(); vz.pop(); vp.pop();
-      k0 = k; z0 = out.zCum[k]; p0 = out.pSat[k];
+      hullSegment(zCum, pSat, k0, z0, p0, k, zCum[k], pSat[k]);
+      nv--;
+      k0 = k; z0 = zCum[k]; p0 = pSat[k];
     }
-    hullSegment(out.zCum, out.pSat, k0, z0, p0, n + 1, zTot, pInt, vk, vz, vp);
+    hullSegment(zCum, pSat, k0, z0, p0, n + 1, zTot, out.pInt);
     // Vapour pressure at every interface along the string.
     let h = 1;
     for (let k = 0; k <= n; k++) {
-      const zk = out.zCum[k];
-      while (h < vz.length - 1 && vz[h] < zk) h++;
+      const zk = zCum[k];
+      while (h < nv - 1 && vz[h] < zk) h++;
       const dz = vz[h] - vz[h - 1];
-      out.p[k] = dz > 0 ? vp[h - 1] + ((vp[h] - vp[h - 1]) * (zk - vz[h - 1])) / dz : vp[h - 1];
+      p[k] = dz > 0 ? vp[h - 1] + ((vp[h] - vp[h - 1]) * (zk - vz[h - 1])) / dz : vp[h - 1];
     }
     if (!s.anyDependent || pass + 1 >= MAX_RH_PASSES) break;
     let settled = true;
     for (let i = 0; i < n; i++) {
       if (!s.dependent[i]) continue;
-      const rh = (Math.min(100, (100 * out.p[i]) / out.pSat[i]) + Math.min(100, (100 * out.p[i + 1]) / out.pSat[i + 1])) / 2;
+      const rh = (Math.min(100, (100 * p[i]) / pSat[i]) + Math.min(100, (100 * p[i + 1]) / pSat[i + 1])) / 2;
       const zNew = 1 / (layerPermeance(a.layers[i], rh) * NG_TO_KG);
-      if (Math.abs(zNew - zLayer[i]) > RH_SETTLED * zLayer[i]) settled = false;
-      zLayer[i] = zNew;
+      if (Math.abs(zNew - z[i]) > RH_SETTLED * z[i]) settled = false;
+      z[i] = zNew;
     }
     if (settled) break;
   }
   out.rate.fill(0);
-  for (let h = 1; h < vk.length - 1; h++) {
+  for (let h = 1; h < nv - 1; h++) {
     const k = vk[h];
     if (k <= s.start || k >= n) continue;
     const inflow = (vp[h + 1] - vp[h]) / (vz[h + 1] - vz[h]);
     const outflow = (vp[h] - vp[h - 1]) / (vz[h] - vz[h - 1]);
     out.rate[k] = inflow - outflow;
   }
-}
-
-function newSolved(n: number): Solved {
-  return {
-    t: new Float64Array(n + 1), pSat: new Float64Array(n + 1), zCum: new Float64Array(n + 1),
-    p: new Float64Array(n + 1), rate: new Float64Array(n + 1), pExt: 0, pInt: 0,
-  };
 }
 
 function interfaceLabel(a: ResolvedAssembly, k: number): string {
@@ -277,8 +332,10 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
       m.outdoor = { t_c: site.ground_t_c, rh: 100, p_v_pa: p };
     }
   }
-  const dry = new Uint8Array(n + 1);
-  const drySolved = months.map((m) => { const o = newSolved(n); solveMonth(a, s, m, dry, o); return o; });
+  const scratch = scratchFor(n);
+  const { dry, held, heldBy, rateBy, condensed, evaporated, total, wet } = scratch;
+  const pool = scratch.months;
+  const drySolved = months.map((m, i) => { const o = pool[i]; prepareMonth(a, s, m, o, i > 0 ? pool[i - 1] : null); solveVapour(a, s, dry, o); return o; });
   const condenses = drySolved.map((o, i) => {
     let g = 0;
     for (let k = 0; k <= n; k++) g += Math.max(0, o.rate[k]);
@@ -295,21 +352,14 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     startIdx = (warm + 1) % 12;
   }
 
-  const held = new Float64Array(n + 1);
-  const heldBy = new Float64Array(12 * (n + 1));
-  const rateBy = new Float64Array(12 * (n + 1));
-  const condensed = new Float64Array(12);
-  const evaporated = new Float64Array(12);
-  const total = new Float64Array(12);
-  const wet = new Uint8Array(n + 1);
-  const work = newSolved(n);
+  const work = pool[12];
   if (startIdx !== null) {
     for (let step = 0; step < 12; step++) {
       const mi = (startIdx + step) % 12;
       let anyWet = false;
       for (let k = 0; k <= n; k++) { wet[k] = held[k] > 0 ? 1 : 0; if (wet[k]) anyWet = true; }
       let o = drySolved[mi];
-      if (anyWet) { solveMonth(a, s, months[mi], wet, work); o = work; }
+      if (anyWet) { copySolved(o, work); solveVapour(a, s, wet, work); o = work; }
       const seconds = months[mi].days * SECONDS_PER_DAY;
       for (let k = 0; k <= n; k++) {
         const delta = o.rate[k] * seconds * KG_TO_G;

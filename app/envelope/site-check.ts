@@ -108,7 +108,10 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   };
 }
 
-export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary): SiteCheckResult {
+/** seasonal: false skips the 12-month balance (bulk screening, the design-day benchmark). */
+export interface SiteCheckOptions { seasonal?: boolean }
+
+export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary, options: SiteCheckOptions = {}): SiteCheckResult {
   const resolvedSite = resolveSite(site);
   const a = resolveAssembly(assembly, materials);
   const thermal = analyseThermal(a);
@@ -128,6 +131,6 @@ export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials
     code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
-    seasonal: seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),
+    seasonal: options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),
   };
 }

@@ -259,8 +259,9 @@ export interface SiteCheckResult {
   code: CodeResult;
   flags: Flag[];
   caution: string;
-  /** ISO 13788 monthly balance over the site year (monthly-balance.ts). */
-  seasonal: SeasonalResult;
+  /** ISO 13788 monthly balance over the site year (monthly-balance.ts); null when the caller asked
+   * for the design day only (runSiteCheck options.seasonal false). */
+  seasonal: SeasonalResult | null;
 }
 
 // Indoor method, site year, seasonal balance and Canada (indoor-climate.ts, climate-year.ts,

@@ -27,6 +27,12 @@ const twoLayerWall = { kind: "above-grade-wall" as const, layers: [
 ] };
 
 const year = (months: MonthInput[]) => ({ months });
+/** The 12-month balance of a full site check (runSiteCheck runs it unless told not to). */
+function seasonalOf(...args: Parameters<typeof runSiteCheck>) {
+  const s = runSiteCheck(...args).seasonal;
+  if (!s) throw new Error("the full check returned no seasonal balance");
+  return s;
+}
 const cold = { t_c: -5, rh: 80 };
 const mild = { t_c: 15, rh: 70 };
 
@@ -45,7 +51,7 @@ describe("two-layer wall, hand-derived accumulation (D: derived here, p_sat from
   //   = 27.186 g/(m²·day) → March 842.76 g/m² (735.65 left); April (30 d) could lose 815.58: dry in April.
   const site = { zone: "5A", indoor: { t_c: 20, rh: 50 } };
   const lib = twoLayer;
-  const r = runSiteCheck(twoLayerWall, { ...site, year: year([cold, cold, ...Array(10).fill(mild)]) }, lib).seasonal;
+  const r = seasonalOf(twoLayerWall, { ...site, year: year([cold, cold, ...Array(10).fill(mild)]) }, lib);
   const sat = (t: number) => psychrolib.GetSatVapPres(t);
   const f = (0.17 / 5.678263 + 0.5) / (0.17 / 5.678263 + 0.68 / 5.678263 + 3.5);
   const pI = 0.5 * sat(20);
@@ -76,7 +82,7 @@ describe("two-layer wall, hand-derived accumulation (D: derived here, p_sat from
     expect(r.months[2].interfaces[0].rate_g_m2_day).toBeCloseTo(-dryRate, 2);
   });
   test("the same wall with three cold months too many accumulates year on year", () => {
-    const wet = runSiteCheck(twoLayerWall, { ...site, year: year([...Array(11).fill(cold), mild]) }, lib).seasonal;
+    const wet = seasonalOf(twoLayerWall, { ...site, year: year([...Array(11).fill(cold), mild]) }, lib);
     expect(wet.verdict).toBe("accumulates");
     expect(wet.startMonth).toBe(1);
     // 334 cold days condense, December (31 d) dries 842.8 g/m²: 334·26.753 − 842.76 is held.
@@ -85,8 +91,12 @@ describe("two-layer wall, hand-derived accumulation (D: derived here, p_sat from
   });
 });
 
+test("the design day alone, on request, carries no seasonal balance", () => {
+  expect(runSiteCheck(twoLayerWall, { zone: "5A" }, twoLayer, { seasonal: false }).seasonal).toBeNull();
+});
+
 test("no condensing month: verdict no-condensation, nothing held, positive margins", () => {
-  const r = runSiteCheck(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 20 }, year: year(Array(12).fill(mild)) }, twoLayer).seasonal;
+  const r = seasonalOf(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 20 }, year: year(Array(12).fill(mild)) }, twoLayer);
   expect(r.verdict).toBe("no-condensation");
   expect(r.startMonth).toBeNull();
   expect(r.peak_g_m2).toBe(0);
@@ -97,7 +107,7 @@ describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 
   // f_Rsi = (R_T − Rsi)/R_T with R_T = 0.25 + 0.5 + 3.0 + 0.04 = 3.79 → 0.93404 (hand-derived, D).
   // January: indoor 20 °C / 50 % (1169.40 Pa); the surface may reach 1169.40/0.8 = 1461.75 Pa, whose dew
   // point is 12.628 °C (psychrolib GetTDewPointFromVapPres); f_Rsi,min = (12.628 − (−5))/25 = 0.7051.
-  const r = runSiteCheck(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 50 }, year: year([cold, cold, ...Array(10).fill(mild)]) }, twoLayer).seasonal;
+  const r = seasonalOf(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 50 }, year: year([cold, cold, ...Array(10).fill(mild)]) }, twoLayer);
   test("temperature factor of the plane wall and the month that asks most", () => {
     expect(r.surface.fRsi).toBeCloseTo(3.54 / 3.79, 5);
     expect(r.surface.fRsiMax).toBeCloseTo(0.7051, 3);
@@ -106,14 +116,14 @@ describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 
   });
   test("a thin uninsulated layer in a humid room fails", () => {
     const lib = libraryOf(layerMaterial("thin", 0.05, 10));
-    const bad = runSiteCheck({ kind: "above-grade-wall", layers: [{ role: "structure", material: "thin", thickness_mm: 10 }] }, { zone: "5A", indoor: { t_c: 20, rh: 60 }, year: year(Array(12).fill(cold)) }, lib).seasonal;
+    const bad = seasonalOf({ kind: "above-grade-wall", layers: [{ role: "structure", material: "thin", thickness_mm: 10 }] }, { zone: "5A", indoor: { t_c: 20, rh: 60 }, year: year(Array(12).fill(cold)) }, lib);
     expect(bad.surface.fRsi).toBeCloseTo(0.09 / 0.34, 5);
     expect(bad.surface.pass).toBe(false);
   });
 });
 
 test("months carry the indoor conditions actually used, by the site's indoor method (ASHRAE 160 simplified default)", () => {
-  const r = runSiteCheck(twoLayerWall, { zone: "5A", year: year([{ t_c: -12, rh: 80 }, { t_c: 5, rh: 70 }, ...Array(10).fill({ t_c: 25, rh: 60 })]) }, twoLayer).seasonal;
+  const r = seasonalOf(twoLayerWall, { zone: "5A", year: year([{ t_c: -12, rh: 80 }, { t_c: 5, rh: 70 }, ...Array(10).fill({ t_c: 25, rh: 60 })]) }, twoLayer);
   expect(r.indoorMethod).toBe("ashrae-160-simplified");
   expect(r.months[0].indoor).toMatchObject({ t_c: 21, rh: 40 });
   expect(r.months[1].indoor.rh).toBeCloseTo(55, 9);
@@ -138,7 +148,7 @@ describe("properties (fast-check)", () => {
   test("a constant heating-season climate condenses every month at the design-day winter rate (the design-day Glaser result)", () => {
     fc.assert(fc.property(wallArb, heatingMonthArb, indoorArb, (wall, m, indoor) => {
       const input = { zone: "5A", winter: m, indoor: { ...indoor, summer_t_c: 30 }, year: year(Array(12).fill(m)) };
-      const r = runSiteCheck(wall, input, lib);
+      const r = { seasonal: seasonalOf(wall, input, lib) };
       const design = computeProfile(resolveAssembly(wall, lib), winterCase(resolveAssembly(wall, lib), resolveSite(input))).rate_g_m2_day;
       for (const month of r.seasonal.months) {
         expect(month.condensed_g_m2 / month.days).toBeCloseTo(design, 6);
@@ -150,7 +160,7 @@ describe("properties (fast-check)", () => {
 
   test("water held is never negative, and condensed minus evaporated equals what is held", () => {
     fc.assert(fc.property(wallArb, fc.array(monthArb, { minLength: 12, maxLength: 12 }), indoorArb, (wall, months, indoor) => {
-      const r = runSiteCheck(wall, { zone: "5A", indoor, year: year(months) }, lib).seasonal;
+      const r = seasonalOf(wall, { zone: "5A", indoor, year: year(months) }, lib);
       if (r.startMonth === null) return;
       let balance = 0;
       for (let step = 0; step < 12; step++) {
@@ -179,8 +189,8 @@ describe("variable-permeance retarder at each month's humidity (real library)", 
   ] });
   const site = { zone: "6A", hdd18: 4500, cdd10: 900 };
   test("it holds less winter water than no retarder, and the months record what was used", () => {
-    const open = runSiteCheck(wall("latex-paint"), site, lib).seasonal;
-    const variable = runSiteCheck(wall("variable-permeance-retarder"), site, lib).seasonal;
+    const open = seasonalOf(wall("latex-paint"), site, lib);
+    const variable = seasonalOf(wall("variable-permeance-retarder"), site, lib);
     expect(open.peak_g_m2).toBeGreaterThan(0);
     expect(variable.peak_g_m2).toBeLessThan(open.peak_g_m2);
     expect(variable.climate.source).toBe("generated");
@@ -191,8 +201,8 @@ test("a typed year and a CSV year give the same balance", () => {
   const months = [cold, cold, ...Array(10).fill(mild)] as MonthInput[];
   const csv = ["month,temperature_c,rh_percent", ...months.map((m, i) => `${i + 1},${m.t_c},${m.rh}`)].join("\n");
   const site = { zone: "5A", indoor: { t_c: 20, rh: 50 } };
-  const typed = runSiteCheck(twoLayerWall, { ...site, year: { months } }, twoLayer).seasonal;
-  const fromCsv = runSiteCheck(twoLayerWall, { ...site, year: { csv } }, twoLayer).seasonal;
+  const typed = seasonalOf(twoLayerWall, { ...site, year: { months } }, twoLayer);
+  const fromCsv = seasonalOf(twoLayerWall, { ...site, year: { csv } }, twoLayer);
   expect(fromCsv.climate.source).toBe("csv");
   expect(typed.climate.source).toBe("typed");
   expect(fromCsv.months).toEqual(typed.months);
@@ -205,7 +215,7 @@ test("below grade: the soil face is saturated at the ground temperature all year
     { role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "softwood-lumber", fraction: 0.15 } },
     { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
   ] };
-  const r = runSiteCheck(wall, { zone: "6A", hdd18: 4500, cdd10: 900 }, lib).seasonal;
+  const r = seasonalOf(wall, { zone: "6A", hdd18: 4500, cdd10: 900 }, lib);
   const y: ClimateYear = r.climate;
   expect(y.months).toHaveLength(12);
   for (const m of r.months) expect(m.outdoor).toMatchObject({ rh: 100 });
