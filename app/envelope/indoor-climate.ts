@@ -6,6 +6,8 @@
 // Breakpoints (all from memory: verify against the printed standards before relying on them):
 // - ASHRAE Standard 160-2016 §4.3.1.1, simplified method: 40 % RH when the outdoor (24-hour running
 //   mean) temperature is at or below −10 °C, 70 % at or above 20 °C, linear between.
+//   docs/references.md §7.2 notes 25 % at −10 °C (also from memory); the two memories disagree and
+//   40 % is kept because it is the wetter, safer design condition until the printed text settles it.
 // - EN 15026:2007 Annex C (Figure C.1), normal occupancy: 30 % at or below −10 °C, 60 % at or above
 //   20 °C, linear between; high occupancy: 40 % → 70 % over the same range.
 // - ISO 13788:2012 Annex A, internal humidity classes: indoor vapour pressure excess Δp over outdoors
