@@ -13,6 +13,7 @@ trap cleanup EXIT INT TERM
 
 log "site-check engine"
 npx tsx scripts/bench-site-check.ts
+npx tsx scripts/bench/seasonal-check.ts
 
 export DB_PORT=$(free_port) DB_NAME=bench DB_USER=root DB_PASSWORD=""
 export SESSION_SECRET=bench-secret-bench-secret-bench-secret

@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 
-import { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS } from "./vocabularies";
+import { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, EXPOSURES, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS } from "./vocabularies";
 
-export { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS };
+export { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, EXPOSURES, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS };
 
 /** Lower-case words joined by single hyphens: the shape of every slug. */
 export const slugSchema = z
@@ -29,6 +29,7 @@ export const layerSchema = z.strictObject({
   note: z.string().min(1).max(200).optional(),
   adhesive: z.enum(ADHESIVES).optional(),
   exposed: z.boolean().optional(),
+  exposure: z.enum(EXPOSURES).optional(),
   framing: framingSchema.optional(),
 });
 

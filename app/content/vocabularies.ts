@@ -23,3 +23,5 @@ export const LAYER_ROLES = [
 ] as const;
 export const JOINT_TREATMENTS = ["taped", "lapped", "sealed"] as const;
 export const ADHESIVES = ["solvent-based", "water-based", "mechanical"] as const;
+/** What a layer's open face meets (the site check's rules read it; app/envelope/types.ts EXPOSURES). */
+export const EXPOSURES = ["interior", "service-space", "weather", "soil"] as const;

@@ -2,8 +2,12 @@
 // HDD 18 °C and CDD 10 °C; REFERENCES §6.3), moisture regimes, Canada NBC 9.36 zones,
 // and the design-condition defaults used when a site gives only its zone.
 import { SiteCheckInputError } from "./errors";
-import type {
-  ClimateNormals, CodeEdition, MoistureRegime, NbcZone, ResolvedSite, SiteInput, ZoneId,
+import { checkIndoorMethod, DEFAULT_INDOOR_METHOD, indoorBasis, indoorHumidity } from "./indoor-climate";
+import { NBC_EDITION, NBC_ZONE_BANDS, PROVINCE_REFERENCE } from "./nbc-tables";
+import {
+  PROVINCES,
+  type CanadianSite, type ClimateNormals, type CodeEdition, type MoistureRegime, type NbcZone, type ResolvedSite,
+  type SiteInput, type ZoneId,
 } from "./types";
 import { degreeDaysFToC } from "./units";
 import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
@@ -93,13 +97,44 @@ const SUMMER_RH: Record<MoistureRegime | "none", number> = { A: 60, B: 25, C: 55
 export const CLADDING_SOLAR_RISE_K = 15;
 export const DEFAULT_INDOOR = { t_c: 21, summer_t_c: 24, summer_rh: 50 } as const;
 
-/** Default winter indoor RH by ASHRAE 160's simplified method: 25 % at or below −10 °C outdoors,
- * 70 % at or above 20 °C, linear between (REFERENCES §7.2 note, M). Drier indoor air in cold
- * weather is what houses actually see; a fixed 40 % overstates design-day condensation. */
-export function ashrae160IndoorRh(outdoorC: number): number {
-  if (outdoorC <= -10) return 25;
-  if (outdoorC >= 20) return 70;
-  return 25 + ((outdoorC + 10) * 45) / 30;
+/** A Canadian site: a province or territory, an NBC zone, or country "CA" with degree-days. Its
+ * HDD comes from the site, else the province's reference place, else the cold end of the zone's band
+ * (the safe side). Null for other sites. */
+export function resolveCanada(site: SiteInput): CanadianSite | null {
+  if (site.country !== undefined && site.country !== "US" && site.country !== "CA") {
+    throw new SiteCheckInputError("country", `country must be "US" or "CA" (got "${String(site.country)}")`);
+  }
+  if (site.province !== undefined && !(PROVINCES as readonly string[]).includes(site.province)) {
+    throw new SiteCheckInputError("province", `"${String(site.province)}" is not a province or territory code; use one of ${PROVINCES.join(", ")}`);
+  }
+  if (site.nbcZone !== undefined && !(site.nbcZone in NBC_ZONE_BANDS)) {
+    throw new SiteCheckInputError("nbcZone", `"${String(site.nbcZone)}" is not an NBC climate zone; use 4, 5, 6, 7A, 7B or 8`);
+  }
+  const canadian = site.country === "CA" || site.province !== undefined || site.nbcZone !== undefined;
+  if (!canadian) return null;
+  if (site.country === "US") {
+    throw new SiteCheckInputError("country", "a province or NBC zone was given with country \"US\"; use \"CA\" for a Canadian site");
+  }
+  const given = site.hdd18 ?? (site.hdd65 !== undefined ? degreeDaysFToC(site.hdd65) : undefined);
+  const province = site.province ?? null;
+  let hdd18: number;
+  let hddSource: CanadianSite["hddSource"];
+  let place: string | null = null;
+  if (given !== undefined) {
+    hdd18 = given;
+    hddSource = "given";
+  } else if (site.nbcZone !== undefined) {
+    hdd18 = NBC_ZONE_BANDS[site.nbcZone].coldEnd;
+    hddSource = "nbc-zone";
+  } else if (province !== null) {
+    hdd18 = PROVINCE_REFERENCE[province].hdd18;
+    place = PROVINCE_REFERENCE[province].place;
+    hddSource = "province";
+  } else {
+    throw new SiteCheckInputError("hdd18", "a Canadian site needs a province, an NBC zone or heating degree-days below 18 °C");
+  }
+  const nbcZone = site.nbcZone ?? nbcZoneFromHdd(hdd18);
+  return { province, nbcZone, hdd18, hddSource, place, edition: NBC_EDITION };
 }
 
 /** The given value, or the default (recorded as defaulted so the page can say "assumed"). */
@@ -117,12 +152,28 @@ function checkNumber(value: number | undefined, field: string, min: number, max:
 }
 
 /** Fills in the zone (from degree-days where not given) and every design default. */
-export function resolveSite(site: SiteInput): ResolvedSite {
+export function resolveSite(input: SiteInput): ResolvedSite {
+  let site = input;
   if (site === null || typeof site !== "object") {
     throw new SiteCheckInputError("site", "a site (zone or degree-days) is required");
   }
   const defaulted: string[] = [];
   const notes: string[] = [];
+  const canada = resolveCanada(site);
+  if (canada) {
+    // Canadian sites resolve the US zone (for the design defaults) from the same HDD; most of Canada
+    // is zone 6 or colder, and a moist regime is assumed where none is given.
+    if (canada.hddSource !== "given") site = { ...site, hdd18: canada.hdd18, hdd65: undefined };
+    if (site.zone === undefined && site.moisture === undefined && !site.normals) {
+      site = { ...site, moisture: "A" };
+      defaulted.push("moisture");
+    }
+    if (site.nbcZone !== undefined && site.hdd18 !== undefined && canada.hddSource === "given" && nbcZoneFromHdd(site.hdd18) !== site.nbcZone) {
+      notes.push(`The degree-days given point to NBC zone ${nbcZoneFromHdd(site.hdd18)}; NBC zone ${site.nbcZone} as given is used.`);
+    }
+    if (canada.hddSource === "province") notes.push(`Heating degree-days ${canada.hdd18} are ${canada.place}'s (NBC Appendix C, from memory); enter the site's own for a site elsewhere in the province.`);
+    if (canada.hddSource === "nbc-zone") notes.push(`Heating degree-days ${canada.hdd18} are the cold end of NBC zone ${canada.nbcZone}; enter the site's own.`);
+  }
   checkNumber(site.hdd18, "hdd18", 0, 20000, "heating degree-days (18 °C base)");
   checkNumber(site.cdd10, "cdd10", 0, 12000, "cooling degree-days (10 °C base)");
   checkNumber(site.hdd65, "hdd65", 0, 36000, "heating degree-days (65 °F base)");
@@ -183,6 +234,7 @@ export function resolveSite(site: SiteInput): ResolvedSite {
   checkNumber(site.indoor?.rh, "indoor.rh", 0, 100, "indoor RH (%)");
   checkNumber(site.indoor?.summer_t_c, "indoor.summer_t_c", 5, 35, "indoor summer temperature (°C)");
   checkNumber(site.indoor?.summer_rh, "indoor.summer_rh", 0, 100, "indoor summer RH (%)");
+  const indoorMethod = site.indoor?.method === undefined ? DEFAULT_INDOOR_METHOD : checkIndoorMethod(site.indoor.method);
   if (site.edition !== undefined && site.edition !== "IECC/IRC 2021" && site.edition !== "IECC/IRC 2018") {
     throw new SiteCheckInputError("edition", `code edition must be "IECC/IRC 2021" or "IECC/IRC 2018"`);
   }
@@ -192,6 +244,11 @@ export function resolveSite(site: SiteInput): ResolvedSite {
   const summerT = SUMMER_T_C[zn] - (regime === "C" ? 6 : 0);
   const summer_t_c = pick(defaulted, site.summer?.t_c, summerT, "summer.t_c");
   const winter_t_c = pick(defaulted, site.winter?.t_c, winterT, "winter.t_c");
+  const winter_rh = pick(defaulted, site.winter?.rh, 80, "winter.rh");
+  const indoor_t_c = pick(defaulted, site.indoor?.t_c, DEFAULT_INDOOR.t_c, "indoor.t_c");
+  // Winter indoor RH: as given, else by the indoor method at the winter design temperature.
+  const indoorRh = site.indoor?.rh ?? indoorHumidity(indoorMethod, { t_c: winter_t_c, rh: winter_rh }, indoor_t_c).rh;
+  if (site.indoor?.rh === undefined) defaulted.push("indoor.rh");
   const edition: CodeEdition = site.edition ?? "IECC/IRC 2021";
   if (site.edition === undefined) defaulted.push("edition");
 
@@ -202,8 +259,8 @@ export function resolveSite(site: SiteInput): ResolvedSite {
     zoneSource,
     hdd18: hdd18 ?? null,
     cdd10: cdd10 ?? null,
-    nbcZone: hdd18 !== undefined ? nbcZoneFromHdd(hdd18) : null,
-    winter: { t_c: winter_t_c, rh: pick(defaulted, site.winter?.rh, 80, "winter.rh") },
+    nbcZone: canada ? canada.nbcZone : hdd18 !== undefined ? nbcZoneFromHdd(hdd18) : null,
+    winter: { t_c: winter_t_c, rh: winter_rh },
     summer: {
       t_c: summer_t_c,
       rh: pick(defaulted, site.summer?.rh, SUMMER_RH[regime ?? "none"], "summer.rh"),
@@ -211,12 +268,17 @@ export function resolveSite(site: SiteInput): ResolvedSite {
     },
     ground_t_c: pick(defaulted, site.ground_t_c, GROUND_T_C[zn], "ground_t_c"),
     indoor: {
-      t_c: pick(defaulted, site.indoor?.t_c, DEFAULT_INDOOR.t_c, "indoor.t_c"),
-      rh: pick(defaulted, site.indoor?.rh, ashrae160IndoorRh(winter_t_c), "indoor.rh"),
+      t_c: indoor_t_c,
+      rh: indoorRh,
       summer_t_c: pick(defaulted, site.indoor?.summer_t_c, DEFAULT_INDOOR.summer_t_c, "indoor.summer_t_c"),
       summer_rh: pick(defaulted, site.indoor?.summer_rh, DEFAULT_INDOOR.summer_rh, "indoor.summer_rh"),
+      method: site.indoor?.rh !== undefined ? "given" : indoorMethod,
+      basis: indoorBasis(site.indoor?.rh !== undefined ? "given" : indoorMethod, { t_c: indoor_t_c, rh: indoorRh }, winter_t_c),
     },
     edition,
+    country: canada ? "CA" : "US",
+    canada,
+    preferredUnits: canada ? "SI" : "IP",
     defaulted,
     notes,
   };

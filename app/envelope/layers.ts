@@ -2,7 +2,7 @@
 // so the thermal, vapour and rule modules work on trusted numbers.
 import { MaterialDataError, SiteCheckInputError } from "./errors";
 import { lookupMaterial, type Material, type MaterialLibrary } from "./material-schema";
-import { ASSEMBLY_KINDS, type AssemblyInput, type AssemblyKind, type LayerInput } from "./types";
+import { ASSEMBLY_KINDS, EXPOSURES, type AssemblyInput, type AssemblyKind, type LayerInput } from "./types";
 
 export interface ResolvedLayer {
   index: number;
@@ -62,6 +62,9 @@ export function resolveAssembly(assembly: AssemblyInput, library: MaterialLibrar
     if (input.adhesive !== undefined && !ADHESIVES.includes(input.adhesive)) {
       throw new SiteCheckInputError(`${at}.adhesive`, `adhesive must be one of ${ADHESIVES.join(", ")}`);
     }
+    if (input.exposure !== undefined && !(EXPOSURES as readonly string[]).includes(input.exposure)) {
+      throw new SiteCheckInputError(`${at}.exposure`, `exposure must be one of ${EXPOSURES.join(", ")}`);
+    }
     let framing: ResolvedLayer["framing"] = null;
     if (input.framing !== undefined) {
       const f = input.framing.fraction;
@@ -87,10 +90,53 @@ function checkMaterialNumbers(m: Material): void {
   if (!Number.isFinite(p) || p <= 0) throw new MaterialDataError(m.slug, "needs a positive permeance_ng");
 }
 
-/** RSI of a material at a thickness. */
+/** RSI of a material at a thickness (rated conductivity). */
 export function materialRsi(m: Material, thickness_mm: number): number {
   if (m.thermal.rsi_fixed !== undefined) return m.thermal.rsi_fixed;
   return thickness_mm / 1000 / (m.thermal.conductivity_w_mk as number);
+}
+
+export function hasTemperatureDependentConductivity(m: Material): boolean {
+  return m.thermal.by_mean_temperature !== undefined;
+}
+
+/** Conductivity at a mean temperature: linear between the published points, flat beyond them. */
+export function conductivityAt(m: Material, mean_t_c: number): number {
+  const curve = m.thermal.by_mean_temperature;
+  if (!curve) return m.thermal.conductivity_w_mk as number;
+  const pts = curve.points;
+  if (mean_t_c <= pts[0][0]) return pts[0][1];
+  for (let i = 1; i < pts.length; i++) {
+    if (mean_t_c <= pts[i][0]) {
+      const [t0, k0] = pts[i - 1];
+      const [t1, k1] = pts[i];
+      return k0 + ((k1 - k0) * (mean_t_c - t0)) / (t1 - t0);
+    }
+  }
+  return pts[pts.length - 1][1];
+}
+
+/** RSI of a material at a thickness and a mean temperature (rated where no curve is given). */
+export function materialRsiAt(m: Material, thickness_mm: number, mean_t_c: number): number {
+  if (m.thermal.rsi_fixed !== undefined || !m.thermal.by_mean_temperature) return materialRsi(m, thickness_mm);
+  return thickness_mm / 1000 / conductivityAt(m, mean_t_c);
+}
+
+/** Innermost ventilated cavity (a vented air space used as a drainage gap: a rainscreen, a vented
+ * attic), or −1. A cavity with nothing inboard of it leaves no stack to analyse and is ignored.
+ * Layers outboard of it are outdoors for heat and vapour. */
+export function ventedCavityIndex(a: ResolvedAssembly): number {
+  let idx = -1;
+  for (const l of a.layers) if (l.material.family === "air-space" && l.input.role === "drainage-gap") idx = l.index;
+  return idx < a.layers.length - 1 ? idx : -1;
+}
+
+const lowerNames = new WeakMap<Material, string>();
+/** Material name in lower case for running text (cached: the library's materials are reused). */
+export function lowerName(m: Material): string {
+  let name = lowerNames.get(m);
+  if (name === undefined) { name = m.name.toLowerCase(); lowerNames.set(m, name); }
+  return name;
 }
 
 /** Insulation families: counted as cavity or continuous insulation in the code rows. */

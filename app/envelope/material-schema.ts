@@ -17,15 +17,33 @@ const sourceWithStatus = z
 
 const positive = z.number().finite().positive();
 
+/** Conductivity against the layer's mean temperature, for insulations whose R falls in the cold
+ * (some polyisocyanurate boards): [mean °C, W/(m·K)], temperatures rising strictly. */
+const byMeanTemperatureSchema = z
+  .object({
+    points: z.array(z.tuple([z.number().finite().min(-60).max(80), positive])).min(2),
+    source: sourceWithStatus,
+  })
+  .strict()
+  .refine((c) => c.points.every((p, i, a) => i === 0 || p[0] > a[i - 1][0]), {
+    message: "mean temperatures must rise strictly",
+    path: ["points"],
+  });
+
 const thermalSchema = z
   .object({
     conductivity_w_mk: positive.optional(),
     rsi_fixed: z.number().finite().min(0).optional(),
     source: sourceWithStatus,
+    by_mean_temperature: byMeanTemperatureSchema.optional(),
   })
   .strict()
   .refine((t) => (t.conductivity_w_mk === undefined) !== (t.rsi_fixed === undefined), {
     message: "give exactly one of conductivity_w_mk or rsi_fixed",
+  })
+  .refine((t) => t.by_mean_temperature === undefined || t.conductivity_w_mk !== undefined, {
+    message: "by_mean_temperature needs conductivity_w_mk (the rated value)",
+    path: ["by_mean_temperature"],
   });
 
 const curvePoint = z.tuple([z.number().finite().min(0).max(100), positive]);

@@ -4,12 +4,15 @@
 // from the outdoor to the indoor vapour pressure that stays at or below saturation: the lower
 // convex hull of the saturation points. Each bend of the string is a condensation plane; the
 // condensation rate there is the vapour flow arriving minus the flow leaving.
-import { isInsulation, type ResolvedAssembly, type ResolvedLayer } from "./layers";
+// The profile runs along the clear-cavity path (framed layers conduct and pass vapour through
+// their fill only): in winter that is the coldest sheathing, the worst case. The stud path's
+// temperatures are reported beside it.
+import { hasTemperatureDependentConductivity, isInsulation, lowerName, materialRsi, materialRsiAt, type ResolvedAssembly } from "./layers";
 import { dewPointFromVapourPressure, saturationPressure } from "./psychrometrics";
-import { filmsFor, isBelowGrade, seriesRsi, type Season } from "./thermal";
+import { filmsFor, isBelowGrade, type HeatPath, type Season } from "./thermal";
 import type { CondensationPlane, ProfileCase, ProfileInterface, VapourLayer } from "./types";
-import { cToF, kgPerSToGPerDay, ngToPerm } from "./units";
-import { isRhDependent, layerPermeance, retarderClass } from "./vapour";
+import { cToF, kgPerSToGPerDay, ngToPerm, rsiToRip } from "./units";
+import { cavityPermeance, dryPermeances, isRhDependent, retarderClass } from "./vapour";
 
 /** Boundary conditions of one case. */
 export interface CaseConditions {
@@ -30,11 +33,22 @@ export interface CaseConditions {
   saturatedSource?: boolean;
   /** Air whose dew point the margin is measured against (indoor in winter, outdoor in summer). */
   source: "interior" | "exterior";
+  /** Exterior film RSI where the kind's own does not apply (the above-grade band of a
+   * below-grade wall faces outdoor air). */
+  exteriorFilmRsi?: number;
+  /** Sentences the result repeats about how this case was modelled. */
+  notes?: string[];
 }
 
 const NG_TO_KG = 1e-12;
-const MAX_RH_ITERATIONS = 8;
-const RH_SETTLED = 0.02;
+/** RH-dependent permeance: passes over the condensation-corrected profile until every such layer
+ * moves less than 0.5 %; after a few passes the update is damped (geometric mean) so a layer that
+ * flips a nearby plane on and off settles instead of oscillating. */
+const MAX_RH_ITERATIONS = 40;
+const RH_SETTLED = 0.005;
+const RH_DAMP_AFTER = 4;
+const MAX_T_ITERATIONS = 20;
+const T_SETTLED = 1e-4;
 
 /** A point of the Glaser diagram; k is the interface index, or −1 for a boundary air state. */
 interface Point { z: number; p: number; k: number }
@@ -56,18 +70,38 @@ function lowerHull(points: readonly Point[]): Point[] {
   return hull;
 }
 
-function interfaceLabels(a: ResolvedAssembly): string[] {
-  const n = a.layers.length;
-  const names = a.layers.map((l) => l.material.name.toLowerCase());
-  const below = isBelowGrade(a.kind);
-  const labels = [`${below ? "soil-side face" : "exterior face"} of ${names[0]}`];
-  for (let i = 1; i < n; i++) labels.push(`${names[i - 1]} / ${names[i]}`);
-  labels.push(`interior face of ${names[n - 1]}`);
-  return labels;
+/** Adds pt to points sorted by z, keeping one point per z: the lowest pressure, the boundary air
+ * state on a tie (so a surface exactly at saturation is not a plane). */
+function pushByZ(points: Point[], pt: Point): void {
+  const last = points[points.length - 1];
+  if (last !== undefined && last.z === pt.z) {
+    if (pt.p < last.p || (pt.p === last.p && pt.k < last.k)) points[points.length - 1] = pt;
+    return;
+  }
+  points.push(pt);
 }
 
-function resistsVapour(l: ResolvedLayer): boolean {
-  return retarderClass(layerPermeance(l)) !== "permeable";
+/** The Glaser string over (z, p_sat) between the two boundary vapour pressures. zCum rises
+ * monotonically, so the points arrive sorted. */
+function glaserString(zCum: readonly number[], pSat: readonly number[], pExt: number, pInt: number): Point[] {
+  const n = zCum.length - 1;
+  const pts: Point[] = [{ z: 0, p: pExt, k: -1 }];
+  for (let k = 0; k <= n; k++) pushByZ(pts, { z: zCum[k], p: pSat[k], k });
+  pushByZ(pts, { z: zCum[n], p: pInt, k: -1 });
+  return lowerHull(pts);
+}
+
+const labelCache = new WeakMap<ResolvedAssembly, string[]>();
+function interfaceLabels(a: ResolvedAssembly): string[] {
+  const cached = labelCache.get(a);
+  if (cached) return cached;
+  const n = a.layers.length;
+  const names = a.layers.map((l) => lowerName(l.material));
+  const labels = [`${isBelowGrade(a.kind) ? "soil-side face" : "exterior face"} of ${names[0]}`];
+  for (let i = 1; i < n; i++) labels.push(`${names[i - 1]} / ${names[i]}`);
+  labels.push(`interior face of ${names[n - 1]}`);
+  labelCache.set(a, labels);
+  return labels;
 }
 
 /** Vapour pressure on the Glaser string at cumulative resistance z. */
@@ -86,82 +120,121 @@ function hullAt(hull: readonly Point[], z: number): number {
  * inner face of the first vapour-resisting layer (≤ 10 perm) outboard of the innermost
  * insulation; in summer the outer face of the first such layer inboard of the outermost
  * insulation (e.g. interior polyethylene). */
-function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number): number {
+function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number, dry: readonly number[]): number {
   const n = a.layers.length;
-  const insulation = a.layers.filter(isInsulation).map((l) => l.index);
+  const resists = (i: number) => retarderClass(dry[i]) !== "permeable";
+  let innermost = -1;
+  let outermost = -1;
+  for (const l of a.layers) if (isInsulation(l)) { innermost = l.index; if (outermost < 0) outermost = l.index; }
   if (season === "winter") {
-    const innermost = insulation.length ? Math.max(...insulation) : n - 1;
-    for (let i = innermost - 1; i >= vapourStart; i--) if (resistsVapour(a.layers[i])) return i + 1; // inner face of layer i
+    if (innermost < 0) innermost = n - 1;
+    for (let i = innermost - 1; i >= vapourStart; i--) if (resists(i)) return i + 1; // inner face of layer i
     return Math.max(vapourStart, Math.min(innermost, n - 1));
   }
-  const outermost = insulation.length ? Math.min(...insulation) : 0;
-  for (let i = outermost + 1; i < n; i++) if (resistsVapour(a.layers[i])) return i; // outer face of layer i
+  if (outermost < 0) outermost = 0;
+  for (let i = outermost + 1; i < n; i++) if (resists(i)) return i; // outer face of layer i
   return n - 1;
+}
+
+interface PathTemperatures { t: number[]; layerR: number[]; coldAdjusted: number[] }
+
+/** Interface temperatures along one heat path. Insulations with a conductivity curve are taken at
+ * their own mean temperature, which depends on the profile: iterate until their RSI settles. */
+function pathTemperatures(a: ResolvedAssembly, c: CaseConditions, path: HeatPath, extFilm: number, intFilm: number, thermalStart: number): PathTemperatures {
+  const n = a.layers.length;
+  const layerR = new Array<number>(n);
+  const curved: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const l = a.layers[i];
+    const m = l.framing && path === "stud" ? l.framing.material : l.material;
+    layerR[i] = i < thermalStart ? 0 : materialRsi(m, l.thickness_mm);
+    if (i >= thermalStart && hasTemperatureDependentConductivity(m)) curved.push(i);
+  }
+  const t = new Array<number>(n + 1);
+  const dT = c.interior.t_c - c.exterior.t_c;
+  for (let pass = 0; ; pass++) {
+    let total = extFilm + intFilm;
+    for (let i = 0; i < n; i++) total += layerR[i];
+    let r = extFilm;
+    for (let k = 0; k <= n; k++) {
+      t[k] = c.exterior.t_c + (dT * r) / total;
+      if (k < n) r += layerR[k];
+    }
+    if (curved.length === 0 || pass + 1 >= MAX_T_ITERATIONS) break;
+    let settled = true;
+    for (const i of curved) {
+      const l = a.layers[i];
+      const m = l.framing && path === "stud" ? l.framing.material : l.material;
+      const next = materialRsiAt(m, l.thickness_mm, (t[i] + t[i + 1]) / 2);
+      if (Math.abs(next - layerR[i]) > T_SETTLED * layerR[i]) settled = false;
+      layerR[i] = next;
+    }
+    if (settled) break;
+  }
+  return { t, layerR, coldAdjusted: curved };
 }
 
 export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileCase {
   const n = a.layers.length;
   const labels = interfaceLabels(a);
-  const series = seriesRsi(a, c.name);
   const films = filmsFor(a.kind, c.name);
   const thermalStart = c.thermalStart ?? 0;
-  const extFilm = c.fixedSurface ? 0 : thermalStart > 0 ? films.interior.rsi : films.exterior ? series.exterior : 0;
-  const layerR = series.layers.map((rsi, i) => (i < thermalStart ? 0 : rsi));
-  const total = extFilm + series.interior + layerR.reduce((s, rsi) => s + rsi, 0);
+  const extFilm = c.fixedSurface ? 0 : c.exteriorFilmRsi ?? (thermalStart > 0 ? films.interior.rsi : films.exterior?.rsi ?? 0);
+  const notes = c.notes ? c.notes.slice() : [];
 
-  // Temperatures and positions at the n + 1 interfaces.
-  const t: number[] = [];
-  const pos: number[] = [];
-  let r = extFilm;
+  const { t, layerR, coldAdjusted } = pathTemperatures(a, c, "clear-cavity", extFilm, films.interior.rsi, thermalStart);
+  const framed = a.layers.some((l, i) => l.framing !== null && i >= thermalStart);
+  const stud = framed ? pathTemperatures(a, c, "stud", extFilm, films.interior.rsi, thermalStart) : null;
+  for (const i of coldAdjusted) {
+    const l = a.layers[i];
+    const rated = materialRsi(l.material, l.thickness_mm);
+    notes.push(`The ${lowerName(l.material)} is taken at its mean temperature of ${((t[i] + t[i + 1]) / 2).toFixed(1)} °C: R-${rsiToRip(layerR[i]).toFixed(1)} instead of its rated R-${rsiToRip(rated).toFixed(1)}.`);
+  }
+
+  const pos = new Array<number>(n + 1);
   let x = 0;
-  const dT = c.interior.t_c - c.exterior.t_c;
   for (let k = 0; k <= n; k++) {
-    t.push(c.exterior.t_c + (dT * r) / total);
-    pos.push(Math.round(x * 1e6) / 1e6); // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
-    if (k < n) { r += layerR[k]; x += a.layers[k].thickness_mm; }
+    pos[k] = Math.round(x * 1e6) / 1e6; // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
+    if (k < n) x += a.layers[k].thickness_mm;
   }
   const pSat = t.map(saturationPressure);
   const pExt = c.saturatedSource ? pSat[c.vapourStart] : c.exterior.p_v_pa;
+  const pInt = c.interior.p_v_pa;
 
-  // Permeances: RH-dependent layers are evaluated at the mean RH of their two faces, found by
-  // a few passes over the uncondensed profile (it settles quickly; 2 % is far inside the
-  // spread of the published curves).
-  const dependent = a.layers.map((l) => isRhDependent(l.material) || (l.framing !== null && isRhDependent(l.framing.material)));
+  // Permeances along the clear-cavity path. RH-dependent layers are evaluated at the mean RH of
+  // their two faces on the condensation-corrected profile (a condensing face is at 100 %), which
+  // itself depends on them: iterate to a fixed point.
+  const dependent = a.layers.map((l) => isRhDependent(l.material));
   const anyDependent = dependent.includes(true);
   const startRh = (c.interior.rh + c.exterior.rh) / 2;
-  const perms = a.layers.map((l, i) => (dependent[i] ? layerPermeance(l, startRh) : layerPermeance(l)));
-  let zCum: number[] = [];
-  let pLinear: number[] = [];
+  const perms = a.layers.map((l, i) => (dependent[i] ? cavityPermeance(l, startRh) : cavityPermeance(l)));
+  const zCum = new Array<number>(n + 1);
+  const pLinear = new Array<number>(n + 1);
+  const pv = new Array<number>(n + 1);
+  let hull: Point[] = [];
+  let converged = true;
   for (let pass = 0; ; pass++) {
-    zCum = [0];
-    for (let i = 0; i < n; i++) zCum.push(zCum[i] + (i < c.vapourStart ? 0 : 1 / (perms[i] * NG_TO_KG)));
+    zCum[0] = 0;
+    for (let i = 0; i < n; i++) zCum[i + 1] = zCum[i] + (i < c.vapourStart ? 0 : 1 / (perms[i] * NG_TO_KG));
     const zTot = zCum[n];
-    pLinear = zCum.map((z) => pExt + ((c.interior.p_v_pa - pExt) * z) / zTot);
-    if (!anyDependent || pass + 1 >= MAX_RH_ITERATIONS) break;
+    for (let k = 0; k <= n; k++) pLinear[k] = pExt + ((pInt - pExt) * zCum[k]) / zTot;
+    hull = glaserString(zCum, pSat, pExt, pInt);
+    for (let k = 0; k <= n; k++) pv[k] = Math.min(hullAt(hull, zCum[k]), pLinear[k]);
+    if (!anyDependent) break;
     let settled = true;
     const next = perms.slice();
     for (let i = 0; i < n; i++) {
       if (!dependent[i]) continue;
-      const rh = (Math.min(100, (100 * pLinear[i]) / pSat[i]) + Math.min(100, (100 * pLinear[i + 1]) / pSat[i + 1])) / 2;
-      next[i] = layerPermeance(a.layers[i], rh);
+      const rh = (Math.min(100, (100 * pv[i]) / pSat[i]) + Math.min(100, (100 * pv[i + 1]) / pSat[i + 1])) / 2;
+      next[i] = cavityPermeance(a.layers[i], rh);
       if (Math.abs(next[i] - perms[i]) > RH_SETTLED * perms[i]) settled = false;
     }
-    // Stop when settled; the profile above was computed with the permeances reported.
+    // Stop when settled: the profile above was computed with the permeances reported.
     if (settled) break;
-    for (let i = 0; i < n; i++) perms[i] = next[i];
+    if (pass + 1 >= MAX_RH_ITERATIONS) { converged = false; break; }
+    for (let i = 0; i < n; i++) if (dependent[i]) perms[i] = pass < RH_DAMP_AFTER ? next[i] : Math.sqrt(next[i] * perms[i]);
   }
-  const zTot = zCum[n];
-
-  // Glaser string: hull over (z, p_sat) with the two boundary vapour pressures; at equal z keep the
-  // lowest pressure (surfaces share z with their air when films carry no vapour resistance).
-  const candidates: Point[] = [{ z: 0, p: pExt, k: -1 }, { z: zTot, p: c.interior.p_v_pa, k: -1 }];
-  for (let k = 0; k <= n; k++) candidates.push({ z: zCum[k], p: pSat[k], k });
-  // Ties: the boundary air state first, so a surface exactly at saturation is not a plane.
-  candidates.sort((p1, p2) => p1.z - p2.z || p1.p - p2.p || p1.k - p2.k);
-  const unique: Point[] = [];
-  for (const pt of candidates) if (!unique.length || pt.z > unique[unique.length - 1].z) unique.push(pt);
-  const hull = lowerHull(unique);
-
+  if (!converged) notes.push("The humidity-dependent permeances did not settle within 0.5 %; the figures are from the last pass.");
   // Condensation planes: hull vertices that are saturation points below the straight line.
   const planes: CondensationPlane[] = [];
   for (let h = 0; h < hull.length; h++) {
@@ -184,29 +257,31 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
 
   const condensing = new Array<boolean>(n + 1).fill(false);
   for (const pl of planes) condensing[pl.interfaceIndex] = true;
-  const interfaces: ProfileInterface[] = t.map((tc, k) => {
-    const pv = Math.min(hullAt(hull, zCum[k]), pLinear[k]);
-    return {
-      position_mm: pos[k], label: labels[k], t_c: tc, t_f: cToF(tc), p_sat_pa: pSat[k], p_v_pa: pv,
-      rh: (100 * pv) / pSat[k], p_v_linear_pa: pLinear[k], condensing: condensing[k],
+  const interfaces: ProfileInterface[] = new Array(n + 1);
+  for (let k = 0; k <= n; k++) {
+    interfaces[k] = {
+      position_mm: pos[k], label: labels[k], t_c: t[k], t_f: cToF(t[k]), p_sat_pa: pSat[k], p_v_pa: pv[k],
+      rh: (100 * pv[k]) / pSat[k], p_v_linear_pa: pLinear[k], condensing: condensing[k],
     };
-  });
+  }
 
+  const dry = dryPermeances(a);
   const first = planes.length === 0 ? null : c.name === "winter" ? planes[planes.length - 1] : planes[0];
-  const sourceP = c.source === "interior" ? c.interior.p_v_pa : pExt;
+  const sourceP = c.source === "interior" ? pInt : pExt;
   const sourceDew = dewPointFromVapourPressure(Math.max(sourceP, 1e-3));
-  const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart);
-  const vapourLayers: VapourLayer[] = a.layers.map((l, i) => {
-    const dry = layerPermeance(l);
-    return { index: i, material: l.material.slug, perm_ng: dry, perm_us: ngToPerm(dry), class: retarderClass(dry), case_perm_ng: perms[i] };
-  });
+  const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart, dry);
+  const vapourLayers: VapourLayer[] = new Array(n);
+  for (let i = 0; i < n; i++) {
+    vapourLayers[i] = { index: i, material: a.layers[i].material.slug, perm_ng: dry[i], perm_us: ngToPerm(dry[i]), class: retarderClass(dry[i]), case_perm_ng: perms[i] };
+  }
 
   return {
     name: c.name,
     description: c.description,
+    path: "clear-cavity",
     boundaryIndex: c.vapourStart,
     exterior: { t_c: c.exterior.t_c, rh: c.exterior.rh, p_v_pa: pExt, label: c.exterior.label },
-    interior: { t_c: c.interior.t_c, rh: c.interior.rh, p_v_pa: c.interior.p_v_pa },
+    interior: { t_c: c.interior.t_c, rh: c.interior.rh, p_v_pa: pInt },
     interfaces,
     condensingPlanes: planes,
     firstCondensingSurface: first ? { interfaceIndex: first.interfaceIndex, label: labels[first.interfaceIndex], t_c: first.t_c } : null,
@@ -215,6 +290,8 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     sourceDewPoint_c: sourceDew,
     rate_g_m2_day: planes.reduce((s, p) => s + p.rate_g_m2_day, 0),
     vapourLayers,
+    studPath: stud ? { interfaces_t_c: stud.t, margin_c: stud.t[marginIndex] - sourceDew } : null,
+    notes,
   };
 }
 

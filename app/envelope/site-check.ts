@@ -1,26 +1,35 @@
 // The one entry point: resolves the site and the layers, then runs thermal, vapour, profile,
 // code and rule checks and returns a plain-JSON result.
 import { resolveSite } from "./climate";
+import { resolveClimateYear } from "./climate-year";
 import { codeRows } from "./code-tables";
-import { resolveAssembly, type ResolvedAssembly } from "./layers";
+import { lowerName, resolveAssembly, ventedCavityIndex, type ResolvedAssembly } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
+import { seasonalBalance } from "./monthly-balance";
+import { nbcRows } from "./nbc";
 import { computeProfile, type CaseConditions } from "./profile";
 import { saturationPressure } from "./psychrometrics";
 import { evaluateRules, isReservoirCladding, LOCAL_CODE_CAUTION } from "./rules";
-import { analyseThermal, isBelowGrade } from "./thermal";
+import { analyseThermal, filmsFor, isBelowGrade } from "./thermal";
 import type { AssemblyInput, ResolvedSite, SiteCheckResult, SiteInput } from "./types";
 import { analyseVapour } from "./vapour";
 
-/** Innermost ventilated cavity (a vented air space used as a drainage gap), or −1. */
-function ventedCavityIndex(a: ResolvedAssembly): number {
-  let idx = -1;
-  for (const l of a.layers) if (l.material.family === "air-space" && l.input.role === "drainage-gap") idx = l.index;
-  // A cavity with nothing inboard of it leaves no stack to analyse: ignore it.
-  return idx < a.layers.length - 1 ? idx : -1;
+/** A roof deck open to a clear night sky radiates below the air temperature: the sol-air
+ * correction εΔR/h_o for horizontal surfaces is 7 °F (3.9 K), 0 for vertical ones (ASHRAE HoF ch.18
+ * sol-air temperature, from memory). Applied to roofs in the winter case. */
+export const NIGHT_SKY_DEPRESSION_K = 3.9;
+const NIGHT_SKY_NOTE = `Night-sky radiation: the roof surface is taken ${NIGHT_SKY_DEPRESSION_K} K below the outdoor air (sol-air correction for a horizontal surface under a clear sky, ASHRAE Handbook—Fundamentals ch.18, from memory); the outdoor vapour pressure is the air's.`;
+
+/** Frost depth is where the soil reaches 0 °C: the soil face just below grade in the upper-wall case. */
+export const FROST_DEPTH_SOIL_T_C = 0;
+const BELOW_GRADE_WALLS = new Set(["basement-wall", "crawlspace-wall"]);
+
+function indoorWinter(site: ResolvedSite) {
+  return { t_c: site.indoor.t_c, rh: site.indoor.rh, p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100 };
 }
 
 export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
-  const indoor = { t_c: site.indoor.t_c, rh: site.indoor.rh, p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100 };
+  const indoor = indoorWinter(site);
   if (isBelowGrade(a.kind)) {
     // Soil air is saturated; its face sits at the ground temperature.
     return {
@@ -29,10 +38,41 @@ export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
       interior: indoor, fixedSurface: true, vapourStart: 0, source: "interior",
     };
   }
+  const vent = ventedCavityIndex(a);
+  const p_v_pa = (saturationPressure(site.winter.t_c) * site.winter.rh) / 100;
+  const sky = a.kind === "roof" && vent < 0;
+  const t_c = sky ? site.winter.t_c - NIGHT_SKY_DEPRESSION_K : site.winter.t_c;
   return {
-    name: "winter", description: `Winter design: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
-    exterior: { t_c: site.winter.t_c, rh: site.winter.rh, p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100, label: "outdoor air" },
-    interior: indoor, fixedSurface: false, vapourStart: ventedCavityIndex(a) + 1, thermalStart: ventedCavityIndex(a) + 1, source: "interior",
+    name: "winter",
+    description: `Winter design: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %${sky ? `, roof surface under a clear night sky (${t_c.toFixed(1)} °C sol-air)` : ""}`,
+    exterior: { t_c, rh: (100 * p_v_pa) / saturationPressure(t_c), p_v_pa, label: sky ? "outdoor air under a clear night sky" : "outdoor air" },
+    interior: indoor, fixedSurface: false, vapourStart: vent + 1, thermalStart: vent + 1, source: "interior",
+    notes: sky ? [NIGHT_SKY_NOTE] : [],
+  };
+}
+
+/** The top of a basement or crawl-space wall: the band above grade faces outdoor air (with the
+ * outdoor film), and just below grade the soil is at frost depth (0 °C, saturated). Interior-
+ * insulated walls fail there first, where the deep-ground case can never see it. */
+export function upperWallCases(a: ResolvedAssembly, site: ResolvedSite): { aboveGrade: CaseConditions; frostDepth: CaseConditions } | null {
+  if (!BELOW_GRADE_WALLS.has(a.kind)) return null;
+  const indoor = indoorWinter(site);
+  const indoorText = `indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %`;
+  const outdoorFilm = filmsFor("above-grade-wall", "winter").exterior;
+  // Drainage mats and boards stop at grade: above it the next layer meets the outdoor air.
+  let aboveGradeStart = 0;
+  while (aboveGradeStart < a.layers.length - 1 && a.layers[aboveGradeStart].input.role === "drainage-gap") aboveGradeStart++;
+  return {
+    aboveGrade: {
+      name: "winter", description: `Winter, wall above grade: ${indoorText}, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
+      exterior: { t_c: site.winter.t_c, rh: site.winter.rh, p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100, label: "outdoor air above grade" },
+      interior: indoor, fixedSurface: false, vapourStart: aboveGradeStart, thermalStart: aboveGradeStart, exteriorFilmRsi: outdoorFilm?.rsi ?? 0, source: "interior",
+    },
+    frostDepth: {
+      name: "winter", description: `Winter, wall just below grade: ${indoorText} against soil at frost depth (${FROST_DEPTH_SOIL_T_C} °C), saturated`,
+      exterior: { t_c: FROST_DEPTH_SOIL_T_C, rh: 100, p_v_pa: saturationPressure(FROST_DEPTH_SOIL_T_C), label: "soil at frost depth" },
+      interior: indoor, fixedSurface: true, vapourStart: 0, source: "interior",
+    },
   };
 }
 
@@ -56,7 +96,7 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   if (cladIdx >= 0 && cladIdx < a.layers.length - 1 && !ventedBehind && a.kind !== "floor") {
     const t = site.summer.cladding_t_c;
     return {
-      name: "summer", description: `Summer inward drive: rain-wet ${a.layers[cladIdx].material.name.toLowerCase()} warmed by sun to ${t} °C, ${indoorText}`,
+      name: "summer", description: `Summer inward drive: rain-wet ${lowerName(a.layers[cladIdx].material)} warmed by sun to ${t} °C, ${indoorText}`,
       exterior: { t_c: t, rh: 100, p_v_pa: saturationPressure(t), label: "sun-warmed wet cladding" },
       interior: indoor, fixedSurface: true, vapourStart: cladIdx + 1, saturatedSource: true, source: "exterior",
     };
@@ -68,22 +108,29 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   };
 }
 
-export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary): SiteCheckResult {
+/** seasonal: false skips the 12-month balance (bulk screening, the design-day benchmark). */
+export interface SiteCheckOptions { seasonal?: boolean }
+
+export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary, options: SiteCheckOptions = {}): SiteCheckResult {
   const resolvedSite = resolveSite(site);
   const a = resolveAssembly(assembly, materials);
   const thermal = analyseThermal(a);
   const vapour = analyseVapour(a);
   const winter = computeProfile(a, winterCase(a, resolvedSite));
   const summer = computeProfile(a, summerCase(a, resolvedSite));
+  const upper = upperWallCases(a, resolvedSite);
+  const upperWall = upper ? { aboveGrade: computeProfile(a, upper.aboveGrade), frostDepth: computeProfile(a, upper.frostDepth) } : null;
   const rows = codeRows(a, resolvedSite, vapour.interiorClass);
-  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, codeRows: rows });
+  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, upperWall, codeRows: rows });
   return {
     site: resolvedSite,
     thermal,
-    profiles: { winter, summer },
+    profiles: { winter, summer, upperWall },
     vapour,
-    code: { edition: resolvedSite.edition, rows },
+    // Canadian sites are compared with the NBC; the IRC/IECC rows still feed the rules above.
+    code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
+    seasonal: options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),
   };
 }

@@ -3,7 +3,7 @@
 // applied inside the layer), then all layers and the air films in series (isothermal planes).
 // The whole-assembly parallel-path figure (paths running through every layer) is reported beside
 // it for comparison; with wood framing the truth lies between the two (REFERENCES §4.1).
-import { materialRsi, resolveAssembly, type ResolvedAssembly, type ResolvedLayer } from "./layers";
+import { materialRsi, materialRsiAt, resolveAssembly, ventedCavityIndex, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
 import type { AirFilm, AssemblyInput, AssemblyKind, ThermalLayer, ThermalResult } from "./types";
 import { ripToRsi, rsiToRip, usiToUip } from "./units";
@@ -59,25 +59,49 @@ export function layerRsi(layer: ResolvedLayer): number {
   return 1 / conductance;
 }
 
-/** Series sum of all layers plus films, per season (the temperature profile uses these). */
-export function seriesRsi(a: ResolvedAssembly, season: Season): { layers: number[]; exterior: number; interior: number; total: number } {
-  const films = filmsFor(a.kind, season);
+/** The one-dimensional heat path a profile runs along: through the clear cavity (the worst case in
+ * winter: framed layers conduct only through their fill) or through the framing. */
+export type HeatPath = "clear-cavity" | "stud";
+
+/** RSI of one layer along a heat path at a mean temperature (temperature-dependent insulations). */
+export function pathLayerRsi(layer: ResolvedLayer, path: HeatPath, mean_t_c: number): number {
+  const m = layer.framing && path === "stud" ? layer.framing.material : layer.material;
+  return materialRsiAt(m, layer.thickness_mm, mean_t_c);
+}
+
+/** Series sum of all layers plus films (winter films), isothermal planes. Outboard of a ventilated
+ * cavity nothing counts, and the cavity's still air takes the place of the outdoor film (the same
+ * rule the profiles use; ASHRAE practice for well-ventilated spaces). */
+export function seriesRsi(a: ResolvedAssembly): { layers: number[]; counted: boolean[]; exterior: number; exteriorFilm: AirFilm | null; interior: number; total: number } {
+  const films = filmsFor(a.kind, "winter");
+  const vent = ventedCavityIndex(a);
   const layers = a.layers.map(layerRsi);
-  const exterior = films.exterior?.rsi ?? 0;
+  const counted = a.layers.map((l) => l.index > vent);
+  const exteriorFilm = vent >= 0 ? stillAirFilm(a.kind) : films.exterior;
+  const exterior = exteriorFilm?.rsi ?? 0;
   const interior = films.interior.rsi;
-  return { layers, exterior, interior, total: exterior + interior + layers.reduce((s, r) => s + r, 0) };
+  let total = exterior + interior;
+  for (let i = 0; i < layers.length; i++) if (counted[i]) total += layers[i];
+  return { layers, counted, exterior, exteriorFilm, interior, total };
+}
+
+/** Film on the inner face of a ventilated cavity: still air, the interior film of the same surface. */
+export function stillAirFilm(kind: AssemblyKind): AirFilm {
+  const spec = interiorFilm(kind, "winter");
+  return { side: "exterior", rsi: ripToRsi(spec.rip), r_ip: spec.rip, label: `still-air film in the ventilated cavity (${spec.label.replace(/^inside air film, /, "")})`, source: `${spec.source}; ventilated cavity treated as still air (ASHRAE HoF ch.26 practice), M` };
 }
 
 /** Paths through the whole assembly; several framed layers are taken as independent (their
  * combined fractions multiply). Null when more than 6 framed layers make that meaningless. */
-function parallelPathRsi(a: ResolvedAssembly, filmsRsi: number): number | null {
-  const framed = a.layers.filter((l) => l.framing);
+function parallelPathRsi(a: ResolvedAssembly, filmsRsi: number, counted: readonly boolean[]): number | null {
+  const framed = a.layers.filter((l) => l.framing && counted[l.index]);
   if (framed.length === 0 || framed.length > 6) return null;
   let u = 0;
   for (let mask = 0; mask < 1 << framed.length; mask++) {
     let weight = 1;
     let r = filmsRsi;
     for (const l of a.layers) {
+      if (!counted[l.index]) continue;
       const k = framed.indexOf(l);
       if (k < 0) { r += materialRsi(l.material, l.thickness_mm); continue; }
       const onFraming = (mask >> k) & 1;
@@ -92,12 +116,12 @@ function parallelPathRsi(a: ResolvedAssembly, filmsRsi: number): number | null {
 
 export function analyseThermal(a: ResolvedAssembly): ThermalResult {
   const films = filmsFor(a.kind, "winter");
-  const series = seriesRsi(a, "winter");
+  const series = seriesRsi(a);
   const layers: ThermalLayer[] = a.layers.map((l, i) => {
     const rsi = series.layers[i];
     const out: ThermalLayer = {
       index: l.index, role: l.input.role, material: l.material.slug, name: l.material.name,
-      thickness_mm: l.thickness_mm, rsi, r_ip: rsiToRip(rsi),
+      thickness_mm: l.thickness_mm, rsi, r_ip: rsiToRip(rsi), counted: series.counted[i],
     };
     if (l.framing) {
       out.framed = {
@@ -108,10 +132,12 @@ export function analyseThermal(a: ResolvedAssembly): ThermalResult {
     return out;
   });
   const rsi = series.total;
-  const pp = parallelPathRsi(a, series.exterior + series.interior);
-  const filmList = films.exterior ? [films.exterior, films.interior] : [films.interior];
+  const pp = parallelPathRsi(a, series.exterior + series.interior, series.counted);
+  const filmList = series.exteriorFilm ? [series.exteriorFilm, films.interior] : [films.interior];
+  const vented = series.counted.includes(false);
   const method =
     "Layers in series with air films (isothermal planes); framed layers combine cavity and framing by area-weighted conductance." +
+    (vented ? " Layers outboard of the ventilated cavity (and the cavity itself) do not count; a still-air film stands in for the outdoor film." : "") +
     (films.exterior ? "" : " Below grade: no exterior film; the soil face is taken at the stated ground temperature.") +
     (pp !== null ? " The parallel-path figure (heat paths through every layer) is shown for comparison." : "");
   return {

@@ -1,6 +1,7 @@
 // Public input and result shapes of the site check. Results are plain JSON (no class instances,
 // no NaN/Infinity) so a page, an API route and a PDF sheet show the same numbers.
 import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
+import type { IndoorMethodId } from "./indoor-climate";
 
 export const ASSEMBLY_KINDS = [
   "above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor", "basement-wall", "slab",
@@ -17,6 +18,10 @@ export type LayerRole = (typeof LAYER_ROLES)[number];
 
 export type Joints = "taped" | "lapped" | "sealed";
 export type Adhesive = "solvent-based" | "water-based" | "mechanical";
+/** What a layer's open face meets, where that is not simply the next layer: a room, a crawl space
+ * or attic, the weather (above grade), or the soil. */
+export const EXPOSURES = ["interior", "service-space", "weather", "soil"] as const;
+export type Exposure = (typeof EXPOSURES)[number];
 
 /** One layer, exactly as the `layers` of a detail file (docs/content-format.md). */
 export interface LayerInput {
@@ -27,6 +32,7 @@ export interface LayerInput {
   joints?: Joints;
   adhesive?: Adhesive;
   exposed?: boolean;
+  exposure?: Exposure;
   note?: string;
 }
 
@@ -68,8 +74,15 @@ export interface SiteInput {
   summer?: { t_c?: number; rh?: number; cladding_t_c?: number };
   /** Soil-side temperature for below-grade assemblies (winter case). */
   ground_t_c?: number;
-  indoor?: { t_c?: number; rh?: number; summer_t_c?: number; summer_rh?: number };
+  /** method: indoor humidity method id (indoor-climate.ts); a given rh overrides it. */
+  indoor?: { t_c?: number; rh?: number; summer_t_c?: number; summer_rh?: number; method?: IndoorMethodId };
   edition?: CodeEdition;
+  /** Canada: a province or territory, an NBC zone, or hdd18 with country "CA" (nbc.ts). */
+  country?: Country;
+  province?: ProvinceCode;
+  nbcZone?: NbcZone;
+  /** The site year for the seasonal balance: 12 months typed, or a 12-row CSV; else generated. */
+  year?: ClimateYearInput;
 }
 
 export interface ResolvedSite {
@@ -83,8 +96,14 @@ export interface ResolvedSite {
   winter: { t_c: number; rh: number };
   summer: { t_c: number; rh: number; cladding_t_c: number };
   ground_t_c: number;
-  indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number };
+  /** method and basis: how the winter indoor RH was set, and the sentence that says so. */
+  indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number; method: IndoorMethodId | "given"; basis: string };
   edition: CodeEdition;
+  country: Country;
+  /** Canadian sites: where the degree-days came from, the NBC zone and the code compared. */
+  canada: CanadianSite | null;
+  /** Units to show first: SI for Canadian sites, inch-pound otherwise (the viewer may override). */
+  preferredUnits: "SI" | "IP";
   /** Which values were defaults (so the page can say "assumed"). */
   defaulted: string[];
   notes: string[];
@@ -110,6 +129,8 @@ export interface ThermalLayer {
   /** Effective layer RSI (framed layers: area-weighted conductance, i.e. isothermal plane). */
   rsi: number;
   r_ip: number;
+  /** False for layers outboard of a ventilated cavity (and the cavity): outdoors for heat. */
+  counted: boolean;
   framed?: FramedPath;
 }
 
@@ -167,6 +188,9 @@ export interface VapourLayer {
 export interface ProfileCase {
   name: "winter" | "summer";
   description: string;
+  /** The heat and vapour path the profile runs along: through the clear cavity of framed layers
+   * (the worst case; the stud path's temperatures are in `studPath`). */
+  path: "clear-cavity";
   /** Interface where the outdoor (soil, wet-cladding) vapour condition applies; layers outboard of
    * it sit in a ventilated cavity or hold the vapour source, and resist nothing in this case. */
   boundaryIndex: number;
@@ -182,7 +206,14 @@ export interface ProfileCase {
   sourceDewPoint_c: number;
   rate_g_m2_day: number;
   vapourLayers: VapourLayer[];
+  /** Interface temperatures through the framing, and the margin at the same surface; null when no
+   * framed layer is in the heat path. */
+  studPath: { interfaces_t_c: number[]; margin_c: number } | null;
+  /** How this case was modelled, in sentences to show beside it (sky radiation, cold-weather R …). */
+  notes: string[];
 }
+
+export interface UpperWallProfiles { aboveGrade: ProfileCase; frostDepth: ProfileCase }
 
 export interface VapourResult {
   layers: VapourLayer[];
@@ -204,7 +235,7 @@ export interface CodeRow {
 }
 
 export interface CodeResult {
-  edition: CodeEdition;
+  edition: CodeEdition | NbcEdition;
   rows: CodeRow[];
 }
 
@@ -220,9 +251,108 @@ export interface Flag {
 export interface SiteCheckResult {
   site: ResolvedSite;
   thermal: ThermalResult;
-  profiles: { winter: ProfileCase; summer: ProfileCase };
+  /** upperWall: basement and crawl-space walls only, the band above grade and the soil at frost
+   * depth beside the deep-ground winter case. */
+  profiles: { winter: ProfileCase; summer: ProfileCase; upperWall: UpperWallProfiles | null };
   vapour: VapourResult;
   code: CodeResult;
   flags: Flag[];
   caution: string;
+  /** ISO 13788 monthly balance over the site year (monthly-balance.ts); null when the caller asked
+   * for the design day only (runSiteCheck options.seasonal false). */
+  seasonal: SeasonalResult | null;
+}
+
+// Indoor method, site year, seasonal balance and Canada (indoor-climate.ts, climate-year.ts,
+// monthly-balance.ts, nbc.ts).
+export type { IndoorMethodId } from "./indoor-climate";
+export type Country = "US" | "CA";
+export type NbcEdition = "NBC 2020";
+export const PROVINCES = ["AB", "BC", "MB", "NB", "NL", "NS", "NT", "NU", "ON", "PE", "QC", "SK", "YT"] as const;
+export type ProvinceCode = (typeof PROVINCES)[number];
+
+export interface CanadianSite {
+  province: ProvinceCode | null;
+  nbcZone: NbcZone;
+  hdd18: number;
+  /** given: the user's HDD; province: the reference place's HDD; nbc-zone: the cold end of the band. */
+  hddSource: "given" | "province" | "nbc-zone";
+  /** Reference place when the HDD came from the province. */
+  place: string | null;
+  edition: NbcEdition;
+}
+
+export interface MonthInput { t_c: number; rh: number }
+export interface ClimateYearInput {
+  months?: readonly MonthInput[];
+  csv?: string;
+}
+
+export interface MonthClimate { month: number; name: string; t_c: number; rh: number }
+export interface ClimateYear {
+  source: "typed" | "csv" | "generated";
+  months: MonthClimate[];
+  /** How the year was made (for "generated": the fitted curve and what it was fitted to). */
+  note: string;
+}
+
+export interface InterfaceWater {
+  interfaceIndex: number;
+  label: string;
+  /** Held at the end of the month, g/m². */
+  accumulated_g_m2: number;
+  /** Net rate this month, g/(m²·day); negative while drying. */
+  rate_g_m2_day: number;
+}
+
+export interface SeasonalMonth {
+  month: number;
+  name: string;
+  days: number;
+  outdoor: { t_c: number; rh: number; p_v_pa: number };
+  indoor: { t_c: number; rh: number; p_v_pa: number };
+  /** Condensed and evaporated this month, all interfaces, g/m². */
+  condensed_g_m2: number;
+  evaporated_g_m2: number;
+  /** Held at the end of the month, all interfaces, g/m². */
+  accumulated_g_m2: number;
+  /** Held at the critical interface at the end of the month (the chart line), g/m². */
+  critical_g_m2: number;
+  /** Closest interface's temperature minus the dew point of the uncondensed vapour pressure there;
+   * negative where the straight-line profile crosses saturation. */
+  margin_c: number;
+  marginInterface: string;
+  interfaces: InterfaceWater[];
+  /** Interior-surface mould check: the temperature factor this month needs (null: no heat loss). */
+  fRsiMin: number | null;
+}
+
+export interface SurfaceMouldCheck {
+  method: string;
+  /** Temperature factor of the assembly on its coldest path, with Rsi 0.25 and Rse 0.04. */
+  fRsi: number;
+  /** Highest monthly requirement and its month (null: no month asks for one). */
+  fRsiMax: number | null;
+  criticalMonth: number | null;
+  pass: boolean;
+  explanation: string;
+}
+
+export interface SeasonalResult {
+  method: string;
+  climate: ClimateYear;
+  indoorMethod: IndoorMethodId | "given";
+  /** Calendar month (1–12) the balance starts from: the first condensing month; null if none. */
+  startMonth: number | null;
+  months: SeasonalMonth[];
+  criticalInterface: { interfaceIndex: number; label: string } | null;
+  peak_g_m2: number;
+  peakMonth: number | null;
+  /** Month (1–12) by whose end all condensate has evaporated; null if none formed or it stays. */
+  driesOutMonth: number | null;
+  /** Water still held after the twelve months from the start month, g/m². */
+  endOfYear_g_m2: number;
+  verdict: "no-condensation" | "dries-within-year" | "accumulates";
+  surface: SurfaceMouldCheck;
+  explanation: string;
 }

@@ -58,6 +58,19 @@ export function layerPermeance(layer: ResolvedLayer, rh?: number): number {
   return (1 - f) * cavity + f * materialPermeance(layer.framing.material, layer.thickness_mm, rh);
 }
 
+/** Permeance through the clear cavity of a framed layer (the fill alone), else the layer's. */
+export function cavityPermeance(layer: ResolvedLayer, rh?: number): number {
+  return materialPermeance(layer.material, layer.thickness_mm, rh);
+}
+
+const dryCache = new WeakMap<ResolvedAssembly, number[]>();
+/** Dry-cup permeance of every layer (area-weighted for framed layers), computed once per assembly. */
+export function dryPermeances(a: ResolvedAssembly): readonly number[] {
+  let dry = dryCache.get(a);
+  if (!dry) { dry = a.layers.map((l) => layerPermeance(l)); dryCache.set(a, dry); }
+  return dry;
+}
+
 function materialPermeance(m: Material, thickness_mm: number, rh: number | undefined): number {
   return rh === undefined ? dryCupPermeance(m, thickness_mm) : permeanceAtRh(m, thickness_mm, rh);
 }
@@ -118,15 +131,15 @@ function interiorSide(a: ResolvedAssembly): ResolvedLayer[] {
   return innermost < 0 ? [] : a.layers.slice(innermost + 1);
 }
 
-function classOfStack(layers: readonly ResolvedLayer[]): { cls: InteriorClass; perm_us: number | null } {
+function classOfStack(layers: readonly ResolvedLayer[], dry: readonly number[]): { cls: InteriorClass; perm_us: number | null } {
   if (layers.length === 0) return { cls: "none", perm_us: null };
-  const w = seriesPermeance(layers.map((l) => layerPermeance(l)));
+  const w = seriesPermeance(layers.map((l) => dry[l.index]));
   const c = retarderClass(w);
   return { cls: c === "permeable" ? "none" : c, perm_us: ngToPerm(w) };
 }
 
 export function interiorRetarderClassOf(a: ResolvedAssembly): InteriorClass {
-  return classOfStack(interiorSide(a)).cls;
+  return classOfStack(interiorSide(a), dryPermeances(a)).cls;
 }
 
 /** Interior vapour-retarder class of an assembly (catalogue facet). */
@@ -147,11 +160,12 @@ function formatSidePerm(p: number | null): string {
 }
 
 export function analyseVapour(a: ResolvedAssembly): VapourResult {
+  const dry = dryPermeances(a);
   const layers: VapourLayer[] = a.layers.map((l) => {
-    const w = layerPermeance(l);
+    const w = dry[l.index];
     return { index: l.index, material: l.material.slug, perm_ng: w, perm_us: ngToPerm(w), class: retarderClass(w), case_perm_ng: w };
   });
-  const interior = classOfStack(interiorSide(a));
+  const interior = classOfStack(interiorSide(a), dry);
   const core = coreRange(a);
   let inwardPerm: number | null = null;
   let outwardPerm: number | null = null;

@@ -8,7 +8,9 @@ export const STANDING_CAUTION =
 
 /** What the site check is, said before the standing caution on every result. */
 export const SITE_CHECK_SCOPE =
-  "This check is a steady-state screening of one design day against the tables named; it does not replace the local building official or a hygrothermal analysis.";
+  
+  "This check is a steady-state screening (design-day profiles and a monthly moisture balance) against the tables named; " +
+  "it does not replace the local building official or a transient hygrothermal analysis.";
 
 /** The caution a site-check result carries: its scope, then the standing caution. */
 export const SITE_CHECK_CAUTION = `${SITE_CHECK_SCOPE} ${STANDING_CAUTION}`;

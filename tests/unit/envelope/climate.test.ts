@@ -1,5 +1,4 @@
 import { expect, test } from "vitest";
-import { ashrae160IndoorRh } from "~/envelope/climate";
 import { CLIMATE_ZONES, moistureRegimeFromNormals, nbcZoneFromHdd, resolveSite, zoneNumberFromDegreeDays } from "~/envelope";
 
 // IECC 2021 / ASHRAE 169-2013 thermal criteria (REFERENCES §6.3, C2 via NTNU BuildME table citing DOE guide)
@@ -40,17 +39,21 @@ test("zone list runs 0A…8 with marine only in 3–5", () => {
 test("resolveSite fills defaults and says which ones", () => {
   const s = resolveSite({ zone: "5A" });
   expect(s.zoneSource).toBe("given");
-  expect(s.indoor).toEqual({ t_c: 21, rh: 25, summer_t_c: 24, summer_rh: 50 });
+  expect(s.indoor).toMatchObject({ t_c: 21, rh: 40, summer_t_c: 24, summer_rh: 50, method: "ashrae-160-simplified" });
+  expect(s.defaulted).toContain("indoor.rh");
   expect(s.defaulted).toContain("winter.t_c");
   expect(s.summer.cladding_t_c).toBe(s.summer.t_c + 15);
   expect(resolveSite({ zone: 6, moisture: "B" }).zone).toBe("6B");
   expect(resolveSite({ hdd18: 4500, cdd10: 500, normals: { annual_mean_c: 5, annual_precip_mm: 900, coldest_month_mean_c: -8, warmest_month_mean_c: 21, months_above_10c: 5, wettest_cold_month_mm: 80, driest_warm_month_mm: 60 } }).zone).toBe("6A");
 });
 
-test("default winter indoor RH: 25 % at ≤ −10 °C, 70 % at ≥ 20 °C, linear between — ASHRAE 160 simplified method (REFERENCES §7.2, M — from memory)", () => {
-  expect(ashrae160IndoorRh(-30)).toBe(25);
-  expect(ashrae160IndoorRh(-10)).toBe(25);
-  expect(ashrae160IndoorRh(5)).toBeCloseTo(47.5, 9);
-  expect(ashrae160IndoorRh(25)).toBe(70);
-  expect(resolveSite({ zone: "2A", winter: { t_c: 0 } }).indoor.rh).toBeCloseTo(40, 9);
+test("default winter indoor RH follows the ASHRAE 160 simplified method (40 % at ≤ −10 °C, 70 % at ≥ 20 °C; ASHRAE 160-2016 §4.3.1.1, from memory) and says so", () => {
+  const cold = resolveSite({ zone: "6A", winter: { t_c: -23 } });
+  expect(cold.indoor.rh).toBe(40);
+  expect(cold.indoor.basis).toBe("indoor 21 °C / 40 % RH, by the ASHRAE 160 simplified method at −23 °C outdoors");
+  expect(resolveSite({ zone: "2A", winter: { t_c: 5 } }).indoor.rh).toBeCloseTo(55, 9);
+  const given = resolveSite({ zone: "5A", indoor: { rh: 35 } });
+  expect(given.indoor).toMatchObject({ rh: 35, method: "given" });
+  expect(given.indoor.basis).toBe("indoor 21 °C / 35 % RH, as entered");
+  expect(given.defaulted).not.toContain("indoor.rh");
 });
