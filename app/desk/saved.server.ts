@@ -31,20 +31,23 @@ export interface SavedRow {
 }
 
 export async function listSaved(userId: number): Promise<SavedRow[]> {
-  const saved = await SavedDetail.findAll({ where: { userId }, order: [["createdAt", "DESC"]] });
-  const details = await Detail.findAll({ where: { id: saved.map((row) => row.detailId) }, attributes: ["id", "slug", "title", "tier", "publishedRevisionId", "withdrawnAt"] });
-  const byId = new Map(details.map((detail) => [detail.id, detail]));
-  return saved.flatMap((row) => {
-    const detail = byId.get(row.detailId);
-    return detail ? [{ slug: detail.slug, title: detail.title, tier: detail.tier, savedAt: row.createdAt.toISOString(), live: detail.isLive() }] : [];
+  const saved = await SavedDetail.findAll({
+    where: { userId },
+    include: [{ model: Detail, as: "detail", attributes: ["id", "slug", "title", "tier", "publishedRevisionId", "withdrawnAt"], required: true }],
+    order: [["createdAt", "DESC"]],
   });
+  return saved.flatMap(({ detail, createdAt }) => (detail ? [{ slug: detail.slug, title: detail.title, tier: detail.tier, savedAt: createdAt.toISOString(), live: detail.isLive() }] : []));
 }
 
 /** E-mails every member who saved the detail about its new revision, with the change note. Returns how many were sent. */
 export async function alertSavers(detail: Detail, revision: DetailRevision): Promise<number> {
-  const saved = await SavedDetail.findAll({ where: { detailId: detail.id }, attributes: ["userId"] });
+  const saved = await SavedDetail.findAll({
+    where: { detailId: detail.id },
+    attributes: ["userId"],
+    include: [{ model: User, as: "user", attributes: ["id", "email", "displayName", "emailVerifiedAt"], required: true }],
+  });
   if (saved.length === 0) return 0;
-  const users = await User.findAll({ where: { id: saved.map((row) => row.userId) }, attributes: ["id", "email", "displayName", "emailVerifiedAt"] });
+  const users = saved.flatMap((row) => (row.user ? [row.user] : []));
   const link = new URL(`/details/${detail.slug}`, env().APP_URL).toString();
   const sent = await Promise.all(
     users

@@ -12,16 +12,14 @@ export interface AdminPaymentsView {
 export async function adminPaymentsView(filter: { result?: PaymentEventResult }): Promise<AdminPaymentsView> {
   const [events, payments, grouped] = await Promise.all([
     PaymentEvent.findAll({ where: filter.result ? { result: filter.result } : {}, attributes: ["id", "type", "stripeCreated", "receivedAt", "result", "message"], order: [["receivedAt", "DESC"]], limit: 200 }),
-    Payment.findAll({ order: [["paidAt", "DESC"]], limit: 100 }),
+    Payment.findAll({ include: [{ model: User, as: "user", attributes: ["email"] }], order: [["paidAt", "DESC"]], limit: 100 }),
     PaymentEvent.count({ group: ["result"] }),
   ]);
-  const users = await User.findAll({ where: { id: [...new Set(payments.map((p) => p.userId))] }, attributes: ["id", "email"] });
-  const emailById = new Map(users.map((u) => [u.id, u.email]));
   const counts: Record<PaymentEventResult, number> = { applied: 0, ignored: 0, failed: 0 };
   for (const row of grouped as unknown as { result: PaymentEventResult; count: number }[]) counts[row.result] = Number(row.count);
   return {
     events: events.map((e) => ({ id: e.id, type: e.type, created: new Date(e.stripeCreated * 1000).toISOString(), receivedAt: e.receivedAt.toISOString(), result: e.result, message: e.message })),
-    payments: payments.map((p) => ({ id: p.id, who: emailById.get(p.userId) ?? `user ${p.userId}`, description: p.description, amount: formatMoney(p.amountCents, p.currency), paidAt: p.paidAt.toISOString(), receiptSent: p.receiptSentAt !== null })),
+    payments: payments.map((p) => ({ id: p.id, who: p.user?.email ?? `user ${p.userId}`, description: p.description, amount: formatMoney(p.amountCents, p.currency), paidAt: p.paidAt.toISOString(), receiptSent: p.receiptSentAt !== null })),
     counts,
   };
 }

@@ -30,13 +30,11 @@ export async function billingOverview(user: User): Promise<BillingOverview> {
   const now = new Date();
   const [plan, boughtSets, receipts, downloads] = await Promise.all([
     currentPlan(user.id),
-    Entitlement.findAll({ where: { userId: user.id, kind: "set" }, order: [["createdAt", "DESC"]] }),
+    Entitlement.findAll({ where: { userId: user.id, kind: "set" }, include: [{ model: DetailSet, as: "detailSet", attributes: ["slug", "title"] }], order: [["createdAt", "DESC"]] }),
     receiptsFor(user.id),
-    Download.findAll({ where: { userId: user.id }, order: [["createdAt", "DESC"]], limit: 20 }),
+    Download.findAll({ where: { userId: user.id }, include: [{ model: DetailSet, as: "detailSet", attributes: ["title"] }], order: [["createdAt", "DESC"]], limit: 20 }),
   ]);
   const sets = boughtSets.filter((set) => isLive(set, now));
-  const setRows = await DetailSet.findAll({ where: { id: [...new Set([...sets.map((s) => s.setId), ...downloads.map((d) => d.setId)].filter((id): id is number => id !== null))] } });
-  const setById = new Map(setRows.map((set) => [set.id, set]));
   return {
     plan: plan
       ? {
@@ -47,9 +45,9 @@ export async function billingOverview(user: User): Promise<BillingOverview> {
           cancelAtPeriodEnd: plan.cancelAtPeriodEnd,
         }
       : null,
-    sets: sets.map((e) => ({ slug: setById.get(e.setId ?? 0)?.slug ?? "", title: setById.get(e.setId ?? 0)?.title ?? "A set", boughtAt: e.createdAt.toISOString() })),
+    sets: sets.map((e) => ({ slug: e.detailSet?.slug ?? "", title: e.detailSet?.title ?? "A set", boughtAt: e.createdAt.toISOString() })),
     receipts,
-    downloads: downloads.map((d) => ({ setTitle: setById.get(d.setId)?.title ?? "A set", at: d.createdAt.toISOString() })),
+    downloads: downloads.map((d) => ({ setTitle: d.detailSet?.title ?? "A set", at: d.createdAt.toISOString() })),
   };
 }
 
