@@ -11,8 +11,9 @@ export interface ProfileChartProps {
   className?: string;
 }
 
-/** Widths the chart is laid out for: one column on phones, two panels side by side elsewhere. */
-export const PROFILE_CHART_WIDTHS = { narrow: 360, wide: 720 } as const;
+/** Widths the chart is laid out for: one column on phones (a 360 px screen leaves about 280 px for it
+ * inside the page and panel padding, so it draws near 1:1), two panels side by side elsewhere. */
+export const PROFILE_CHART_WIDTHS = { narrow: 300, wide: 720 } as const;
 
 function caseName(profile: ProfileCase): string {
   return profile.name === "winter" ? "Winter" : "Summer";

@@ -51,7 +51,7 @@ export interface ProfileGeometry extends Drawing {
   margin: { box: Box; rows: MarginRow[] };
 }
 
-/** Smallest type on the chart: drawn 1:1 at 360 px it stays readable on a phone. */
+/** Smallest type on the chart: the phone layout is drawn near 1:1, so it stays readable. */
 export const MIN_TEXT_SIZE = 10;
 const SIZE = { title: 12, panel: 11, text: 10 } as const;
 const PLOT_HEIGHT = 150;

@@ -8,7 +8,7 @@ import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, test } from "vitest";
 import { parse } from "yaml";
-import { ProfileChart } from "~/components/profile-chart";
+import { PROFILE_CHART_WIDTHS, ProfileChart } from "~/components/profile-chart";
 import { ShapeElements } from "~/components/section-drawing";
 import { profileAxes } from "~/drawing/profile-axes";
 import { MIN_TEXT_SIZE, niceStep, profileGeometry, type ProfileGeometry } from "~/drawing/profile-geometry";
@@ -86,12 +86,14 @@ describe("temperature against cumulative thermal resistance", () => {
   });
 
   test("interfaces sit at their share of the resistances summed layer by layer, air films included", () => {
-    // Winter, no vented cavity: the profile's resistances are the thermal result's films and layers.
+    // Winter, no vented cavity: the profile runs through the clear cavity, so its resistances are the
+    // thermal result's films and layers, framed layers taken at their cavity resistance.
+    expect(thinFoam.profiles.winter.path).toBe("clear-cavity");
     const { films, layers } = thinFoam.thermal;
     const exterior = films.find((f) => f.side === "exterior")?.rsi ?? 0;
     const interior = films.find((f) => f.side === "interior")?.rsi ?? 0;
     const cumulative = [exterior];
-    for (const l of layers) cumulative.push(cumulative[cumulative.length - 1] + l.rsi);
+    for (const l of layers) cumulative.push(cumulative[cumulative.length - 1] + (l.framed ? l.framed.cavity_rsi : l.rsi));
     const total = cumulative[cumulative.length - 1] + interior;
     const g = profileGeometry(thinFoam.profiles.winter, { units: "si" });
     const { plot, interfaceX } = g.temperature;
@@ -182,10 +184,10 @@ describe("margin above the dew point", () => {
 describe("legible at phone width", () => {
   const cases = [thinFoam.profiles.winter, thinFoam.profiles.summer, poly.profiles.winter, basement.profiles.winter, basement.profiles.summer];
 
-  test("at 360 units wide (drawn 1:1 on a phone) every label is at least 10 units and inside the drawing", () => {
+  test("in the phone layout (a 360 px screen draws it near 1:1) every label is at least 10 units and inside the drawing", () => {
     for (const profile of cases) {
       for (const units of ["si", "ip"] as const) {
-        const g = profileGeometry(profile, { units, width: 360 });
+        const g = profileGeometry(profile, { units, width: PROFILE_CHART_WIDTHS.narrow });
         expect(g.layout).toBe("narrow");
         for (const t of texts(g.shapes)) {
           expect(t.size).toBeGreaterThanOrEqual(MIN_TEXT_SIZE);
@@ -200,7 +202,7 @@ describe("legible at phone width", () => {
 
   test("no two labels overlap, narrow or wide", () => {
     for (const profile of cases) {
-      for (const width of [360, 720]) {
+      for (const width of [PROFILE_CHART_WIDTHS.narrow, PROFILE_CHART_WIDTHS.wide]) {
         const labels = texts(profileGeometry(profile, { units: "ip", width }).shapes).map((t) => ({ t, box: textBox(t) }));
         for (let i = 0; i < labels.length; i++) {
           for (let j = i + 1; j < labels.length; j++) {
@@ -228,7 +230,7 @@ test("profile charts render as titled, accessible figures, written to test-resul
     ["winter-dry", profileGeometry(poly.profiles.winter, { units: "ip" })],
     ["summer", profileGeometry(thinFoam.profiles.summer, { units: "si" })],
     ["below-grade", profileGeometry(basement.profiles.winter, { units: "si" })],
-    ["winter-condensing-phone", profileGeometry(thinFoam.profiles.winter, { units: "si", width: 360 })],
+    ["winter-condensing-phone", profileGeometry(thinFoam.profiles.winter, { units: "si", width: PROFILE_CHART_WIDTHS.narrow })],
   ];
   for (const [name, g] of samples) {
     const body = renderToStaticMarkup(createElement(ShapeElements, { shapes: g.shapes }));
