@@ -15,7 +15,7 @@ import { estimateTextWidth, INK, type Drawing, type Shape, type TextShape } from
 
 export interface SeasonalOptions {
   units: UnitSystem;
-  /** Drawing width: 360 for phones, 720 elsewhere (as the profile chart). */
+  /** Drawing width: 300 for phones, 720 elsewhere (as the profile chart). */
   width?: number;
 }
 
@@ -45,7 +45,8 @@ export interface SeasonalGeometry extends Drawing {
   slots: MonthSlot[];
 }
 
-export const SEASONAL_CHART_WIDTHS = { narrow: 360, wide: 720 } as const;
+/** Phone layout near 1:1 on a 360 px screen (as the profile chart). */
+export const SEASONAL_CHART_WIDTHS = { narrow: 300, wide: 720 } as const;
 const SIZE = { title: 12, panel: 11, text: 10 } as const;
 const WIDE_FROM = 640;
 const TICK_COLUMN = 42;

@@ -10,7 +10,8 @@ import { SeasonalChart } from "~/components/seasonal-chart";
 import { seasonalFigures, seasonalGeometry, seasonalVerdictLabel, surfaceCheckLine } from "~/drawing/seasonal-geometry";
 import { runSiteCheck } from "~/envelope";
 import type { MaterialFamily } from "~/envelope/material-schema";
-import type { MonthInput, SeasonalResult, TextShape } from "~/envelope/types";
+import { estimateTextWidth, type TextShape } from "~/drawing/shapes";
+import type { MonthInput, SeasonalResult } from "~/envelope/types";
 import { fixedRsiMaterial, libraryOf, loadLibrary } from "../envelope/library";
 
 const layerMaterial = (slug: string, rsi: number, perm: number, family: MaterialFamily = "membrane") =>
@@ -78,16 +79,16 @@ test("verdict labels for the three outcomes", () => {
 });
 
 test("the interior-surface mould check is on the chart, in words", () => {
-  const chart = seasonalGeometry(dries, { units: "ip", width: 360 });
+  const chart = seasonalGeometry(dries, { units: "ip", width: 300 });
   const surface = chart.shapes.filter((s): s is TextShape => s.type === "text" && s.tag === "surface").map((s) => s.text).join(" ");
   expect(surface).toBe(surfaceCheckLine(dries));
   expect(surface).toMatch(/^Inside surface: temperature factor 0\.\d\d/);
 });
 
 test("both widths: type at 10 units or more, everything inside the drawing, inch-pound margins in °F", () => {
-  for (const width of [360, 720]) {
+  for (const width of [300, 720]) {
     const chart = seasonalGeometry(accumulates, { units: "ip", width });
-    expect(chart.layout).toBe(width === 360 ? "narrow" : "wide");
+    expect(chart.layout).toBe(width === 300 ? "narrow" : "wide");
     for (const s of chart.shapes) {
       if (s.type !== "text") continue;
       expect(s.size).toBeGreaterThanOrEqual(10);
@@ -95,6 +96,12 @@ test("both widths: type at 10 units or more, everything inside the drawing, inch
       if (s.anchor === "start") expect(s.x).toBeLessThan(width);
     }
     expect(chart.shapes.some((s) => s.type === "text" && s.tag === "unit:margin" && s.text === "°F")).toBe(true);
+    // Month names do not touch their neighbours.
+    const months = chart.shapes.filter((s): s is TextShape => s.type === "text" && /^month:/.test(s.tag ?? ""));
+    for (let i = 1; i < months.length; i++) {
+      const gap = months[i].x - months[i - 1].x;
+      expect(gap).toBeGreaterThan((estimateTextWidth(months[i].text, months[i].size) + estimateTextWidth(months[i - 1].text, months[i - 1].size)) / 2 + 1);
+    }
   }
 });
 
