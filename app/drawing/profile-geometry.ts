@@ -349,7 +349,9 @@ export function profileGeometry(profile: ProfileCase, options: ProfileOptions): 
 
   // Heading: the case and its two boundary conditions.
   shapes.push(text(pad, 18, `${profile.name === "winter" ? "WINTER" : "SUMMER"} CASE`, { size: SIZE.title, weight: "bold", fill: INK.ochre, tracking: 0.6, tag: "case" }));
-  const conditions = `${sideWord(profile)} ${formatTemperature(profile.exterior.t_c, units)} at ${Math.round(profile.exterior.rh)} % RH · inside ${formatTemperature(profile.interior.t_c, units)} at ${Math.round(profile.interior.rh)} % RH`;
+  // No-break spaces keep "at 40 % RH" together when the line wraps on a phone.
+  const state = (t_c: number, rh: number): string => `${formatTemperature(t_c, units)} at ${Math.round(rh)} % RH`.replace(/ /g, "\u00a0");
+  const conditions = `${sideWord(profile)} ${state(profile.exterior.t_c, profile.exterior.rh)} · inside ${state(profile.interior.t_c, profile.interior.rh)}`;
   const conditionLines = wrap(conditions.replace(/-/g, "−"), SIZE.text, inner);
   conditionLines.forEach((line, i) => shapes.push(text(pad, 34 + i * 13, line, { fill: COLOUR.text, tag: "conditions" })));
   let y = 34 + conditionLines.length * 13 + 6;
