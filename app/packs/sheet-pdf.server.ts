@@ -1,14 +1,16 @@
-// One printable detail sheet (US Letter, one page) drawn with pdfkit: header, the generated
-// section (the same primitives as the page's SVG), the layer table, the site check for the
-// chosen site, flags, cautions, references and the standing caution in the footer.
+// One printable detail sheet (US Letter) drawn with pdfkit: header, the generated section (the same
+// primitives as the page's SVG), the layer table, the site check for the chosen site, flags,
+// cautions, references and the standing caution in the footer; the seasonal balance's monthly chart
+// on a second page.
 import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
 import PDFDocument from "pdfkit";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { profileGeometry } from "~/drawing/profile-geometry";
+import { seasonalFigures, seasonalGeometry, seasonalVerdictLabel, SEASONAL_CHART_WIDTHS } from "~/drawing/seasonal-geometry";
 import { sectionGeometry, type SectionLayer } from "~/drawing/section-geometry";
 import { INK, type Shape } from "~/drawing/shapes";
-import type { AssemblyKind, Flag, ProfileCase, SiteCheckResult } from "~/envelope/types";
+import type { AssemblyKind, Flag, ProfileCase, SeasonalResult, SiteCheckResult } from "~/envelope/types";
 import { formatPermeance, formatR, formatTemperature, formatTemperatureDifference, formatThickness, formatU, type UnitSystem } from "~/envelope/units";
 
 export interface DetailSheetInput {
@@ -186,12 +188,19 @@ function siteCheckBlock(doc: Doc, input: DetailSheetInput, x: number, y: number,
   const site = r.site;
   y = heading(doc, "Site check", x, y, width);
   const small = { font: FONTS.sans, size: 7.4 };
-  y = block(doc, `Climate zone ${site.zone}${site.zoneSource === "degree-days" ? " (from degree-days)" : ""}. Winter ${formatTemperature(site.winter.t_c, units)}, summer ${formatTemperature(site.summer.t_c, units)} at ${site.summer.rh} % RH; indoor ${formatTemperature(site.indoor.t_c, units)} at ${site.indoor.rh} % RH.`, x, y, width, limit, small);
+  const where = site.canada
+    ? `${site.canada.province ? `${site.canada.province}, ` : ""}NBC zone ${site.canada.nbcZone}, ${Math.round(site.canada.hdd18)} degree-days below 18 °C (design zone ${site.zone})`
+    : `Climate zone ${site.zone}${site.zoneSource === "degree-days" ? " (from degree-days)" : ""}`;
+  y = block(doc, `${where}. Winter ${formatTemperature(site.winter.t_c, units)}, summer ${formatTemperature(site.summer.t_c, units)} at ${Math.round(site.summer.rh)} % RH. Checked at ${site.indoor.basis}.`, x, y, width, limit, small);
   doc.font(FONTS.sansBold).fontSize(9).fillColor(INK.graphite);
   y = block(doc, `Effective ${formatR(r.thermal.rsi, units)}   ${formatU(r.thermal.u_si, units)}`, x, y + 1, width, limit, { font: FONTS.sansBold, size: 9, gap: 3 });
   y = block(doc, caseLine(r.profiles.winter, units), x, y, width, limit, small);
   y = block(doc, caseLine(r.profiles.summer, units), x, y, width, limit, small);
-  y = block(doc, `Interior retarder: ${r.vapour.interiorClass === "none" ? "none" : `Class ${r.vapour.interiorClass}`}; dries ${r.vapour.dryingDirections.length ? r.vapour.dryingDirections.join(" and ") : "in neither direction"}.`, x, y, width, limit, { ...small, gap: 4 });
+  y = block(doc, `Interior retarder: ${r.vapour.interiorClass === "none" ? "none" : `Class ${r.vapour.interiorClass}`}; dries ${r.vapour.dryingDirections.length ? r.vapour.dryingDirections.join(" and ") : "in neither direction"}.`, x, y, width, limit, { ...small, gap: 3 });
+  if (r.seasonal) {
+    y = block(doc, `Through the year: ${seasonalVerdictLabel(r.seasonal)}.`, x, y, width, limit, { font: FONTS.sansBold, size: 7.4, color: r.seasonal.verdict === "accumulates" ? INK.stop : INK.graphite, gap: 1 });
+    y = block(doc, `${seasonalFigures(r.seasonal, units)} Monthly chart overleaf.`, x, y, width, limit, { ...small, gap: 4 });
+  }
   y = heading(doc, `Code rows compared, ${r.code.edition}`, x, y + 2, width);
   for (const row of r.code.rows) {
     if (y > limit - 9) break;
@@ -266,6 +275,34 @@ function render(doc: Doc, input: DetailSheetInput): void {
   notesColumn(doc, input, x + colWidth + gap, y + 4, colWidth, limit);
 
   footer(doc, input, generatedAt);
+  if (input.siteCheck.seasonal) {
+    doc.addPage();
+    seasonalPage(doc, input, input.siteCheck.seasonal);
+    footer(doc, input, generatedAt);
+  }
+}
+
+/** The sheet's second page: the seasonal balance month by month, drawn with the page's primitives. */
+function seasonalPage(doc: Doc, input: DetailSheetInput, seasonal: SeasonalResult): void {
+  const x = PAGE.margin;
+  const limit = FOOTER_TOP - 10;
+  let y: number = PAGE.margin;
+  doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", x, y, { lineBreak: false });
+  y += 16;
+  y = block(doc, `${input.title}: through the year`, x, y, CONTENT_WIDTH, y + 20, { font: FONTS.serifBold, size: 12, gap: 4 });
+  y = heading(doc, "Seasonal balance, month by month", x, y, CONTENT_WIDTH);
+  y = block(doc, seasonal.explanation, x, y, CONTENT_WIDTH, limit, { font: FONTS.sans, size: 7.6, gap: 6 });
+  const chart = seasonalGeometry(seasonal, { units: input.units, width: SEASONAL_CHART_WIDTHS.wide });
+  const k = CONTENT_WIDTH / chart.width;
+  drawShapes(doc, chart.shapes, x, y, k);
+  y += chart.height * k + 8;
+  const small = { font: FONTS.sans, size: 7.2, color: INK.graphiteSoft, gap: 3 };
+  const year = seasonal.climate;
+  y = block(doc, `${year.source === "generated" ? "Site year GENERATED by Dryside, not measured: " : year.source === "csv" ? "Site year from an uploaded file. " : "Site year as typed. "}${year.note}`, x, y, CONTENT_WIDTH, limit, small);
+  y = block(doc, `Indoor: ${input.siteCheck.site.indoor.basis} on the design day; each month by the same method at its mean outdoor temperature.`, x, y, CONTENT_WIDTH, limit, small);
+  y = block(doc, `Code compared: ${input.siteCheck.code.edition}.`, x, y, CONTENT_WIDTH, limit, small);
+  y = block(doc, `Method: ${seasonal.method}.`, x, y, CONTENT_WIDTH, limit, small);
+  block(doc, `Interior surface: ${seasonal.surface.method}. ${seasonal.surface.explanation}`, x, y, CONTENT_WIDTH, limit, small);
 }
 
 /** A Letter document with the sheet's fonts, drawn by `draw`, as bytes. */
@@ -294,7 +331,8 @@ function letterPdf(info: PDFKit.DocumentInfo, draw: (doc: Doc) => void): Promise
   });
 }
 
-/** Renders one detail sheet to a one-page Letter PDF. */
+/** Renders one detail sheet to Letter PDF: the detail and its site check on the first page, the
+ * seasonal balance month by month on the second. */
 export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
   return letterPdf(
     { Title: pdfText(input.title), Subject: `Dryside detail sheet ${input.slug}, revision ${input.revision.number}`, Creator: "Dryside" },
