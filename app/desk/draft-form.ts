@@ -21,7 +21,7 @@ export const layerFieldsSchema = z.object({
 });
 
 /** The form's fields as posted: text as typed (numbers stay text until the rules read them), so a 400 gives back exactly what was typed. */
-export const draftFieldsSchema = z.object({
+const draftFieldsSchema = z.object({
   slug: line,
   title: line,
   summary: line,
@@ -35,7 +35,10 @@ export const draftFieldsSchema = z.object({
   /** One reference per line. */
   references: text,
   change_note: line,
-  body: z.string().default("").transform((body) => body.replace(/\r\n?/g, "\n")),
+  body: z
+    .string()
+    .default("")
+    .transform((body) => body.replace(/\r\n?/g, "\n")),
   layers: z.array(layerFieldsSchema).default([]),
 });
 
@@ -43,7 +46,14 @@ export type DraftFormValues = z.output<typeof draftFieldsSchema>;
 export type LayerFormValues = DraftFormValues["layers"][number];
 
 /** A new row in the layer table. */
-export const BLANK_LAYER: LayerFormValues = { role: "insulation", material: "", thickness_mm: "", framing_material: "", framing_fraction: "", joints: "" };
+export const BLANK_LAYER: LayerFormValues = {
+  role: "insulation",
+  material: "",
+  thickness_mm: "",
+  framing_material: "",
+  framing_fraction: "",
+  joints: "",
+};
 
 const liveLayerListSchema = z.array(layerFieldsSchema.catch(BLANK_LAYER)).catch([]);
 
@@ -53,22 +63,22 @@ export function liveLayers(value: unknown): LayerFormValues[] {
 }
 
 /** The two submit buttons: keep the draft, or keep it and send it for review. */
-export const DRAFT_INTENTS = ["save", "submit"] as const;
+const DRAFT_INTENTS = ["save", "submit"] as const;
 
 /** Field name (conform's: `title`, `layers[2].thickness_mm`, `` for the whole form) → messages. */
 export type FieldErrors = Record<string, string[]>;
 
 /** Until a reviewer approves, the front matter names no reviewer; publication writes the real one. */
-export const AWAITING_REVIEW = "(awaiting review)";
+const AWAITING_REVIEW = "(awaiting review)";
 
 /** What the rules need to know besides the form: the revision being written and the names that exist. */
-export interface DraftRules {
+interface DraftRules {
   revision: number;
   knownMaterials: Iterable<string>;
   knownSets: Iterable<string>;
 }
 
-export interface DraftContext extends DraftRules {
+interface DraftContext extends DraftRules {
   author: string;
   revised: string;
   /** Submitting for review also needs the body's required sections. */
@@ -85,7 +95,12 @@ export function draftFormSchema(rules: DraftRules) {
   const context = { ...rules, knownMaterials: new Set(rules.knownMaterials), knownSets: new Set(rules.knownSets) };
   return draftPostSchema.superRefine((values, ctx) => {
     // The author is the desk's to fill in; any valid name stands in for it here.
-    const { problems } = checkDraft(values, { ...context, author: "desk editor", revised: today(), forSubmission: values.intent === "submit" });
+    const { problems } = checkDraft(values, {
+      ...context,
+      author: "desk editor",
+      revised: today(),
+      forSubmission: values.intent === "submit",
+    });
     for (const problem of problems) ctx.addIssue({ code: "custom", path: problem.path, message: problem.message });
   });
 }
@@ -128,7 +143,10 @@ function numberOrText(value: string): number | string | undefined {
 }
 
 /** The front matter the form describes, before validation. Author and revision come from the desk, never the form. */
-function candidateFrontMatter(values: DraftFormValues, fixed: Omit<DraftContext, "knownMaterials" | "knownSets" | "forSubmission">): Record<string, unknown> {
+function candidateFrontMatter(
+  values: DraftFormValues,
+  fixed: Omit<DraftContext, "knownMaterials" | "knownSets" | "forSubmission">,
+): Record<string, unknown> {
   return {
     slug: values.slug,
     title: values.title,
@@ -145,23 +163,39 @@ function candidateFrontMatter(values: DraftFormValues, fixed: Omit<DraftContext,
     ...(values.change_note ? { change_note: values.change_note } : {}),
     author: fixed.author,
     reviewer: AWAITING_REVIEW,
-    references: values.references.split("\n").map((reference) => reference.trim()).filter(Boolean),
+    references: values.references
+      .split("\n")
+      .map((reference) => reference.trim())
+      .filter(Boolean),
     layers: layersFromForm(values.layers, fixed.keep?.layers),
   };
 }
 
 /** Layer rows as front-matter layers (unvalidated); keys the form does not edit are carried over from `keep`. */
-export function layersFromForm(layers: readonly LayerFormValues[], keep?: readonly DetailFrontMatter["layers"][number][]): Record<string, unknown>[] {
+export function layersFromForm(
+  layers: readonly LayerFormValues[],
+  keep?: readonly DetailFrontMatter["layers"][number][],
+): Record<string, unknown>[] {
   return layers.map((layer, i) => {
     const kept = keep?.[i];
     // Notes, adhesive and exposure stay with the layer when its material is unchanged.
-    const carried = kept && kept.material === layer.material ? { note: kept.note, adhesive: kept.adhesive, exposed: kept.exposed } : {};
+    const carried =
+      kept && kept.material === layer.material
+        ? { note: kept.note, adhesive: kept.adhesive, exposed: kept.exposed }
+        : {};
     return {
       role: layer.role,
       material: layer.material,
       thickness_mm: numberOrText(layer.thickness_mm),
       ...(layer.joints ? { joints: layer.joints } : {}),
-      ...(layer.framing_fraction.trim() || layer.framing_material ? { framing: { material: layer.framing_material || "softwood-lumber", fraction: numberOrText(layer.framing_fraction) } } : {}),
+      ...(layer.framing_fraction.trim() || layer.framing_material
+        ? {
+            framing: {
+              material: layer.framing_material || "softwood-lumber",
+              fraction: numberOrText(layer.framing_fraction),
+            },
+          }
+        : {}),
       ...Object.fromEntries(Object.entries(carried).filter(([, value]) => value !== undefined)),
     };
   });
@@ -197,7 +231,8 @@ const FRIENDLY: Record<string, string> = {
 function friendlyMessage(path: FormPath, issue: z.core.$ZodIssue): string {
   const field = String(path.at(-1) ?? "");
   if (FRIENDLY[field]) return FRIENDLY[field];
-  if (issue.code === "invalid_value" || issue.code === "invalid_type") return path.length > 1 ? "Choose one." : `Choose a ${field.replaceAll("_", " ")}.`;
+  if (issue.code === "invalid_value" || issue.code === "invalid_type")
+    return path.length > 1 ? "Choose one." : `Choose a ${field.replaceAll("_", " ")}.`;
   return issue.message;
 }
 
@@ -206,13 +241,20 @@ interface Problem {
   message: string;
 }
 
-type CheckContext = Omit<DraftContext, "knownMaterials" | "knownSets"> & { knownMaterials: ReadonlySet<string>; knownSets: ReadonlySet<string> };
+type CheckContext = Omit<DraftContext, "knownMaterials" | "knownSets"> & {
+  knownMaterials: ReadonlySet<string>;
+  knownSets: ReadonlySet<string>;
+};
 
 /** Every rule the draft breaks, each under the field that caused it (layer fields under their row's index); the front matter when it breaks none. */
-function checkDraft(values: DraftFormValues, context: CheckContext): { problems: Problem[]; front: DetailFrontMatter | null } {
+function checkDraft(
+  values: DraftFormValues,
+  context: CheckContext,
+): { problems: Problem[]; front: DetailFrontMatter | null } {
   const problems: Problem[] = [];
   const add = (path: FormPath, message: string) => {
-    if (!problems.some((problem) => problem.message === message && problem.path.join(".") === path.join("."))) problems.push({ path, message });
+    if (!problems.some((problem) => problem.message === message && problem.path.join(".") === path.join(".")))
+      problems.push({ path, message });
   };
   const parsed = detailFrontMatterSchema.safeParse(candidateFrontMatter(values, context));
   if (!parsed.success) {
@@ -222,13 +264,19 @@ function checkDraft(values: DraftFormValues, context: CheckContext): { problems:
     }
   }
   values.layers.forEach((layer, i) => {
-    if (layer.material && !context.knownMaterials.has(layer.material)) add(["layers", i, "material"], `“${layer.material}” is not in the material library.`);
-    if (layer.framing_material && !context.knownMaterials.has(layer.framing_material)) add(["layers", i, "framing_material"], `“${layer.framing_material}” is not in the material library.`);
+    if (layer.material && !context.knownMaterials.has(layer.material))
+      add(["layers", i, "material"], `“${layer.material}” is not in the material library.`);
+    if (layer.framing_material && !context.knownMaterials.has(layer.framing_material))
+      add(["layers", i, "framing_material"], `“${layer.framing_material}” is not in the material library.`);
   });
   for (const set of values.sets) if (!context.knownSets.has(set)) add(["sets"], `There is no set “${set}”.`);
   if (context.forSubmission) {
     const missing = missingBodySections(values.body);
-    if (missing.length) add(["body"], `Before review the body needs the section${missing.length > 1 ? "s" : ""} ${missing.map((m) => `“## ${m}”`).join(", ")}.`);
+    if (missing.length)
+      add(
+        ["body"],
+        `Before review the body needs the section${missing.length > 1 ? "s" : ""} ${missing.map((m) => `“## ${m}”`).join(", ")}.`,
+      );
   }
   return { problems, front: parsed.success && problems.length === 0 ? parsed.data : null };
 }
@@ -238,13 +286,20 @@ function fieldName(path: FormPath): string {
   return path.map((part, i) => (typeof part === "number" ? `[${part}]` : i === 0 ? part : `.${part}`)).join("");
 }
 
-export type DraftValidation = { ok: true; front: DetailFrontMatter; body: string } | { ok: false; errors: FieldErrors };
+type DraftValidation = { ok: true; front: DetailFrontMatter; body: string } | { ok: false; errors: FieldErrors };
 
 /** The server's check before saving: the form's rules on the front matter with the desk's author and the carried-over layer notes. */
 export function validateDraft(values: DraftFormValues, context: DraftContext): DraftValidation {
-  const { problems, front } = checkDraft(values, { ...context, knownMaterials: new Set(context.knownMaterials), knownSets: new Set(context.knownSets) });
+  const { problems, front } = checkDraft(values, {
+    ...context,
+    knownMaterials: new Set(context.knownMaterials),
+    knownSets: new Set(context.knownSets),
+  });
   if (front) return { ok: true, front, body: values.body.trim() };
   const errors: FieldErrors = {};
-  for (const problem of problems) (errors[fieldName(problem.path)] ??= []).push(problem.message);
+  for (const problem of problems) {
+    const name = fieldName(problem.path);
+    errors[name] = [...(errors[name] ?? []), problem.message];
+  }
   return { ok: false, errors };
 }

@@ -5,13 +5,19 @@ import { materialSchema, type Material } from "~/envelope/material-schema";
 // action), checked by the material library's own schema, so a value entered here needs its source
 // exactly as a content file does. Pure: the page validates with the same schema as the server.
 
-export const MATERIAL_FLAGS = ["foam_plastic", "water_sensitive", "insect_risk", "solvent_sensitive", "vented_cladding"] as const;
-export const THERMAL_KINDS = ["conductivity", "rsi_fixed"] as const;
+export const MATERIAL_FLAGS = [
+  "foam_plastic",
+  "water_sensitive",
+  "insect_risk",
+  "solvent_sensitive",
+  "vented_cladding",
+] as const;
+const THERMAL_KINDS = ["conductivity", "rsi_fixed"] as const;
 
 const line = z.string().trim().default("");
 
 /** The fields as posted, numbers still as typed, so a 400 gives back exactly what was typed. */
-export const materialFieldsSchema = z.object({
+const materialFieldsSchema = z.object({
   name: line,
   family: line,
   thermal_kind: z.enum(THERMAL_KINDS).default("conductivity"),
@@ -47,7 +53,8 @@ export function materialToForm(material: Material): MaterialFormValues {
 }
 
 // Text that is not a number stays text, so the library schema reports it as the wrong type.
-const numberOrText = (value: string) => (value === "" ? undefined : Number.isFinite(Number(value)) ? Number(value) : value);
+const numberOrText = (value: string) =>
+  value === "" ? undefined : Number.isFinite(Number(value)) ? Number(value) : value;
 
 function candidate(slug: string, values: MaterialFormValues): Record<string, unknown> {
   const curve = values.curve
@@ -59,7 +66,10 @@ function candidate(slug: string, values: MaterialFormValues): Record<string, unk
     slug,
     name: values.name,
     family: values.family,
-    thermal: { [values.thermal_kind === "rsi_fixed" ? "rsi_fixed" : "conductivity_w_mk"]: numberOrText(values.thermal_value), source: values.thermal_source },
+    thermal: {
+      [values.thermal_kind === "rsi_fixed" ? "rsi_fixed" : "conductivity_w_mk"]: numberOrText(values.thermal_value),
+      source: values.thermal_source,
+    },
     vapour: {
       permeance_ng: numberOrText(values.permeance_ng),
       ...(values.at_thickness_mm ? { at_thickness_mm: numberOrText(values.at_thickness_mm) } : {}),

@@ -4,12 +4,15 @@ import { REVIEW_SECTIONS } from "./review-sections";
 // The reviewer's form: a comment per section and the decision. Pure: conform parses it with this
 // schema on the review page and in its action.
 
-export const REVIEW_DECISIONS = ["approve", "request-changes"] as const;
+const REVIEW_DECISIONS = ["approve", "request-changes"] as const;
 
 const MAX_COMMENT = 2000;
 
 /** One optional comment per reviewable section, posted as `comments.<section>`. */
-const commentsSchema = z.partialRecord(z.enum(REVIEW_SECTIONS), z.string().trim().max(MAX_COMMENT, `Keep a comment under ${MAX_COMMENT} characters.`));
+const commentsSchema = z.partialRecord(
+  z.enum(REVIEW_SECTIONS),
+  z.string().trim().max(MAX_COMMENT, `Keep a comment under ${MAX_COMMENT} characters.`),
+);
 
 export const reviewFormSchema = z
   .object({
@@ -19,8 +22,10 @@ export const reviewFormSchema = z
   .superRefine((review, ctx) => {
     // Sending work back without saying why leaves the author guessing.
     if (review.intent === "request-changes" && REVIEW_SECTIONS.every((section) => !review.comments[section])) {
-      ctx.addIssue({ code: "custom", path: ["comments"], message: "Say what needs changing: write at least one comment." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["comments"],
+        message: "Say what needs changing: write at least one comment.",
+      });
     }
   });
-
-export type ReviewFormValues = z.output<typeof reviewFormSchema>;

@@ -50,6 +50,28 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   await thickness.fill(String(Number(await thickness.inputValue()) + 20));
   await editor.waitForFunction((before) => document.querySelector('[data-testid="effective-r"]')?.textContent !== before, rBefore);
 
+  // The layers are a list: a row is added and removed again, and moving a row moves what was typed in it.
+  const rows = editor.getByTestId("layer-editor").locator("tbody tr");
+  const count = await rows.count();
+  await editor.getByRole("button", { name: "Add a layer on the interior side" }).click();
+  await editor.getByTestId(`layer-row-${count}`).waitFor();
+  await editor.getByRole("button", { name: `Remove layer ${count + 1}` }).click();
+  await editor.getByTestId(`layer-row-${count}`).waitFor({ state: "detached" });
+  const outermost = await editor.getByLabel("Layer 1 thickness in mm", { exact: true }).inputValue();
+  await editor.getByRole("button", { name: "Move layer 1 inward" }).click();
+  await expect.poll(() => editor.getByLabel("Layer 2 thickness in mm", { exact: true }).inputValue()).toBe(outermost);
+  await editor.getByRole("button", { name: "Move layer 2 outward" }).click();
+  await expect.poll(() => editor.getByLabel("Layer 1 thickness in mm", { exact: true }).inputValue()).toBe(outermost);
+
+  // The page checks with the action's schema: a missing change note is reported before anything is sent.
+  const note = editor.getByLabel(/^Change note/);
+  const typedNote = await note.inputValue();
+  await note.fill("");
+  await editor.getByRole("button", { name: "Save draft" }).click();
+  await editor.getByTestId("error-change_note").waitFor();
+  await note.fill(typedNote);
+  await editor.getByTestId("error-change_note").waitFor({ state: "detached" });
+
   // A drawing, sent with upload progress; the server keeps only the sanitised drawing.
   await editor.locator('input[type="file"]').setInputFiles({ name: "batt-supports.svg", mimeType: "image/svg+xml", buffer: Buffer.from(DRAWING) });
   await editor.getByLabel("Caption").fill("Batt supports at 450 mm");
@@ -96,4 +118,4 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   await drawing.scrollIntoViewIfNeeded();
   await page.waitForFunction(() => [...document.querySelectorAll('[data-testid="attachments"] img')].every((img) => (img as HTMLImageElement).naturalWidth > 0));
   await screenshot(page, "desk-published");
-});
+}, 120_000); // three people's sessions in one journey: longer than the default on a busy machine

@@ -13,16 +13,30 @@ export interface UploadItem {
 }
 
 function size(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} kB`;
+  return bytes >= 1024 * 1024
+    ? `${(bytes / 1024 / 1024).toFixed(1)} MB`
+    : `${Math.max(1, Math.round(bytes / 1024))} kB`;
 }
 
-type Progress = { state: "idle" } | { state: "sending"; percent: number } | { state: "failed"; message: string } | { state: "done"; name: string };
+type Progress =
+  | { state: "idle" }
+  | { state: "sending"; percent: number }
+  | { state: "failed"; message: string }
+  | { state: "done"; name: string };
 
 /**
  * Drawings and photos for a revision. Sent with XMLHttpRequest rather than fetch because only XHR
  * reports upload progress; the server checks type, size and authorship again whatever this shows.
  */
-export function UploadPanel({ revisionId, uploads, editable }: { revisionId: number; uploads: UploadItem[]; editable: boolean }) {
+export function UploadPanel({
+  revisionId,
+  uploads,
+  editable,
+}: {
+  revisionId: number;
+  uploads: UploadItem[];
+  editable: boolean;
+}) {
   const csrf = useRootData()?.csrfToken ?? "";
   const revalidator = useRevalidator();
   const fileInput = useRef<HTMLInputElement>(null);
@@ -34,11 +48,13 @@ export function UploadPanel({ revisionId, uploads, editable }: { revisionId: num
     xhr.open("POST", `/desk/revisions/${revisionId}/uploads`);
     xhr.responseType = "json";
     xhr.upload.onprogress = (event) => {
-      if (event.lengthComputable) setProgress({ state: "sending", percent: Math.round((event.loaded / event.total) * 100) });
+      if (event.lengthComputable)
+        setProgress({ state: "sending", percent: Math.round((event.loaded / event.total) * 100) });
     };
     xhr.onload = () => {
       const answer = xhr.response as { message?: string } | null;
-      if (xhr.status >= 400) setProgress({ state: "failed", message: answer?.message ?? `The server refused the file (${xhr.status}).` });
+      if (xhr.status >= 400)
+        setProgress({ state: "failed", message: answer?.message ?? `The server refused the file (${xhr.status}).` });
       else onDone();
       revalidator.revalidate();
     };
@@ -49,14 +65,19 @@ export function UploadPanel({ revisionId, uploads, editable }: { revisionId: num
 
   function send() {
     const file = fileInput.current?.files?.[0];
-    if (file && file.size > 5 * 1024 * 1024) return setProgress({ state: "failed", message: "That file is larger than 5 MB." });
+    if (file && file.size > 5 * 1024 * 1024)
+      return setProgress({ state: "failed", message: "That file is larger than 5 MB." });
     const body = new FormData();
     body.set("intent", "attach");
     if (file) body.set("file", file);
     body.set("caption", caption);
     // The same check the server makes, so a missing file or an overlong caption is said at once.
     const request = readUploadRequest(body);
-    if (!request.success || !file) return setProgress({ state: "failed", message: request.success ? "Choose a file to attach." : request.error.issues[0].message });
+    if (!request.success || !file)
+      return setProgress({
+        state: "failed",
+        message: request.success ? "Choose a file to attach." : request.error.issues[0].message,
+      });
     setProgress({ state: "sending", percent: 0 });
     post(body, () => {
       setProgress({ state: "done", name: file.name });
@@ -74,14 +95,30 @@ export function UploadPanel({ revisionId, uploads, editable }: { revisionId: num
 
   return (
     <section aria-labelledby="uploads-heading" className="space-y-3" data-testid="upload-panel">
-      <h2 id="uploads-heading" className="text-xl">Drawings and photos</h2>
+      <h2 id="uploads-heading" className="text-xl">
+        Drawings and photos
+      </h2>
       {uploads.length ? (
         <ul className="space-y-1 text-sm" data-testid="upload-list">
           {uploads.map((upload) => (
             <li key={upload.id} className="flex items-center gap-3">
-              <a href={upload.href} target="_blank" rel="noreferrer">{upload.name}</a>
-              <span className="text-graphite-soft">{upload.contentType.replace("image/", "").replace("application/", "").toUpperCase()} · {size(upload.byteSize)}{upload.caption ? ` · ${upload.caption}` : ""}</span>
-              {editable ? <button type="button" onClick={() => remove(upload.id)} className="text-stop underline-offset-2 hover:underline">Remove</button> : null}
+              <a href={upload.href} target="_blank" rel="noreferrer">
+                {upload.name}
+              </a>
+              <span className="text-graphite-soft">
+                {upload.contentType.replace("image/", "").replace("application/", "").toUpperCase()} ·{" "}
+                {size(upload.byteSize)}
+                {upload.caption ? ` · ${upload.caption}` : ""}
+              </span>
+              {editable ? (
+                <button
+                  type="button"
+                  onClick={() => remove(upload.id)}
+                  className="text-stop underline-offset-2 hover:underline"
+                >
+                  Remove
+                </button>
+              ) : null}
             </li>
           ))}
         </ul>
@@ -92,13 +129,30 @@ export function UploadPanel({ revisionId, uploads, editable }: { revisionId: num
         <div className="flex flex-wrap items-end gap-3">
           <label className="flex flex-col text-sm">
             File (SVG, PNG, JPEG or PDF, up to 5 MB)
-            <input ref={fileInput} type="file" name="file" accept=".svg,.png,.jpg,.jpeg,.pdf,image/svg+xml,image/png,image/jpeg,application/pdf" className="text-sm" />
+            <input
+              ref={fileInput}
+              type="file"
+              name="file"
+              accept=".svg,.png,.jpg,.jpeg,.pdf,image/svg+xml,image/png,image/jpeg,application/pdf"
+              className="text-sm"
+            />
           </label>
           <label className="flex flex-col text-sm">
             Caption
-            <input value={caption} onChange={(e) => setCaption(e.target.value)} className="rounded border border-rule bg-sheet px-2 py-1" />
+            <input
+              value={caption}
+              onChange={(e) => setCaption(e.target.value)}
+              className="rounded border border-rule bg-sheet px-2 py-1"
+            />
           </label>
-          <button type="button" onClick={send} disabled={progress.state === "sending"} className="rounded border border-rule px-3 py-1">Attach</button>
+          <button
+            type="button"
+            onClick={send}
+            disabled={progress.state === "sending"}
+            className="rounded border border-rule px-3 py-1"
+          >
+            Attach
+          </button>
         </div>
       ) : null}
       <div aria-live="polite" className="text-sm" data-testid="upload-status">

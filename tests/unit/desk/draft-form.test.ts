@@ -6,16 +6,47 @@ import { describe, expect, test } from "vitest";
 import { draftFormSchema, validateDraft, valuesFromFrontMatter, type DraftFormValues } from "~/desk/draft-form";
 
 const values: DraftFormValues = {
-  slug: "test-wall", title: "Test wall for the form", summary: "A summary long enough to pass the card rule.",
-  assembly: "above-grade-wall", substrate: "wood-frame", below_grade: "none", strategy: "cavity-only", tier: "free",
-  zones: ["5A"], sets: [], references: "IRC 2021 R702.7\n\n", change_note: "", body: "## Why it works\n\n## Install sequence\n\n## Cautions\n",
+  slug: "test-wall",
+  title: "Test wall for the form",
+  summary: "A summary long enough to pass the card rule.",
+  assembly: "above-grade-wall",
+  substrate: "wood-frame",
+  below_grade: "none",
+  strategy: "cavity-only",
+  tier: "free",
+  zones: ["5A"],
+  sets: [],
+  references: "IRC 2021 R702.7\n\n",
+  change_note: "",
+  body: "## Why it works\n\n## Install sequence\n\n## Cautions\n",
   layers: [
-    { role: "cladding", material: "vinyl-siding", thickness_mm: "2", framing_material: "", framing_fraction: "", joints: "" },
-    { role: "insulation", material: "fibreglass-batt", thickness_mm: "140", framing_material: "", framing_fraction: "0.23", joints: "" },
+    {
+      role: "cladding",
+      material: "vinyl-siding",
+      thickness_mm: "2",
+      framing_material: "",
+      framing_fraction: "",
+      joints: "",
+    },
+    {
+      role: "insulation",
+      material: "fibreglass-batt",
+      thickness_mm: "140",
+      framing_material: "",
+      framing_fraction: "0.23",
+      joints: "",
+    },
   ],
 };
 const knownMaterials = ["vinyl-siding", "fibreglass-batt", "softwood-lumber", "osb"];
-const context = { author: "Test Author", revision: 1, revised: "2026-12-03", knownMaterials, knownSets: [] as string[], forSubmission: true };
+const context = {
+  author: "Test Author",
+  revision: 1,
+  revised: "2026-12-03",
+  knownMaterials,
+  knownSets: [] as string[],
+  forSubmission: true,
+};
 
 /** The form as the browser posts it: conform's names, layer rows as `layers[i].field`. */
 function posted(draft: DraftFormValues, intent: "save" | "submit" = "save"): FormData {
@@ -43,14 +74,20 @@ describe("the schema conform parses the form with (page and action alike)", () =
     const submission = parseWithZod(posted(values), { schema });
     expect(submission.status).toBe("success");
     if (submission.status !== "success") return;
-    expect(submission.value.layers.map((layer) => [layer.role, layer.material, layer.framing_fraction])).toEqual([["cladding", "vinyl-siding", ""], ["insulation", "fibreglass-batt", "0.23"]]);
+    expect(submission.value.layers.map((layer) => [layer.role, layer.material, layer.framing_fraction])).toEqual([
+      ["cladding", "vinyl-siding", ""],
+      ["insulation", "fibreglass-batt", "0.23"],
+    ]);
     expect(submission.value.intent).toBe("save");
   });
 
   test("a single ticked zone is still a list, and empty fields read as empty text", () => {
     const form = posted({ ...values, zones: ["6A"], change_note: "" });
     const submission = parseWithZod(form, { schema });
-    expect(submission.status === "success" && [submission.value.zones, submission.value.change_note]).toEqual([["6A"], ""]);
+    expect(submission.status === "success" && [submission.value.zones, submission.value.change_note]).toEqual([
+      ["6A"],
+      "",
+    ]);
   });
 
   test("layer problems come back under their row's index path, and every typed value is kept", () => {
@@ -61,19 +98,40 @@ describe("the schema conform parses the form with (page and action alike)", () =
       layers: [
         { ...values.layers[0], thickness_mm: "-5" },
         { ...values.layers[1], material: "unobtainium-board", framing_fraction: "1.5" },
-        { role: "sheathing", material: "osb", thickness_mm: "thick", framing_material: "", framing_fraction: "", joints: "" },
+        {
+          role: "sheathing",
+          material: "osb",
+          thickness_mm: "thick",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
       ],
     };
     const submission = parseWithZod(posted(typed), { schema });
     expect(submission.status).toBe("error");
     const errors = errorsOf(submission);
-    expect(Object.keys(errors).sort()).toEqual(["layers[0].thickness_mm", "layers[1].framing_fraction", "layers[1].material", "layers[2].thickness_mm", "title", "zones"]);
+    expect(Object.keys(errors).sort()).toEqual([
+      "layers[0].thickness_mm",
+      "layers[1].framing_fraction",
+      "layers[1].material",
+      "layers[2].thickness_mm",
+      "title",
+      "zones",
+    ]);
     expect(errors["layers[1].material"]).toEqual(["“unobtainium-board” is not in the material library."]);
     expect(errors["layers[2].thickness_mm"]?.join(" ")).toMatch(/thickness in millimetres/);
     expect(errors.zones).toEqual(["Tick at least one climate zone."]);
 
     const reply = submission.reply();
-    expect(reply.initialValue).toMatchObject({ title: "Rim", layers: [{ thickness_mm: "-5" }, { material: "unobtainium-board", framing_fraction: "1.5" }, { thickness_mm: "thick" }] });
+    expect(reply.initialValue).toMatchObject({
+      title: "Rim",
+      layers: [
+        { thickness_mm: "-5" },
+        { material: "unobtainium-board", framing_fraction: "1.5" },
+        { thickness_mm: "thick" },
+      ],
+    });
   });
 
   test("fewer than two layers is the list's own error", () => {
@@ -90,7 +148,9 @@ describe("the schema conform parses the form with (page and action alike)", () =
   });
 
   test("a revision above 1 needs its change note, reported on the change-note field", () => {
-    const submission = parseWithZod(posted(values), { schema: draftFormSchema({ revision: 2, knownMaterials, knownSets: [] }) });
+    const submission = parseWithZod(posted(values), {
+      schema: draftFormSchema({ revision: 2, knownMaterials, knownSets: [] }),
+    });
     expect(errorsOf(submission)).toEqual({ change_note: [expect.stringMatching(/what changed/)] });
   });
 
@@ -105,12 +165,20 @@ describe("the server's check before saving", () => {
     const result = validateDraft(values, context);
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    expect(result.front).toMatchObject({ author: "Test Author", reviewer: "(awaiting review)", revision: 1, references: ["IRC 2021 R702.7"] });
+    expect(result.front).toMatchObject({
+      author: "Test Author",
+      reviewer: "(awaiting review)",
+      revision: 1,
+      references: ["IRC 2021 R702.7"],
+    });
     expect(result.front.layers[1].framing).toEqual({ material: "softwood-lumber", fraction: 0.23 });
   });
 
   test("errors are keyed by the names conform gives the fields", () => {
-    const result = validateDraft({ ...values, layers: [values.layers[0], { ...values.layers[1], thickness_mm: "0" }] }, context);
+    const result = validateDraft(
+      { ...values, layers: [values.layers[0], { ...values.layers[1], thickness_mm: "0" }] },
+      context,
+    );
     expect(result.ok ? {} : result.errors).toEqual({ "layers[1].thickness_mm": [expect.stringMatching(/above 0/)] });
   });
 
@@ -120,7 +188,10 @@ describe("the server's check before saving", () => {
     const keep = { layers: [earlier.front.layers[0], { ...earlier.front.layers[1], note: "Friction-fit, no gaps." }] };
     const kept = validateDraft(values, { ...context, keep });
     expect(kept.ok && kept.front.layers[1].note).toBe("Friction-fit, no gaps.");
-    const swapped = validateDraft({ ...values, layers: [values.layers[0], { ...values.layers[1], material: "osb", framing_fraction: "" }] }, { ...context, keep });
+    const swapped = validateDraft(
+      { ...values, layers: [values.layers[0], { ...values.layers[1], material: "osb", framing_fraction: "" }] },
+      { ...context, keep },
+    );
     expect(swapped.ok && swapped.front.layers[1].note).toBeUndefined();
   });
 

@@ -6,14 +6,24 @@ import { expect, test } from "vitest";
 import { materialFormSchema, materialToForm, type MaterialFormValues } from "~/desk/material-form";
 
 const values: MaterialFormValues = {
-  name: "Test board", family: "foam-board", thermal_kind: "conductivity", thermal_value: "0.029",
-  thermal_source: "Test value for the form, D", permeance_ng: "60", at_thickness_mm: "25.4", wet_cup_ng: "",
-  curve: "", vapour_source: "Test value for the form, D", flags: ["foam_plastic"], notes: "",
+  name: "Test board",
+  family: "foam-board",
+  thermal_kind: "conductivity",
+  thermal_value: "0.029",
+  thermal_source: "Test value for the form, D",
+  permeance_ng: "60",
+  at_thickness_mm: "25.4",
+  wet_cup_ng: "",
+  curve: "",
+  vapour_source: "Test value for the form, D",
+  flags: ["foam_plastic"],
+  notes: "",
 };
 
 function posted(material: MaterialFormValues): FormData {
   const form = new FormData();
-  for (const [key, value] of Object.entries(material)) for (const item of Array.isArray(value) ? value : [value]) form.append(key, item);
+  for (const [key, value] of Object.entries(material))
+    for (const item of Array.isArray(value) ? value : [value]) form.append(key, item);
   return form;
 }
 
@@ -23,7 +33,13 @@ test("a valid form becomes the material itself, flags as booleans and blank opti
   const submission = parseWithZod(posted(values), { schema });
   expect(submission.status).toBe("success");
   if (submission.status !== "success") return;
-  expect(submission.value).toMatchObject({ slug: "test-board", thermal: { conductivity_w_mk: 0.029 }, vapour: { permeance_ng: 60, at_thickness_mm: 25.4 }, foam_plastic: true, water_sensitive: false });
+  expect(submission.value).toMatchObject({
+    slug: "test-board",
+    thermal: { conductivity_w_mk: 0.029 },
+    vapour: { permeance_ng: 60, at_thickness_mm: 25.4 },
+    foam_plastic: true,
+    water_sensitive: false,
+  });
   expect(submission.value.vapour).not.toHaveProperty("wet_cup_ng");
   // Read back into the form, the material gives the same fields.
   expect(materialToForm(submission.value)).toEqual(values);
