@@ -1,10 +1,12 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect } from "react-router";
-import { z } from "zod";
 import type { Route } from "./+types/billing";
 import { requireCsrf } from "~/auth/csrf.server";
 import { userContext } from "~/auth/guards.server";
 import { CsrfField } from "~/components/csrf-field";
 import { billingOverview, requestPlanEnd } from "~/payments/billing.server";
+import { planChangeSchema } from "~/payments/plan-change-form";
 import { ENTITLEMENT_STATUS_LABELS } from "~/vocabulary/entitlements";
 
 export const meta: Route.MetaFunction = () => [{ title: "Billing — Dryside" }];
@@ -19,16 +21,14 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   return { ...overview, waiting };
 }
 
-const planChangeSchema = z.object({ intent: z.enum(["end-at-period-end", "keep-running"]) });
-
 export async function action({ request, context }: Route.ActionArgs) {
   const user = context.get(userContext);
   const form = await requireCsrf(request);
-  const parsed = planChangeSchema.safeParse(Object.fromEntries(form));
-  if (!parsed.success) return data({ message: "That change was not understood." }, { status: 400 });
-  const ending = parsed.data.intent === "end-at-period-end";
+  const submission = parseWithZod(form, { schema: planChangeSchema });
+  if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
+  const ending = submission.value.intent === "end-at-period-end";
   const result = await requestPlanEnd(user, ending);
-  if (!result.ok) return data({ message: result.message }, { status: 409 });
+  if (!result.ok) return data({ result: submission.reply({ formErrors: [result.message] }) }, { status: 409 });
   return redirect(`/account/billing?requested=${ending ? "end" : "keep"}`, { status: 303 });
 }
 
@@ -39,6 +39,11 @@ function day(iso: string | null): string {
 export default function Billing({ loaderData, actionData }: Route.ComponentProps) {
   const { plan, sets, receipts, downloads, waiting } = loaderData;
   const running = plan?.live;
+  const [form, fields] = useForm({
+    lastResult: actionData?.result,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: planChangeSchema }),
+  });
+  const refusal = Object.values(form.allErrors).flat();
   return (
     <div className="flex flex-col gap-10">
       {waiting && <meta httpEquiv="refresh" content="2" />}
@@ -46,7 +51,7 @@ export default function Billing({ loaderData, actionData }: Route.ComponentProps
         <h1 className="text-3xl">Billing</h1>
         <p className="mt-2 text-graphite-soft"><Link to="/account">Back to your account</Link></p>
       </header>
-      {actionData?.message && <p role="alert" className="text-sm">{actionData.message}</p>}
+      {refusal.length > 0 && <p id={form.errorId} role="alert" className="text-sm">{refusal.join(" ")}</p>}
       {waiting && <p role="status" className="text-sm" data-testid="billing-waiting">Change sent to the payments service; this page updates when it confirms.</p>}
 
       <section aria-labelledby="plan-heading" className="rounded border border-rule bg-sheet p-6" data-testid="billing-plan">
@@ -62,12 +67,12 @@ export default function Billing({ loaderData, actionData }: Route.ComponentProps
               <dd data-testid="plan-date">{day(plan.renewsOrEndsAt)}</dd>
             </dl>
             {running && (
-              <Form method="post" className="mt-4">
+              <Form method="post" {...getFormProps(form)} className="mt-4">
                 <CsrfField />
                 {plan.cancelAtPeriodEnd ? (
-                  <button name="intent" value="keep-running" className="rounded border border-rule px-3 py-2" data-testid="plan-resume">Keep my plan running</button>
+                  <button name={fields.intent.name} value="keep-running" className="rounded border border-rule px-3 py-2" data-testid="plan-resume">Keep my plan running</button>
                 ) : (
-                  <button name="intent" value="end-at-period-end" className="rounded border border-rule px-3 py-2" data-testid="plan-cancel">Stop at the end of this period</button>
+                  <button name={fields.intent.name} value="end-at-period-end" className="rounded border border-rule px-3 py-2" data-testid="plan-cancel">Stop at the end of this period</button>
                 )}
               </Form>
             )}

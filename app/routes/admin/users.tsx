@@ -1,4 +1,6 @@
+import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
+import type { ReactNode } from "react";
 import { Form, data, useSearchParams } from "react-router";
 import type { Route } from "./+types/users";
 import { requireCsrf } from "~/auth/csrf.server";
@@ -35,6 +37,17 @@ export async function action({ request, context }: Route.ActionArgs) {
   }
 }
 
+/** One change to one account (its hidden fields say which), checked with the action's schema before it is sent. */
+function UserAdminForm({ className, children }: { className?: string; children: ReactNode }) {
+  const [form] = useForm({ onValidate: ({ formData }) => parseWithZod(formData, { schema: userAdminSchema }) });
+  return (
+    <Form method="post" {...getFormProps(form)} className={className}>
+      <CsrfField />
+      {children}
+    </Form>
+  );
+}
+
 export default function AdminUsers({ loaderData, actionData }: Route.ComponentProps) {
   const [searchParams] = useSearchParams();
   return (
@@ -63,8 +76,7 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                 {user.id === loaderData.selfId ? (
                   user.role
                 ) : (
-                  <Form method="post" className="flex gap-2">
-                    <CsrfField />
+                  <UserAdminForm className="flex gap-2">
                     <input type="hidden" name="intent" value="change-role" />
                     <input type="hidden" name="userId" value={user.id} />
                     <label className="sr-only" htmlFor={`role-${user.id}`}>Role of {user.displayName}</label>
@@ -72,16 +84,15 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                       {STAFF_ROLES.map((role) => <option key={role} value={role}>{STAFF_ROLE_LABELS[role]}</option>)}
                     </select>
                     <button className="rounded border border-rule px-2 py-1">Change</button>
-                  </Form>
+                  </UserAdminForm>
                 )}
               </td>
               <td>
-                <Form method="post">
-                  <CsrfField />
+                <UserAdminForm>
                   <input type="hidden" name="intent" value="revoke-sessions" />
                   <input type="hidden" name="userId" value={user.id} />
                   <button className="text-stop underline-offset-2 hover:underline" disabled={user.liveSessions === 0}>Sign out everywhere</button>
-                </Form>
+                </UserAdminForm>
               </td>
             </tr>
           ))}

@@ -1,3 +1,4 @@
+import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Link, redirect } from "react-router";
 import type { Route } from "./+types/index";
 import { getViewer } from "~/access/viewer.server";
@@ -19,9 +20,10 @@ export async function loader({ context }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   const user = requireUser(request, context);
   const form = await requireCsrf(request);
-  const parsed = checkoutFormSchema.safeParse(Object.fromEntries(form));
-  if (!parsed.success) return data({ message: "Choose a plan or a set to buy." }, { status: 400 });
-  const purchase = parsed.data.kind === "plan" ? { kind: "plan" as const, plan: parsed.data.plan } : { kind: "set" as const, set: parsed.data.set };
+  const submission = parseWithZod(form, { schema: checkoutFormSchema });
+  if (submission.status !== "success") return data({ message: "Choose a plan or a set to buy." }, { status: 400 });
+  const chosen = submission.value;
+  const purchase = chosen.kind === "plan" ? { kind: "plan" as const, plan: chosen.plan } : { kind: "set" as const, set: chosen.set };
   const started = await startCheckout(user, purchase);
   if (!started.ok) return data({ message: started.message }, { status: started.status });
   return redirect(started.url, { status: 303 });
