@@ -3,7 +3,6 @@ import type { User } from "~/models/index.server";
 import { roleAtLeast, type StaffRole } from "~/vocabulary/roles";
 import { findSessionUser } from "./session.server";
 
-export { roleAtLeast, isStaffRole, STAFF_ROLES, type StaffRole } from "~/vocabulary/roles";
 
 /** The fields of a user that any page may show; never the hash or the payment ids. */
 export interface PublicUser {

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { STAFF_ROLES } from "~/vocabulary/roles";
 
 // Shared by the forms (client-side hints) and the actions (the check that counts).
-const PASSWORD_MIN = 12; // same as password.server.ts; NIST SP 800-63B asks for at least 8, we ask a little more
+const PASSWORD_MIN = 12; // NIST SP 800-63B asks for at least 8; we ask a little more
 const PASSWORD_MAX = 200;
 
 const email = z.string({ error: "Enter your e-mail address." }).trim().max(254).pipe(z.email({ error: "Enter an e-mail address like name@example.com." }));

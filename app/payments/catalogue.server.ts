@@ -37,7 +37,6 @@ export const PLANS: readonly Plan[] = [
   },
 ];
 
-export type PlanSlug = Plan["slug"];
 
 export function findPlan(slug: string): Plan | undefined {
   return PLANS.find((plan) => plan.slug === slug);

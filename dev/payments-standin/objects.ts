@@ -246,6 +246,3 @@ export function addInterval(from: number, interval: Interval, count: number): nu
   return Math.floor(date.getTime() / 1000);
 }
 
-export function emptyList<T>(url: string): ListObject<T> {
-  return { object: "list", data: [], has_more: false, url };
-}

@@ -1,6 +1,7 @@
 import type { Route } from "./+types/index";
 import { Link } from "react-router";
-import { type StaffRole, userContext } from "~/auth/guards.server";
+import { userContext } from "~/auth/guards.server";
+import type { StaffRole } from "~/vocabulary/roles";
 import { listSaved } from "~/desk/saved.server";
 import { billingOverview } from "~/payments/billing.server";
 import { STAFF_ROLE_DESCRIPTIONS } from "~/vocabulary/roles";
