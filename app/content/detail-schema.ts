@@ -63,7 +63,7 @@ export const detailFrontMatterSchema = z
     references: z.array(z.string().min(5).max(200)).min(1),
     layers: z.array(layerSchema).min(2),
     /** Stop or caution flags of its own site check in zones it claims, each with the reason. */
-    site_check_flags: z.array(acceptedFlagSchema).default([]),
+    site_check_flags: z.array(acceptedFlagSchema).min(1).optional(),
   })
   .superRefine((detail, ctx) => {
     // Review needs a second pair of eyes (DESIGN.md: never their own).

@@ -232,7 +232,9 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   }
 
   const pos = prep.positions;
-  const pSat = t.map(saturationPressure);
+  // Layers outboard of a ventilated cavity or a fixed surface share one temperature: compute once.
+  const pSat = new Array<number>(n + 1);
+  for (let k = 0; k <= n; k++) pSat[k] = k > 0 && t[k] === t[k - 1] ? pSat[k - 1] : saturationPressure(t[k]);
   const pExt = c.saturatedSource ? pSat[c.vapourStart] : c.exterior.p_v_pa;
   const pInt = c.interior.p_v_pa;
 

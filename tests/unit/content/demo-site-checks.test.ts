@@ -18,7 +18,7 @@ test("no demo detail claims a zone where its own site check stops or cautions wi
   for (const { detail, zone, flags } of checks) {
     for (const flag of flags) {
       if (flag.severity === "note") continue;
-      const answered = detail.site_check_flags.some((a) => flag.id === a.flag && (a.zones === undefined || a.zones.includes(zone as never)));
+      const answered = (detail.site_check_flags ?? []).some((a) => flag.id === a.flag && (a.zones === undefined || a.zones.includes(zone as never)));
       if (!answered) unanswered.push(`${detail.slug} @ ${zone}: ${flag.id} (${flag.severity})`);
     }
   }
@@ -32,7 +32,7 @@ test("no demo detail carries a stop in a zone it claims, whatever it says", () =
 
 test("every answered flag still arises in a zone it names (no stale reasons)", () => {
   for (const detail of loaded.details) {
-    for (const accepted of detail.site_check_flags) {
+    for (const accepted of detail.site_check_flags ?? []) {
       const zones = accepted.zones ?? detail.zones;
       const raised = checks.some((c) => c.detail === detail && zones.includes(c.zone as never) && c.flags.some((f) => f.id === accepted.flag && f.severity !== "note"));
       expect(raised, `${detail.slug}: ${accepted.flag}`).toBe(true);
