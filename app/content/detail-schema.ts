@@ -33,6 +33,13 @@ export const layerSchema = z.strictObject({
   framing: framingSchema.optional(),
 });
 
+/** A site-check flag the detail has been reviewed against: the reason it still claims those zones. */
+const acceptedFlagSchema = z.strictObject({
+  flag: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "must be a flag id"),
+  zones: z.array(z.enum(CLIMATE_ZONE_IDS)).min(1).optional(),
+  because: z.string().min(40).max(600),
+});
+
 export const detailFrontMatterSchema = z
   .strictObject({
     slug: slugSchema,
@@ -55,6 +62,8 @@ export const detailFrontMatterSchema = z
     reviewer: z.string().min(2).max(80),
     references: z.array(z.string().min(5).max(200)).min(1),
     layers: z.array(layerSchema).min(2),
+    /** Stop or caution flags of its own site check in zones it claims, each with the reason. */
+    site_check_flags: z.array(acceptedFlagSchema).min(1).optional(),
   })
   .superRefine((detail, ctx) => {
     // Review needs a second pair of eyes (DESIGN.md: never their own).

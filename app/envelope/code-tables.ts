@@ -9,7 +9,15 @@ import { rsiToRip } from "./units";
 /** One compliance option: cavity R ≥ cavity and continuous R ≥ ci (IP R-values). */
 export interface InsulationOption { cavity: number; ci: number; text: string }
 
+const parsedOptions = new Map<string, InsulationOption>();
+/** Parsed once per distinct option text (the tables are constant). */
 function opt(text: string): InsulationOption {
+  let parsed = parsedOptions.get(text);
+  if (!parsed) { parsed = parseOption(text); parsedOptions.set(text, parsed); }
+  return parsed;
+}
+
+function parseOption(text: string): InsulationOption {
   // "20+5ci", "13+5" (2018 wording), "15ci", "19", "0+10ci"
   const m = /^(\d+(?:\.\d+)?)(ci)?(?:\+(\d+(?:\.\d+)?)(?:ci)?)?$/.exec(text);
   if (!m) throw new Error(`bad code option ${text}`);

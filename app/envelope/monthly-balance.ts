@@ -299,9 +299,11 @@ function mouldCheck(a: ResolvedAssembly, s: Stack, months: readonly MonthConditi
   const byMonth = months.map((m) => {
     const te = groundT ?? m.outdoor.t_c;
     const ti = m.indoor.t_c;
-    if (ti - te < 0.5 || m.indoor.p_v_pa <= 0) return null;
+    // Bone-dry indoor air (dew point below about −90 °C) asks nothing of the surface.
+    if (ti - te < 0.5 || m.indoor.p_v_pa / CRITICAL_SURFACE_RH < 0.01) return null;
     const tsiMin = dewPointFromVapourPressure(m.indoor.p_v_pa / CRITICAL_SURFACE_RH);
-    return (tsiMin - te) / (ti - te);
+    const f = (tsiMin - te) / (ti - te);
+    return Number.isFinite(f) ? f : null;
   });
   let fRsiMax: number | null = null;
   let criticalMonth: number | null = null;

@@ -10,7 +10,7 @@
 import { hasTemperatureDependentConductivity, isInsulation, lowerName, materialRsi, materialRsiAt, type ResolvedAssembly } from "./layers";
 import { dewPointFromVapourPressure, saturationPressure } from "./psychrometrics";
 import { filmsFor, isBelowGrade, type HeatPath, type Season } from "./thermal";
-import type { CondensationPlane, ProfileCase, ProfileInterface, VapourLayer } from "./types";
+import type { CondensationPlane, LayerVapourClass, ProfileCase, ProfileInterface, VapourLayer } from "./types";
 import { cToF, kgPerSToGPerDay, ngToPerm, rsiToRip } from "./units";
 import { cavityPermeance, dryPermeances, isRhDependent, retarderClass } from "./vapour";
 
@@ -50,82 +50,121 @@ const RH_DAMP_AFTER = 4;
 const MAX_T_ITERATIONS = 20;
 const T_SETTLED = 1e-4;
 
-/** A point of the Glaser diagram; k is the interface index, or −1 for a boundary air state. */
-interface Point { z: number; p: number; k: number }
+// The Glaser string is built in module-level scratch arrays (grown on demand): the hull is rebuilt
+// on every permeance pass, and allocating points each time was most of a profile's garbage.
+let capacity = 0;
+let candZ = new Float64Array(0);
+let candP = new Float64Array(0);
+let candK = new Int32Array(0);
+let hullZ = new Float64Array(0);
+let hullP = new Float64Array(0);
+let hullK = new Int32Array(0);
+function ensureCapacity(points: number): void {
+  if (points <= capacity) return;
+  capacity = Math.max(points, 2 * capacity, 32);
+  candZ = new Float64Array(capacity); candP = new Float64Array(capacity); candK = new Int32Array(capacity);
+  hullZ = new Float64Array(capacity); hullP = new Float64Array(capacity); hullK = new Int32Array(capacity);
+}
 
-/** Lower convex hull (Andrew's monotone chain) of points sorted by z, one point per z. */
-function lowerHull(points: readonly Point[]): Point[] {
-  const hull: Point[] = [];
-  for (const pt of points) {
-    while (hull.length >= 2) {
-      const a = hull[hull.length - 2];
-      const b = hull[hull.length - 1];
-      // Keep b only if it lies strictly below the chord a→pt (a convex turn).
-      const cross = (b.z - a.z) * (pt.p - a.p) - (b.p - a.p) * (pt.z - a.z);
-      if (cross <= 0) hull.pop();
+/** Adds a point to the candidates sorted by z, keeping one point per z: the lowest pressure, the
+ * boundary air state (k = −1) on a tie, so a surface exactly at saturation is not a plane. */
+function pushByZ(count: number, z: number, p: number, k: number): number {
+  if (count > 0 && candZ[count - 1] === z) {
+    if (p < candP[count - 1] || (p === candP[count - 1] && k < candK[count - 1])) { candP[count - 1] = p; candK[count - 1] = k; }
+    return count;
+  }
+  candZ[count] = z; candP[count] = p; candK[count] = k;
+  return count + 1;
+}
+
+/** The Glaser string over (z, p_sat) between the two boundary vapour pressures: the lower convex
+ * hull (Andrew's monotone chain) of the candidates, into hullZ/hullP/hullK. zCum rises
+ * monotonically, so the candidates arrive sorted. Returns the hull's length; k is the interface
+ * index, or −1 for a boundary air state. */
+function glaserString(zCum: readonly number[], pSat: readonly number[], pExt: number, pInt: number): number {
+  const n = zCum.length - 1;
+  ensureCapacity(n + 3);
+  let count = pushByZ(0, 0, pExt, -1);
+  for (let k = 0; k <= n; k++) count = pushByZ(count, zCum[k], pSat[k], k);
+  count = pushByZ(count, zCum[n], pInt, -1);
+  let h = 0;
+  for (let i = 0; i < count; i++) {
+    const z = candZ[i];
+    const p = candP[i];
+    while (h >= 2) {
+      // Keep the last point only if it lies strictly below the chord from the one before to this one.
+      const cross = (hullZ[h - 1] - hullZ[h - 2]) * (p - hullP[h - 2]) - (hullP[h - 1] - hullP[h - 2]) * (z - hullZ[h - 2]);
+      if (cross <= 0) h--;
       else break;
     }
-    hull.push(pt);
+    hullZ[h] = z; hullP[h] = p; hullK[h] = candK[i];
+    h++;
   }
-  return hull;
+  return h;
 }
 
-/** Adds pt to points sorted by z, keeping one point per z: the lowest pressure, the boundary air
- * state on a tie (so a surface exactly at saturation is not a plane). */
-function pushByZ(points: Point[], pt: Point): void {
-  const last = points[points.length - 1];
-  if (last !== undefined && last.z === pt.z) {
-    if (pt.p < last.p || (pt.p === last.p && pt.k < last.k)) points[points.length - 1] = pt;
-    return;
+/** What a profile needs of an assembly that does not depend on the case: computed once. */
+interface Prepared {
+  labels: string[];
+  positions: number[];
+  dry: readonly number[];
+  dryPermUs: number[];
+  dryClass: LayerVapourClass[];
+  dependent: boolean[];
+  anyDependent: boolean;
+  /** Dry-cup permeance along the clear-cavity path (the fill alone in framed layers). */
+  cavityDry: number[];
+  innermostInsulation: number;
+  outermostInsulation: number;
+}
+
+const preparedCache = new WeakMap<ResolvedAssembly, Prepared>();
+function prepare(a: ResolvedAssembly): Prepared {
+  let p = preparedCache.get(a);
+  if (p) return p;
+  const n = a.layers.length;
+  const positions = new Array<number>(n + 1);
+  let x = 0;
+  for (let k = 0; k <= n; k++) {
+    positions[k] = Math.round(x * 1e6) / 1e6; // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
+    if (k < n) x += a.layers[k].thickness_mm;
   }
-  points.push(pt);
+  const dependent = new Array<boolean>(n);
+  const cavityDry = new Array<number>(n);
+  let anyDependent = false;
+  let innermost = -1;
+  let outermost = -1;
+  for (let i = 0; i < n; i++) {
+    const l = a.layers[i];
+    dependent[i] = isRhDependent(l.material);
+    anyDependent ||= dependent[i];
+    cavityDry[i] = cavityPermeance(l);
+    if (isInsulation(l)) { innermost = i; if (outermost < 0) outermost = i; }
+  }
+  const dry = dryPermeances(a);
+  p = { labels: interfaceLabels(a), positions, dry, dryPermUs: dry.map(ngToPerm), dryClass: dry.map(retarderClass), dependent, anyDependent, cavityDry, innermostInsulation: innermost, outermostInsulation: outermost };
+  preparedCache.set(a, p);
+  return p;
 }
 
-/** The Glaser string over (z, p_sat) between the two boundary vapour pressures. zCum rises
- * monotonically, so the points arrive sorted. */
-function glaserString(zCum: readonly number[], pSat: readonly number[], pExt: number, pInt: number): Point[] {
-  const n = zCum.length - 1;
-  const pts: Point[] = [{ z: 0, p: pExt, k: -1 }];
-  for (let k = 0; k <= n; k++) pushByZ(pts, { z: zCum[k], p: pSat[k], k });
-  pushByZ(pts, { z: zCum[n], p: pInt, k: -1 });
-  return lowerHull(pts);
-}
-
-const labelCache = new WeakMap<ResolvedAssembly, string[]>();
 function interfaceLabels(a: ResolvedAssembly): string[] {
-  const cached = labelCache.get(a);
-  if (cached) return cached;
   const n = a.layers.length;
   const names = a.layers.map((l) => lowerName(l.material));
   const labels = [`${isBelowGrade(a.kind) ? "soil-side face" : "exterior face"} of ${names[0]}`];
   for (let i = 1; i < n; i++) labels.push(`${names[i - 1]} / ${names[i]}`);
   labels.push(`interior face of ${names[n - 1]}`);
-  labelCache.set(a, labels);
   return labels;
-}
-
-/** Vapour pressure on the Glaser string at cumulative resistance z. */
-function hullAt(hull: readonly Point[], z: number): number {
-  for (let i = 1; i < hull.length; i++) {
-    if (z <= hull[i].z) {
-      const h0 = hull[i - 1];
-      const h1 = hull[i];
-      return h1.z === h0.z ? Math.min(h0.p, h1.p) : h0.p + ((h1.p - h0.p) * (z - h0.z)) / (h1.z - h0.z);
-    }
-  }
-  return hull[hull.length - 1].p;
 }
 
 /** Candidate first condensing surface when the Glaser line does not condense: in winter the
  * inner face of the first vapour-resisting layer (≤ 10 perm) outboard of the innermost
  * insulation; in summer the outer face of the first such layer inboard of the outermost
  * insulation (e.g. interior polyethylene). */
-function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number, dry: readonly number[]): number {
+function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number, prep: Prepared): number {
   const n = a.layers.length;
-  const resists = (i: number) => retarderClass(dry[i]) !== "permeable";
-  let innermost = -1;
-  let outermost = -1;
-  for (const l of a.layers) if (isInsulation(l)) { innermost = l.index; if (outermost < 0) outermost = l.index; }
+  const resists = (i: number) => retarderClass(prep.dry[i]) !== "permeable";
+  let innermost = prep.innermostInsulation;
+  let outermost = prep.outermostInsulation;
   if (season === "winter") {
     if (innermost < 0) innermost = n - 1;
     for (let i = innermost - 1; i >= vapourStart; i--) if (resists(i)) return i + 1; // inner face of layer i
@@ -176,7 +215,8 @@ function pathTemperatures(a: ResolvedAssembly, c: CaseConditions, path: HeatPath
 
 export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileCase {
   const n = a.layers.length;
-  const labels = interfaceLabels(a);
+  const prep = prepare(a);
+  const labels = prep.labels;
   const films = filmsFor(a.kind, c.name);
   const thermalStart = c.thermalStart ?? 0;
   const extFilm = c.fixedSurface ? 0 : c.exteriorFilmRsi ?? (thermalStart > 0 ? films.interior.rsi : films.exterior?.rsi ?? 0);
@@ -191,38 +231,44 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     notes.push(`The ${lowerName(l.material)} is taken at its mean temperature of ${((t[i] + t[i + 1]) / 2).toFixed(1)} °C: R-${rsiToRip(layerR[i]).toFixed(1)} instead of its rated R-${rsiToRip(rated).toFixed(1)}.`);
   }
 
-  const pos = new Array<number>(n + 1);
-  let x = 0;
-  for (let k = 0; k <= n; k++) {
-    pos[k] = Math.round(x * 1e6) / 1e6; // thickness sums: keep 0.1 + 0.2 from showing as 0.30000000000000004
-    if (k < n) x += a.layers[k].thickness_mm;
-  }
-  const pSat = t.map(saturationPressure);
+  const pos = prep.positions;
+  // Layers outboard of a ventilated cavity or a fixed surface share one temperature: compute once.
+  const pSat = new Array<number>(n + 1);
+  for (let k = 0; k <= n; k++) pSat[k] = k > 0 && t[k] === t[k - 1] ? pSat[k - 1] : saturationPressure(t[k]);
   const pExt = c.saturatedSource ? pSat[c.vapourStart] : c.exterior.p_v_pa;
   const pInt = c.interior.p_v_pa;
 
   // Permeances along the clear-cavity path. RH-dependent layers are evaluated at the mean RH of
   // their two faces on the condensation-corrected profile (a condensing face is at 100 %), which
   // itself depends on them: iterate to a fixed point.
-  const dependent = a.layers.map((l) => isRhDependent(l.material));
-  const anyDependent = dependent.includes(true);
+  const { dependent, anyDependent } = prep;
   const startRh = (c.interior.rh + c.exterior.rh) / 2;
-  const perms = a.layers.map((l, i) => (dependent[i] ? cavityPermeance(l, startRh) : cavityPermeance(l)));
+  const perms = prep.cavityDry.slice();
+  for (let i = 0; i < n; i++) if (dependent[i]) perms[i] = cavityPermeance(a.layers[i], startRh);
+  const next = new Array<number>(n);
   const zCum = new Array<number>(n + 1);
   const pLinear = new Array<number>(n + 1);
   const pv = new Array<number>(n + 1);
-  let hull: Point[] = [];
+  let hullLength = 0;
   let converged = true;
   for (let pass = 0; ; pass++) {
     zCum[0] = 0;
     for (let i = 0; i < n; i++) zCum[i + 1] = zCum[i] + (i < c.vapourStart ? 0 : 1 / (perms[i] * NG_TO_KG));
     const zTot = zCum[n];
     for (let k = 0; k <= n; k++) pLinear[k] = pExt + ((pInt - pExt) * zCum[k]) / zTot;
-    hull = glaserString(zCum, pSat, pExt, pInt);
-    for (let k = 0; k <= n; k++) pv[k] = Math.min(hullAt(hull, zCum[k]), pLinear[k]);
+    hullLength = glaserString(zCum, pSat, pExt, pInt);
+    // zCum rises, so one walk along the string finds every interface's segment.
+    for (let k = 0, h = 1; k <= n; k++) {
+      const z = zCum[k];
+      while (h < hullLength && z > hullZ[h]) h++;
+      let p: number;
+      if (h >= hullLength) p = hullP[hullLength - 1];
+      else if (hullZ[h] === hullZ[h - 1]) p = Math.min(hullP[h - 1], hullP[h]);
+      else p = hullP[h - 1] + ((hullP[h] - hullP[h - 1]) * (z - hullZ[h - 1])) / (hullZ[h] - hullZ[h - 1]);
+      pv[k] = Math.min(p, pLinear[k]);
+    }
     if (!anyDependent) break;
     let settled = true;
-    const next = perms.slice();
     for (let i = 0; i < n; i++) {
       if (!dependent[i]) continue;
       const rh = (Math.min(100, (100 * pv[i]) / pSat[i]) + Math.min(100, (100 * pv[i + 1]) / pSat[i + 1])) / 2;
@@ -237,14 +283,13 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   if (!converged) notes.push("The humidity-dependent permeances did not settle within 0.5 %; the figures are from the last pass.");
   // Condensation planes: hull vertices that are saturation points below the straight line.
   const planes: CondensationPlane[] = [];
-  for (let h = 0; h < hull.length; h++) {
-    const v = hull[h];
-    const k = v.k;
+  for (let h = 0; h < hullLength; h++) {
+    const k = hullK[h];
     if (k < 0 || pLinear[k] <= pSat[k]) continue;
     // Flows in kg/(m²·s): from the interior side (higher z) and onward to the exterior side.
-    const inflow = h + 1 < hull.length ? (hull[h + 1].p - v.p) / (hull[h + 1].z - v.z) : 0;
-    const outflow = h > 0 ? (v.p - hull[h - 1].p) / (v.z - hull[h - 1].z) : 0;
-    const surface = h === 0 || h === hull.length - 1;
+    const inflow = h + 1 < hullLength ? (hullP[h + 1] - hullP[h]) / (hullZ[h + 1] - hullZ[h]) : 0;
+    const outflow = h > 0 ? (hullP[h] - hullP[h - 1]) / (hullZ[h] - hullZ[h - 1]) : 0;
+    const surface = h === 0 || h === hullLength - 1;
     // Flow toward the plane from both sides: inward drive arrives from the exterior side.
     const rate = Math.max(0, Math.abs(inflow - outflow));
     planes.push({
@@ -265,14 +310,14 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     };
   }
 
-  const dry = dryPermeances(a);
+  const dry = prep.dry;
   const first = planes.length === 0 ? null : c.name === "winter" ? planes[planes.length - 1] : planes[0];
   const sourceP = c.source === "interior" ? pInt : pExt;
   const sourceDew = dewPointFromVapourPressure(Math.max(sourceP, 1e-3));
-  const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart, dry);
+  const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart, prep);
   const vapourLayers: VapourLayer[] = new Array(n);
   for (let i = 0; i < n; i++) {
-    vapourLayers[i] = { index: i, material: a.layers[i].material.slug, perm_ng: dry[i], perm_us: ngToPerm(dry[i]), class: retarderClass(dry[i]), case_perm_ng: perms[i] };
+    vapourLayers[i] = { index: i, material: a.layers[i].material.slug, perm_ng: dry[i], perm_us: prep.dryPermUs[i], class: prep.dryClass[i], case_perm_ng: perms[i] };
   }
 
   return {

@@ -1,18 +1,18 @@
 // The one entry point: resolves the site and the layers, then runs thermal, vapour, profile,
 // code and rule checks and returns a plain-JSON result.
+import { analyseAssembly } from "./assembly-cache";
 import { resolveSite } from "./climate";
 import { resolveClimateYear } from "./climate-year";
 import { codeRows } from "./code-tables";
-import { lowerName, resolveAssembly, ventedCavityIndex, type ResolvedAssembly } from "./layers";
+import { lowerName, ventedCavityIndex, type ResolvedAssembly } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
 import { seasonalBalance } from "./monthly-balance";
 import { nbcRows } from "./nbc";
 import { computeProfile, type CaseConditions } from "./profile";
 import { saturationPressure } from "./psychrometrics";
 import { evaluateRules, isReservoirCladding, LOCAL_CODE_CAUTION } from "./rules";
-import { analyseThermal, filmsFor, isBelowGrade } from "./thermal";
+import { filmsFor, isBelowGrade } from "./thermal";
 import type { AssemblyInput, ResolvedSite, SiteCheckResult, SiteInput } from "./types";
-import { analyseVapour } from "./vapour";
 
 /** A roof deck open to a clear night sky radiates below the air temperature: the sol-air
  * correction εΔR/h_o for horizontal surfaces is 7 °F (3.9 K), 0 for vertical ones (ASHRAE HoF ch.18
@@ -113,9 +113,7 @@ export interface SiteCheckOptions { seasonal?: boolean }
 
 export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary, options: SiteCheckOptions = {}): SiteCheckResult {
   const resolvedSite = resolveSite(site);
-  const a = resolveAssembly(assembly, materials);
-  const thermal = analyseThermal(a);
-  const vapour = analyseVapour(a);
+  const { assembly: a, thermal, vapour } = analyseAssembly(assembly, materials);
   const winter = computeProfile(a, winterCase(a, resolvedSite));
   const summer = computeProfile(a, summerCase(a, resolvedSite));
   const upper = upperWallCases(a, resolvedSite);

@@ -1,7 +1,7 @@
 // Vapour permeance of layers, retarder classes (IRC 2021 R702.7(1): dry cup, Class I ≤ 0.1 perm,
 // II > 0.1 ≤ 1.0, III > 1.0 ≤ 10) and the drying directions of a stack.
 import type { Material, MaterialLibrary } from "./material-schema";
-import { isInsulation, resolveAssembly, type ResolvedAssembly, type ResolvedLayer } from "./layers";
+import { isInsulation, lowerName, resolveAssembly, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { AssemblyInput, InteriorClass, LayerVapourClass, VapourLayer, VapourResult } from "./types";
 import { ngToPerm } from "./units";
 
@@ -25,28 +25,39 @@ export function isRhDependent(m: Material): boolean {
   return m.vapour.curve !== undefined || m.vapour.wet_cup_ng !== undefined;
 }
 
+interface RhCurve { rh: number[]; p: number[]; ln: number[] }
+const curveCache = new WeakMap<Material, RhCurve | null>();
+/** The material's RH curve (or its dry/wet cup pair) with ln(permeance) at each point, built once. */
+function rhCurve(m: Material): RhCurve | null {
+  let c = curveCache.get(m);
+  if (c === undefined) {
+    const points: readonly (readonly [number, number])[] | undefined =
+      m.vapour.curve ??
+      (m.vapour.wet_cup_ng !== undefined
+        ? [[DRY_CUP_MEAN_RH, m.vapour.permeance_ng], [WET_CUP_MEAN_RH, m.vapour.wet_cup_ng]]
+        : undefined);
+    c = points ? { rh: points.map((q) => q[0]), p: points.map((q) => q[1]), ln: points.map((q) => Math.log(q[1])) } : null;
+    curveCache.set(m, c);
+  }
+  return c;
+}
+
 /** Permeance at a mean RH (percent): the curve, or dry/wet cup, interpolated in ln(permeance). */
 export function permeanceAtRh(m: Material, thickness_mm: number, rh: number): number {
-  const points: readonly (readonly [number, number])[] | undefined =
-    m.vapour.curve ??
-    (m.vapour.wet_cup_ng !== undefined
-      ? [[DRY_CUP_MEAN_RH, m.vapour.permeance_ng], [WET_CUP_MEAN_RH, m.vapour.wet_cup_ng]]
-      : undefined);
+  const c = rhCurve(m);
   const scale = thicknessScale(m, thickness_mm);
-  if (!points) return m.vapour.permeance_ng * scale;
+  if (!c) return m.vapour.permeance_ng * scale;
   const x = Math.min(100, Math.max(0, rh));
-  if (x <= points[0][0]) return points[0][1] * scale;
-  const last = points[points.length - 1];
-  if (x >= last[0]) return last[1] * scale;
-  for (let i = 1; i < points.length; i++) {
-    const [x1, y1] = points[i];
-    if (x <= x1) {
-      const [x0, y0] = points[i - 1];
-      const f = (x - x0) / (x1 - x0);
-      return Math.exp(Math.log(y0) + f * (Math.log(y1) - Math.log(y0))) * scale;
+  const last = c.rh.length - 1;
+  if (x <= c.rh[0]) return c.p[0] * scale;
+  if (x >= c.rh[last]) return c.p[last] * scale;
+  for (let i = 1; i <= last; i++) {
+    if (x <= c.rh[i]) {
+      const f = (x - c.rh[i - 1]) / (c.rh[i] - c.rh[i - 1]);
+      return Math.exp(c.ln[i - 1] + f * (c.ln[i] - c.ln[i - 1])) * scale;
     }
   }
-  return last[1] * scale;
+  return c.p[last] * scale;
 }
 
 /** Permeance of a resolved layer; framed layers combine cavity and framing in parallel
@@ -106,7 +117,14 @@ function isWaterSensitiveCore(layer: ResolvedLayer): boolean {
 
 /** Index range of the part of the stack that must dry: the water-sensitive layers (sheathing,
  * framing, fibrous fill), or else the structure and insulation. */
+const coreCache = new WeakMap<ResolvedAssembly, { first: number; last: number } | null>();
 export function coreRange(a: ResolvedAssembly): { first: number; last: number } | null {
+  let core = coreCache.get(a);
+  if (core === undefined) { core = findCoreRange(a); coreCache.set(a, core); }
+  return core;
+}
+
+function findCoreRange(a: ResolvedAssembly): { first: number; last: number } | null {
   // Layers outboard of a ventilated cavity (a vented attic, a rainscreen) are outdoors for drying.
   let vent = -1;
   for (const l of a.layers) if (l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)) vent = l.index;
@@ -183,7 +201,7 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
   if (core && isOpen(outwardPerm)) dryingDirections.push("outward");
   const bothSidesClosed = core !== null && !isOpen(inwardPerm) && !isOpen(outwardPerm);
   const explanation = core
-    ? `Layers inboard of the ${a.layers[core.last].material.name.toLowerCase()} pass ${formatSidePerm(inwardPerm)} and layers outboard of the ${a.layers[core.first].material.name.toLowerCase()} pass ${formatSidePerm(outwardPerm)} (wet cup, in series; a vented cavity and what lies outside it are not counted). A side at or below ${CLOSED_SIDE_PERM} perm is treated as closed to drying (common practice).`
+    ? `Layers inboard of the ${lowerName(a.layers[core.last].material)} pass ${formatSidePerm(inwardPerm)} and layers outboard of the ${lowerName(a.layers[core.first].material)} pass ${formatSidePerm(outwardPerm)} (wet cup, in series; a vented cavity and what lies outside it are not counted). A side at or below ${CLOSED_SIDE_PERM} perm is treated as closed to drying (common practice).`
     : "No structure or insulation layer: drying directions not assessed.";
   return {
     layers,

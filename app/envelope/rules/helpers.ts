@@ -78,10 +78,14 @@ export const isTapedFoam = (l: ResolvedLayer): boolean => isFoam(l) && (l.input.
 export function stuccoOnFoamUndrained(a: ResolvedAssembly): { stucco: ResolvedLayer; foam: ResolvedLayer } | null {
   const stucco = a.layers.find((l) => l.input.role === "cladding" && l.material.slug === "cement-stucco");
   if (!stucco) return null;
-  const foam = a.layers.find((l) => l.index > stucco.index && isFoam(l) && l.material.family === "foam-board");
+  // Foam directly behind the stucco: only barriers and gaps between them, no wall.
+  let foam: ResolvedLayer | undefined;
+  for (const l of a.layers.slice(stucco.index + 1)) {
+    if (isFoam(l) && l.material.family === "foam-board") { foam = l; break; }
+    if (isDrainageGap(l)) return null;
+    if (l.input.role !== "water-resistive-barrier" && l.input.role !== "air-barrier") return null;
+  }
   if (!foam) return null;
-  const between = a.layers.slice(stucco.index + 1, foam.index);
-  if (between.some(isDrainageGap)) return null;
   const wrbs = a.layers.filter((l) => l.index > stucco.index && l.input.role === "water-resistive-barrier");
   return wrbs.length <= 1 ? { stucco, foam } : null;
 }

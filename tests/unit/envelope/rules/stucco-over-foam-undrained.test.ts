@@ -19,3 +19,8 @@ test("must not fire: a drainage mat between stucco and foam", () => {
   const drained = wall(barrier.layers[0], layer("drainage-gap", "dimpled-drainage-mat", 6), ...barrier.layers.slice(1));
   expect(flag(drained, ID, { zone: "3B" })).toBeUndefined();
 });
+
+test("must not fire: stucco on a block wall insulated with foam on the inside (the foam is not behind the stucco)", () => {
+  const block = wall(layer("cladding", "cement-stucco", 22), layer("structure", "hollow-cmu", 194), layer("insulation", "xps-board", 25.4), gyp, paint);
+  expect(flag(block, ID, { zone: "2A" })).toBeUndefined();
+});
