@@ -1,6 +1,6 @@
 import { Authenticator } from "remix-auth";
 import { FormStrategy } from "remix-auth-form";
-import type { User } from "~/models";
+import type { User } from "~/models/index.server";
 import { signInWithPassword } from "./accounts.server";
 import { clientAddress } from "./rate-limit.server";
 
