@@ -66,7 +66,7 @@ export const detailFrontMatterSchema = z
     site_check_flags: z.array(acceptedFlagSchema).min(1).optional(),
   })
   .superRefine((detail, ctx) => {
-    // Review needs a second pair of eyes (DESIGN.md: never their own).
+    // Review needs a second pair of eyes (docs/design.md: never their own).
     if (detail.reviewer === detail.author) {
       ctx.addIssue({ code: "custom", path: ["reviewer"], message: "a detail's reviewer cannot be its author" });
     }

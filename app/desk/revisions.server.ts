@@ -122,7 +122,7 @@ async function submittedRevisionFor(reviewer: DeskActor, revisionId: number): Pr
   if (!roleAtLeast(reviewer.role, "reviewer")) throw new DeskError(403, "Only a reviewer approves or sends back a submission.");
   const revision = await DetailRevision.findByPk(revisionId);
   if (!revision) throw new DeskError(404, "No such revision.");
-  // A second pair of eyes: never one's own work (DESIGN.md, People and roles).
+  // A second pair of eyes: never one's own work (docs/design.md, People and roles).
   if (revision.authorId === reviewer.id) throw new DeskError(403, "You wrote this revision; another reviewer must review it.");
   if (revision.state !== "in_review") throw new DeskError(409, `This revision is ${REVISION_STATE_LABELS[revision.state]}, not waiting for review.`);
   return revision;

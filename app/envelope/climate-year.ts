@@ -101,7 +101,7 @@ export function parseClimateCsv(text: string): MonthClimate[] {
 
 const HDD_BASE = 18;
 const CDD_BASE = 10;
-/** Cold end of each zone's HDD18 band (ASHRAE 169-2013 / IECC 2021, REFERENCES §6.3); zone 8 is
+/** Cold end of each zone's HDD18 band (ASHRAE 169-2013 / IECC 2021, docs/references.md §6.3); zone 8 is
  * open-ended and 9000 is taken. Zones 0–2 are set by cooling degree-days instead (below). */
 const ZONE_COLD_HDD: Readonly<Record<number, number>> = { 3: 2000, 4: 3000, 5: 4000, 6: 5000, 7: 7000, 8: 9000 };
 /** Low end of the CDD10 band of zones 0–2 (the cooler side). */

@@ -1,5 +1,5 @@
 // Climate zones from degree-days (IECC 2021 R301 / ASHRAE 169-2013 thermal criteria, SI bases
-// HDD 18 °C and CDD 10 °C; REFERENCES §6.3), moisture regimes, Canada NBC 9.36 zones,
+// HDD 18 °C and CDD 10 °C; docs/references.md §6.3), moisture regimes, Canada NBC 9.36 zones,
 // and the design-condition defaults used when a site gives only its zone.
 import { SiteCheckInputError } from "./errors";
 import { checkIndoorMethod, DEFAULT_INDOOR_METHOD, indoorBasis, indoorHumidity } from "./indoor-climate";
@@ -28,7 +28,7 @@ export function zoneNumberFromDegreeDays(hdd18: number, cdd10: number): number {
   return 8;
 }
 
-/** Canada NBC 9.36 climate zone by HDD below 18 °C (NBC Table 9.36.2.6.-A, REFERENCES §6.3). */
+/** Canada NBC 9.36 climate zone by HDD below 18 °C (NBC Table 9.36.2.6.-A, docs/references.md §6.3). */
 export function nbcZoneFromHdd(hdd18: number): NbcZone {
   if (hdd18 < 3000) return "4";
   if (hdd18 < 4000) return "5";

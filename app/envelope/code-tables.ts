@@ -1,7 +1,7 @@
 // Prescriptive code rows: IECC minimum insulation by component and zone (2021 Table R402.1.3 =
 // IRC N1102.1.3; 2018 Table R402.1.2), IRC R702.7 interior vapour-retarder rows, and Table
 // R702.7(3) (continuous insulation that lets a Class III interior retarder serve).
-// Values: REFERENCES §6.1 and §6.2 (status C from DOE/PNNL tables, R702.7(3) C2 + M).
+// Values: docs/references.md §6.1 and §6.2 (status C from DOE/PNNL tables, R702.7(3) C2 + M).
 import { isInsulation, materialRsi, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { CodeEdition, CodeRow, InteriorClass, ResolvedSite } from "./types";
 import { rsiToRip } from "./units";
@@ -59,7 +59,7 @@ const IECC_2018: Record<string, ZoneRow> = {
 };
 
 /** IRC Table R806.5: rigid board above the deck of an unvented roof with air-permeable insulation
- * below it (REFERENCES §8: zone 1A R-5 C; the other zones M). Keys as r702Key plus 1–4. */
+ * below it (docs/references.md §8: zone 1A R-5 C; the other zones M). Keys as r702Key plus 1–4. */
 const R806_5: Record<string, number> = { "1": 5, "2": 5, "3": 5, "4C": 10, "4": 15, "5": 20, "6": 25, "7": 30, "8": 35 };
 
 function r8065Key(site: ResolvedSite): string {

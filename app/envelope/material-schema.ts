@@ -1,5 +1,5 @@
 // Schema for content/materials/*.yaml (format: docs/content-format.md). Every value carries
-// a source, and the source ends with its status letter (C, C2, M or D; see REFERENCES.md),
+// a source, and the source ends with its status letter (C, C2, M or D; see docs/references.md),
 // so an editor cannot add a number without saying how sure we are of it.
 import { z } from "zod";
 

@@ -16,7 +16,7 @@
 // all year. Humidity-dependent permeances are evaluated at the mean RH of each layer's faces on the
 // month's corrected (condensing, pinned) profile, iterated until they settle. Interior-surface mould:
 // ISO 13788 §5 temperature factor with Rsi 0.25 and Rse 0.04 on the coldest (framing) path, against a
-// critical surface humidity of 80 % (REFERENCES §7.2 notes, M).
+// critical surface humidity of 80 % (docs/references.md §7.2 notes, M).
 import { indoorHumidity, indoorTemperature } from "./indoor-climate";
 import { MONTH_DAYS } from "./climate-year";
 import {

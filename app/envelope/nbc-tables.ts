@@ -1,4 +1,4 @@
-// National Building Code of Canada 2020 values the site check compares against (REFERENCES §6.3).
+// National Building Code of Canada 2020 values the site check compares against (docs/references.md §6.3).
 // Status as docs/references.md uses it: C2 = confirmed in a secondary copy of the table, M = from
 // memory (verify against the printed code before relying on it).
 import type { AssemblyKind, NbcEdition, NbcZone, ProvinceCode } from "./types";

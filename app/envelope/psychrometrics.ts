@@ -1,5 +1,5 @@
 // Saturation pressure by ASHRAE Handbook—Fundamentals 2017 ch.1 Eqs. 5 (ice) and 6 (water),
-// the Hyland–Wexler formulation (coefficients: REFERENCES §1.1). Below the triple point
+// the Hyland–Wexler formulation (coefficients: docs/references.md §1.1). Below the triple point
 // (0.01 °C) the result is over ice, so a "dew point" there is a frost point: that is what
 // matters for frost on the back of cold sheathing.
 import { SiteCheckInputError } from "./errors";

@@ -2,7 +2,7 @@
 // Framed layers: cavity and framing combined by area-weighted conductance (the parallel-path rule
 // applied inside the layer), then all layers and the air films in series (isothermal planes).
 // The whole-assembly parallel-path figure (paths running through every layer) is reported beside
-// it for comparison; with wood framing the truth lies between the two (REFERENCES §4.1).
+// it for comparison; with wood framing the truth lies between the two (docs/references.md §4.1).
 import { materialRsi, materialRsiAt, resolveAssembly, ventedCavityIndex, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
 import type { AirFilm, AssemblyInput, AssemblyKind, ThermalLayer, ThermalResult } from "./types";

@@ -6,7 +6,7 @@ import type { AssemblyInput, InteriorClass, LayerVapourClass, VapourLayer, Vapou
 import { ngToPerm } from "./units";
 
 /** Dry cup is 0/50 % RH (mean 25 %), wet cup 50/100 % (mean 75 %): where a material has both and no
- * curve, they are the two points of its curve (REFERENCES §5.2: model responsive materials as a
+ * curve, they are the two points of its curve (docs/references.md §5.2: model responsive materials as a
  * function of mean RH). */
 const DRY_CUP_MEAN_RH = 25;
 const WET_CUP_MEAN_RH = 75;

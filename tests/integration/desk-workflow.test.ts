@@ -143,7 +143,7 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   const after = await Detail.findOne({ where: { slug: FREE_SLUG } });
   expect(after!.publishedRevisionId).toBe(id);
   // 37 mm more EPS at 0.03606 W/(m·K) adds 0.037 / 0.03606 ≈ RSI 1.03 in series
-  // (content/materials/icf-eps-form.yaml: EPS Type II ≈ R-4.0 per inch, REFERENCES §3, status M).
+  // (content/materials/icf-eps-form.yaml: EPS Type II ≈ R-4.0 per inch, docs/references.md §3, status M).
   expect(after!.rValueRsi! - before!.rValueRsi!).toBeCloseTo(1.03, 1);
   expect(after!.layerStrip[2]).toMatchObject({ role: "insulation", thickness_mm: 100 });
   expect((await DetailRevision.findByPk(firstRevisionId))!.state).toBe("superseded");

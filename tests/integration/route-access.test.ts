@@ -51,7 +51,7 @@ const ACCESS: Record<string, Access> = {
   "/api/payments/webhook": "public", // callers prove themselves with the webhook signature, not a session
   "/details/:slug/save": { atLeast: "member", params: { slug: "no-such-detail" } },
   "/uploads/:id": "public", // readUpload decides per file: published free drawings for all, premium ones with access
-  // The desk (DESIGN.md "People and roles"): editors write, reviewers approve others' work.
+  // The desk (docs/design.md "People and roles"): editors write, reviewers approve others' work.
   "/desk": { atLeast: "editor" },
   "/desk/new": { atLeast: "editor" },
   "/desk/details/:slug/edit": { atLeast: "editor", params: { slug: "no-such-detail" } },

@@ -11,7 +11,7 @@ const isMasonry = (l: ResolvedLayer | undefined): boolean => l !== undefined && 
 export const belowGradeWaterSensitiveInsulation: Rule = {
   id: "below-grade-water-sensitive-insulation",
   severity: "stop",
-  source: "common practice (REFERENCES §8 below-grade guidance, M)",
+  source: "common practice (docs/references.md §8 below-grade guidance, M)",
   applies: (ctx) => isBelowGrade(ctx.assembly.kind),
   check(ctx) {
     const layers = ctx.assembly.layers;

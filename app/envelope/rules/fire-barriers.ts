@@ -9,7 +9,7 @@ export function thermalBarrierInboard(a: ResolvedAssembly, from: number): boolea
     ((l.material.family === "concrete" || l.material.family === "masonry") && l.thickness_mm >= 25.4));
 }
 
-/** IRC R316.5.3/R316.5.4 ignition-barrier alternatives (REFERENCES §8): 3/8 in gypsum, 1/4 in wood
+/** IRC R316.5.3/R316.5.4 ignition-barrier alternatives (docs/references.md §8): 3/8 in gypsum, 1/4 in wood
  * structural panel, fibre-cement or hardboard, 1½ in mineral fibre, a listed coating. */
 export function isIgnitionBarrier(l: ResolvedLayer): boolean {
   const m = l.material;

@@ -21,7 +21,7 @@ function unprotected(ctx: RuleContext): { foam: ResolvedLayer; underside: boolea
 export const foamCrawlspaceNoIgnitionBarrier: Rule = {
   id: "foam-crawlspace-no-ignition-barrier",
   severity: "caution",
-  source: "IRC 2021 R316.5.4; alternatives per R316.5.3 (REFERENCES §8), C",
+  source: "IRC 2021 R316.5.4; alternatives per R316.5.3 (docs/references.md §8), C",
   applies: (ctx) => ["crawlspace-wall", "crawlspace-floor", "floor"].includes(ctx.assembly.kind) && ctx.assembly.layers.some(isFoam),
   check(ctx) {
     const hit = unprotected(ctx);

@@ -16,7 +16,7 @@ function meetsSeasonalCodeRows(ctx: RuleContext): boolean {
 export const winterCondensingSurface: Rule = {
   id: "winter-condensing-surface",
   severity: "caution",
-  source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; REFERENCES §7.1 (JLC) and §8 (first condensing surface), C/C2",
+  source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; docs/references.md §7.1 (JLC) and §8 (first condensing surface), C/C2",
   applies: (ctx) => !isBelowGrade(ctx.assembly.kind),
   check(ctx) {
     const winter = ctx.winter;

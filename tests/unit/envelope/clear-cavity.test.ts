@@ -3,7 +3,7 @@ import { runSiteCheck } from "~/envelope";
 import type { LayerInput } from "~/envelope/types";
 import { fixedMaterial, libraryOf } from "./library";
 
-// The REFERENCES §7.2 wall (D) with its R-21 batt framed: studs R-4.375 (R-1.25/in × 3.5 in, common
+// The docs/references.md §7.2 wall (D) with its R-21 batt framed: studs R-4.375 (R-1.25/in × 3.5 in, common
 // practice) at 25 %. Inside 21 °C / 40 %, outside −10 °C / 80 %, films.
 const lib = libraryOf(
   fixedMaterial("housewrap", 0, 50),

@@ -3,7 +3,7 @@ import { runSiteCheck } from "~/envelope";
 import type { LayerInput } from "~/envelope/types";
 import { fixedMaterial, libraryOf } from "./library";
 
-// REFERENCES §7.2 constructed Glaser cases (status D): inside 21 °C / 40 %, outside −10 °C / 80 %,
+// docs/references.md §7.2 constructed Glaser cases (status D): inside 21 °C / 40 %, outside −10 °C / 80 %,
 // films 0.68/0.17 with no vapour resistance; layers painted gypsum (R-0.45, 5 perm), R-21 batt
 // (20 perm), 7/16 OSB (R-0.62, 1.0 perm), housewrap (0, 50 perm).
 const lib = libraryOf(
@@ -29,13 +29,13 @@ function wall(extra: { poly?: boolean; xps?: "xps1" | "xps2" } = {}) {
   return runSiteCheck({ kind: "above-grade-wall", layers }, site, lib).profiles.winter;
 }
 
-test("G1a: R_tot 22.92 (RSI 4.036) — REFERENCES §7.2 (D)", () => {
+test("G1a: R_tot 22.92 (RSI 4.036) — docs/references.md §7.2 (D)", () => {
   const r = runSiteCheck({ kind: "above-grade-wall", layers: [L("w", "housewrap"), L("s", "osb"), L("insulation", "batt"), L("f", "gypsum-painted")] }, site, lib);
   expect(r.thermal.r_ip).toBeCloseTo(22.92, 2);
   expect(r.thermal.rsi).toBeCloseTo(4.036, 3);
 });
 
-test("G1a interface table: T, p_sat, straight-line p_v, RH — REFERENCES §7.2 (D)", () => {
+test("G1a interface table: T, p_sat, straight-line p_v, RH — docs/references.md §7.2 (D)", () => {
   const p = wall();
   const [ext, wrbOsb, osbBatt, battGyp, inside] = p.interfaces;
   expect(inside.t_c).toBeCloseTo(20.08, 2);
@@ -56,7 +56,7 @@ test("G1a interface table: T, p_sat, straight-line p_v, RH — REFERENCES §7.2 
   expect(ext.t_c).toBeGreaterThan(-10);
 });
 
-test("G1a: first condensing surface batt/OSB, Glaser rate 13.65 g/(m²·day) — REFERENCES §7.2 (D)", () => {
+test("G1a: first condensing surface batt/OSB, Glaser rate 13.65 g/(m²·day) — docs/references.md §7.2 (D)", () => {
   const p = wall();
   expect(p.firstCondensingSurface?.interfaceIndex).toBe(2);
   expect(p.condensingPlanes).toHaveLength(1);
@@ -66,7 +66,7 @@ test("G1a: first condensing surface batt/OSB, Glaser rate 13.65 g/(m²·day) —
   expect(p.margin_c).toBeLessThan(0);
 });
 
-test("G1b: with 6-mil poly inside no condensation; p_v 252.7 Pa vs p_sat 285.7, RH 88.5 % — REFERENCES §7.2 (D)", () => {
+test("G1b: with 6-mil poly inside no condensation; p_v 252.7 Pa vs p_sat 285.7, RH 88.5 % — docs/references.md §7.2 (D)", () => {
   const p = wall({ poly: true });
   expect(p.condensingPlanes).toHaveLength(0);
   expect(p.rate_g_m2_day).toBe(0);
@@ -79,7 +79,7 @@ test("G1b: with 6-mil poly inside no condensation; p_v 252.7 Pa vs p_sat 285.7, 
 test.each([
   ["xps1", -3.57, 453.7, 10.08],
   ["xps2", 0.16, 618.4, 6.73],
-] as const)("G1c/G1d: with %s outside the OSB, condensing at batt/OSB at %s °C (p_sat %s), rate %s g/(m²·day) — REFERENCES §7.2 (D)", (xps, tc, psat, rate) => {
+] as const)("G1c/G1d: with %s outside the OSB, condensing at batt/OSB at %s °C (p_sat %s), rate %s g/(m²·day) — docs/references.md §7.2 (D)", (xps, tc, psat, rate) => {
   const p = wall({ xps });
   const plane = p.firstCondensingSurface;
   expect(plane?.label).toBe("osb / batt");
@@ -88,7 +88,7 @@ test.each([
   expect(p.rate_g_m2_day).toBeCloseTo(rate, 2);
 });
 
-// JLC "Where does the dew drop" (REFERENCES §7.1, C): indoor 70 °F / 50 %, outdoor 32 °F; sheathing
+// JLC "Where does the dew drop" (docs/references.md §7.1, C): indoor 70 °F / 50 %, outdoor 32 °F; sheathing
 // inner face at 32 + R_out/R_tot × 38 °F; indoor dew point ≈ 50 °F (psychrolib 50.53 °F, D).
 function jlcWall(foamR: number) {
   const jlcLib = libraryOf(
@@ -102,7 +102,7 @@ function jlcWall(foamR: number) {
   return runSiteCheck({ kind: "above-grade-wall", layers }, { zone: "5A", winter: { t_c: 0, rh: 80 }, indoor: { t_c: (70 - 32) * 5 / 9, rh: 50 } }, jlcLib);
 }
 
-test("JLC wall A (1 in foam, R-7 of R-18 outboard): sheathing at 46.78 °F, below the indoor dew point, flagged — JLC 'Where does the dew drop' (REFERENCES §7.1, C)", () => {
+test("JLC wall A (1 in foam, R-7 of R-18 outboard): sheathing at 46.78 °F, below the indoor dew point, flagged — JLC 'Where does the dew drop' (docs/references.md §7.1, C)", () => {
   const r = jlcWall(5);
   expect(r.thermal.r_ip).toBeCloseTo(18, 6);
   const sheathingInner = r.profiles.winter.interfaces[3];
@@ -112,7 +112,7 @@ test("JLC wall A (1 in foam, R-7 of R-18 outboard): sheathing at 46.78 °F, belo
   expect(r.flags.map((f) => f.id)).toContain("winter-condensing-surface");
 });
 
-test("JLC wall B (2 in foam, R-14 of R-25 outboard): sheathing at 53.28 °F, above the dew point, not flagged — JLC (REFERENCES §7.1, C)", () => {
+test("JLC wall B (2 in foam, R-14 of R-25 outboard): sheathing at 53.28 °F, above the dew point, not flagged — JLC (docs/references.md §7.1, C)", () => {
   const r = jlcWall(12);
   expect(r.thermal.r_ip).toBeCloseTo(25, 6);
   const sheathingInner = r.profiles.winter.interfaces[3];
@@ -122,7 +122,7 @@ test("JLC wall B (2 in foam, R-14 of R-25 outboard): sheathing at 53.28 °F, abo
   expect(r.flags.map((f) => f.id)).not.toContain("winter-condensing-surface");
 });
 
-test("JLC indoor dew point 70 °F / 50 % ≈ 50 °F (chart; psychrolib 50.53 °F) — REFERENCES §7.1 (C) / §1.4 (D)", () => {
+test("JLC indoor dew point 70 °F / 50 % ≈ 50 °F (chart; psychrolib 50.53 °F) — docs/references.md §7.1 (C) / §1.4 (D)", () => {
   const dp = jlcWall(5).profiles.winter.sourceDewPoint_c;
   expect(dp * 9 / 5 + 32).toBeCloseTo(50.53, 1);
 });

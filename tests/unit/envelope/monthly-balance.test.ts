@@ -103,7 +103,7 @@ test("no condensing month: verdict no-condensation, nothing held, positive margi
   expect(r.months.every((m) => m.accumulated_g_m2 === 0 && m.margin_c > 0)).toBe(true);
 });
 
-describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 80 % critical surface RH; REFERENCES §7.2 notes, M)", () => {
+describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 80 % critical surface RH; docs/references.md §7.2 notes, M)", () => {
   // f_Rsi = (R_T − Rsi)/R_T with R_T = 0.25 + 0.5 + 3.0 + 0.04 = 3.79 → 0.93404 (hand-derived, D).
   // January: indoor 20 °C / 50 % (1169.40 Pa); the surface may reach 1169.40/0.8 = 1461.75 Pa, whose dew
   // point is 12.628 °C (psychrolib GetTDewPointFromVapPres); f_Rsi,min = (12.628 − (−5))/25 = 0.7051.

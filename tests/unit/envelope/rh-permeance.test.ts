@@ -5,9 +5,9 @@ import type { LayerInput } from "~/envelope/types";
 import { permeanceAtRh } from "~/envelope/vapour";
 import { fixedMaterial, libraryOf } from "./library";
 
-// The REFERENCES §7.2 wall (D), which condenses at the OSB in winter, with a humidity-dependent
+// The docs/references.md §7.2 wall (D), which condenses at the OSB in winter, with a humidity-dependent
 // retarder inboard of the batt: 1 perm at 25 % mean RH, 20 perm at 75 % (a variable-permeance
-// membrane's shape, REFERENCES §5.2, M).
+// membrane's shape, docs/references.md §5.2, M).
 const vr: Material = { ...fixedMaterial("vr", 0, 1), vapour: { permeance_ng: 57.2, curve: [[25, 57.2], [75, 1144]], source: "fixture, D" } };
 const lib = libraryOf(
   fixedMaterial("housewrap", 0, 50),
@@ -34,7 +34,7 @@ test("the retarder's permeance is the one at the mean RH of its faces on the con
   expect(Math.abs(atLinear - atCorrected) / atCorrected).toBeGreaterThan(0.02);
 });
 
-test("the condensation rate is consistent with the permeances reported (Glaser flows, REFERENCES §7.2 method)", () => {
+test("the condensation rate is consistent with the permeances reported (Glaser flows, docs/references.md §7.2 method)", () => {
   const w = runSiteCheck({ kind: "above-grade-wall", layers }, site, lib).profiles.winter;
   // Inflow from the inside to the OSB plane through batt, retarder, gypsum in series at the case permeances.
   const z = [2, 3, 4].reduce((s, i) => s + 1 / (w.vapourLayers[i].case_perm_ng * 1e-12), 0);

@@ -41,7 +41,7 @@ test("a 2×6 wall with kraft facing (Class II) still dries both ways at wet-cup 
   expect(r.vapour.dryingDirections).toEqual(["inward", "outward"]);
 });
 
-test("a variable-permeance retarder opens in the summer case where 6-mil poly collects water — common practice; curve REFERENCES §5.2 (M — from memory)", () => {
+test("a variable-permeance retarder opens in the summer case where 6-mil poly collects water — common practice; curve docs/references.md §5.2 (M — from memory)", () => {
   const wallWith = (retarder: string): AssemblyInput => ({ kind: "above-grade-wall", layers: [
     layer("cladding", "brick-veneer", 101.6), layer("water-resistive-barrier", "building-paper-grade-d", 0.5), layer("sheathing", "fibreboard-sheathing", 12.7), batt140,
     layer("vapour-retarder", retarder, 0.15), gyp, paint,

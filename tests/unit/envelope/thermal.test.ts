@@ -5,7 +5,7 @@ import { resolveAssembly } from "~/envelope/layers";
 import type { AssemblyInput } from "~/envelope/types";
 import { fixedMaterial, fixedRsiMaterial, libraryOf, loadLibrary } from "./library";
 
-// Çengel, Heat and Mass Transfer, "The R-value of a wood frame wall" (REFERENCES §4.1): inputs C, results D.
+// Çengel, Heat and Mass Transfer, "The R-value of a wood frame wall" (docs/references.md §4.1): inputs C, results D.
 function cengelWall(insulationRsi: number) {
   const lib = libraryOf(
     fixedRsiMaterial("siding", 0.14), fixedRsiMaterial("fibreboard", 0.23), fixedRsiMaterial("glass-fibre", insulationRsi, { family: "fibrous-insulation" }),
@@ -26,7 +26,7 @@ function cengelWall(insulationRsi: number) {
 test.each([
   [2.45, 2.225, 0.4494, 2.022, 0.4947],
   [2.52, 2.253, 0.4439, 2.039, 0.4904],
-])("Çengel wood-frame wall, insulation RSI %s: parallel path R %s / U %s, isothermal planes R %s / U %s — Çengel (REFERENCES §4.1, inputs C, results D)", (ins, rpp, upp, riso, uiso) => {
+])("Çengel wood-frame wall, insulation RSI %s: parallel path R %s / U %s, isothermal planes R %s / U %s — Çengel (docs/references.md §4.1, inputs C, results D)", (ins, rpp, upp, riso, uiso) => {
   const t = cengelWall(ins);
   // Films here are the IP 0.17/0.68 (RSI 0.0299/0.1198) versus the example's 0.03/0.12: 0.0003 apart.
   expect(t.parallelPath?.rsi).toBeCloseTo(rpp, 2);
@@ -35,11 +35,11 @@ test.each([
   expect(t.u_si).toBeCloseTo(uiso, 3);
 });
 
-test("Çengel textbook answer U ≈ 0.449 W/m²K, R ≈ 2.23 with RSI 2.45 insulation (REFERENCES §4.1, M — from memory)", () => {
+test("Çengel textbook answer U ≈ 0.449 W/m²K, R ≈ 2.23 with RSI 2.45 insulation (docs/references.md §4.1, M — from memory)", () => {
   expect(cengelWall(2.45).parallelPath?.u_si).toBeCloseTo(0.449, 2);
 });
 
-// REFERENCES §4.2 IP check walls (D): films 0.68/0.17, gypsum 0.45, OSB 0.62, vinyl 0.61, studs 1.25/in, framing 25 %.
+// docs/references.md §4.2 IP check walls (D): films 0.68/0.17, gypsum 0.45, OSB 0.62, vinyl 0.61, studs 1.25/in, framing 25 %.
 function ipWall(cavityR: number, depthIn: number, ciR = 0) {
   const lib = loadLibrary();
   const extra = libraryOf(
@@ -61,13 +61,13 @@ test.each([
   [13, 3.5, 0, 0.0845, 11.83],
   [21, 5.5, 0, 0.05846, 17.11],
   [21, 5.5, 5, 0.04364, 22.91],
-])("IP check wall R-%s cavity (%s in studs) + R-%s ci: parallel-path U %s, R-%s — REFERENCES §4.2 (D)", (cav, depth, ci, u, r) => {
+])("IP check wall R-%s cavity (%s in studs) + R-%s ci: parallel-path U %s, R-%s — docs/references.md §4.2 (D)", (cav, depth, ci, u, r) => {
   const t = ipWall(cav, depth, ci);
   expect(t.parallelPath?.u_ip).toBeCloseTo(u, 4);
   expect(t.parallelPath?.r_ip).toBeCloseTo(r, 1);
 });
 
-test("WSEC R-21 intermediate framing wall lands near U-0.057 — WAC 51-11-0530 Table 5-1 / WSEC R402.1.2 (C, ±0.003 plausibility per REFERENCES §4.2)", () => {
+test("WSEC R-21 intermediate framing wall lands near U-0.057 — WAC 51-11-0530 Table 5-1 / WSEC R402.1.2 (C, ±0.003 plausibility per docs/references.md §4.2)", () => {
   const lib = loadLibrary();
   const all = new Map([...lib, ...libraryOf(
     fixedMaterial("cav21", 21, 20, { family: "fibrous-insulation" }), fixedMaterial("stud1", 5.5, 1, { family: "lumber" }),

@@ -3,7 +3,7 @@ import { batt89, flag, gyp, layer, of } from "./fixtures";
 
 const ID = "below-grade-water-sensitive-insulation";
 
-test("fibreglass batts against a basement wall: stop — common practice (REFERENCES §8, M, from memory)", () => {
+test("fibreglass batts against a basement wall: stop — common practice (docs/references.md §8, M, from memory)", () => {
   expect(flag(of("basement-wall", layer("structure", "cast-concrete", 200), batt89, gyp), ID)?.severity).toBe("stop");
 });
 
