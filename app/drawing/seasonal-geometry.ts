@@ -64,6 +64,12 @@ export function seasonalVerdictLabel(seasonal: SeasonalResult): string {
   return VERDICT_LABEL[seasonal.verdict];
 }
 
+/** The engine's method strings may or may not end with a full stop; print each with exactly one. */
+export function asSentence(text: string): string {
+  const t = text.trim();
+  return /[.!?]$/.test(t) ? t : `${t}.`;
+}
+
 const grams = (v: number): string => `${v < 10 ? v.toFixed(1) : Math.round(v).toString()} g/m²`;
 
 function monthName(seasonal: SeasonalResult, month: number | null): string {

@@ -73,3 +73,35 @@ test("a bad CSV year is shown on its field with the line, and the pasted text is
   await page.waitForFunction(() => document.querySelector('[data-testid="climate-year"]')?.getAttribute("data-source") === "csv");
   await page.close();
 });
+
+test("a Canadian site in the address (the form sent without JavaScript) opens with its own fields and the NBC rows", async () => {
+  const context = await openBrowser();
+  const page = await context.newPage();
+  await page.route("**/*.js", (route) => route.abort());
+  await page.goto(`${baseUrl()}/details/${WALL}?country=CA&nbcZone=7A&indoorMethod=iso-13788-class-3`);
+  const panel = page.getByTestId("site-check-panel");
+  expect(await panel.getByTestId("code-edition").textContent()).toBe("NBC 2020");
+  expect(await panel.locator('input[name="country"][value="CA"]').isChecked()).toBe(true);
+  // The radio shows the Canadian fields by CSS alone, and hides the US ones.
+  expect(await panel.getByTestId("canadian-site").isVisible()).toBe(true);
+  expect(await panel.getByTestId("us-site").isVisible()).toBe(false);
+  expect(await panel.locator('select[name="nbcZone"]').inputValue()).toBe("7A");
+  expect(await panel.getByTestId("indoor-basis").textContent()).toMatch(/ISO 13788 humidity class 3/);
+  mkdirSync("test-results/screenshots", { recursive: true });
+  await panel.locator("form").screenshot({ path: "test-results/screenshots/site-form-canada.png" });
+  await page.close();
+  await context.close();
+});
+
+test("a basement wall shows the top of the wall beside deep ground, and the wall's stud path beside its clear cavity", async () => {
+  const page = await browser.newPage();
+  await page.goto(`${baseUrl()}/details/basement-icf-wall?zone=6A`);
+  const upper = page.getByTestId("upper-wall");
+  await upper.waitFor();
+  for (const id of ["case-above-grade", "case-frost-depth", "case-deep-ground"]) expect(await upper.getByTestId(id).isVisible()).toBe(true);
+  await page.goto(`${baseUrl()}/details/${WALL}?zone=5A`);
+  const paths = page.getByTestId("paths-winter");
+  await paths.waitFor();
+  expect(await paths.locator("thead").textContent()).toMatch(/Clear cavity.*Through framing/);
+  await page.close();
+});
