@@ -75,6 +75,6 @@ export function guardArea(needed: StaffRole): MiddlewareFunction<Response> {
 
 /** Only same-site relative paths are followed after sign-in, never another host. */
 export function safeNext(next: string | null | undefined, fallback = "/account"): string {
-  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return fallback;
+  if (!next?.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return fallback;
   return next;
 }

@@ -90,11 +90,15 @@ export function SearchBox({ defaultValue, name = "q" }: { defaultValue: string; 
         }}
       />
       {open && matches.length > 0 ? (
+        // The WAI-ARIA combobox pattern: focus stays in the input, aria-activedescendant points at the option.
+        // biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: a listbox of options is the pattern's own markup
         <ul id={listId} role="listbox" className="absolute z-20 mt-1 w-full overflow-hidden rounded border border-rule bg-sheet shadow-lg" data-testid="suggestions">
           {matches.map((suggestion, i) => (
+            // biome-ignore lint/a11y/useFocusableInteractive: options are reached by aria-activedescendant, never focused
             <li
               key={`${suggestion.kind}-${suggestion.text}`}
               id={`${listId}-${i}`}
+              // biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: an option inside the listbox above
               role="option"
               aria-selected={i === active}
               className={`cursor-pointer px-3 py-1.5 text-sm ${i === active ? "bg-paper-deep" : ""}`}

@@ -9,7 +9,7 @@ export function UnitsToggle({ units }: { units: UnitSystem }) {
   return (
     <fetcher.Form method="post" action="/preferences/units" className="inline-flex overflow-hidden rounded border border-rule text-xs" data-testid="units-toggle">
       {UNIT_SYSTEMS.map((system) => (
-        <button
+        <button type="submit"
           key={system}
           name="units"
           value={system}

@@ -1,7 +1,7 @@
 import { env } from "~/config/env.server";
 import { sendMailOrLog } from "~/mail/mailer.server";
 import { revisionAlertMail } from "~/mail/templates";
-import { Detail, DetailRevision, SavedDetail, User } from "~/models/index.server";
+import { Detail, type DetailRevision, SavedDetail, User } from "~/models/index.server";
 
 // Members save details to find them again and to hear when one is revised.
 

@@ -49,6 +49,7 @@ export async function uploadsOf(revisionId: number): Promise<UploadRow[]> {
 /** A readable display name: no directories, no control characters, at most 120 characters. */
 function displayName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? "upload";
+  // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are exactly what a file name must lose
   return base.replace(/[\u0000-\u001f\u007f"]/g, "").slice(-120) || "upload";
 }
 

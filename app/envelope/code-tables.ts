@@ -258,7 +258,7 @@ export function codeRows(a: ResolvedAssembly, site: ResolvedSite, interiorClass:
       rows.push({
         id: "irc-r702-7-3",
         label: `${irc} ${table}, Class III interior retarder, zone ${rk === "4C" ? "marine 4" : rk}, ${frame} wall`,
-        required: `continuous insulation ≥ ${r(need)} outboard${R702_7_3[edition][rk].vented ? ", or vented cladding over " + (R702_7_3[edition][rk].vented === "fibreboard-gypsum" ? "fibreboard or gypsum" : "wood structural panel, fibreboard or gypsum") : ""} — or a Class I/II interior retarder`,
+        required: `continuous insulation ≥ ${r(need)} outboard${R702_7_3[edition][rk].vented ? `, or vented cladding over ${R702_7_3[edition][rk].vented === "fibreboard-gypsum" ? "fibreboard or gypsum" : "wood structural panel, fibreboard or gypsum"}` : ""} — or a Class I/II interior retarder`,
         provided: `${r(s.ciOutboard)} continuous outboard; interior Class ${interiorClass === "none" ? "none (above 10 perm)" : interiorClass}${vc.vented ? "; vented cladding" : ""}`,
         pass: !classIII || ciPass || ventOk,
         note: !classIII

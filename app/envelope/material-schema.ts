@@ -98,5 +98,5 @@ export function buildMaterialLibrary(entries: readonly unknown[]): ReadonlyMap<s
 export function lookupMaterial(library: MaterialLibrary, slug: string): Material | undefined {
   if (library instanceof Map) return library.get(slug);
   const record = library as Readonly<Record<string, Material>>;
-  return Object.prototype.hasOwnProperty.call(record, slug) ? record[slug] : undefined;
+  return  Object.hasOwn(record, slug) ? record[slug] : undefined;
 }

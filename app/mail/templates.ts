@@ -20,7 +20,7 @@ function html(paragraphs: string[], link?: { href: string; label: string }): str
 }
 
 function text(paragraphs: string[], link?: string): string {
-  return [...paragraphs, ...(link ? [link] : []), SIGN_OFF].join("\n\n") + "\n";
+  return `${[...paragraphs, ...(link ? [link] : []), SIGN_OFF].join("\n\n")}\n`;
 }
 
 export function verifyEmailMail({ displayName, link }: { displayName: string; link: string }): MailContent {

@@ -46,6 +46,7 @@ function fontFile(pkg: "inter" | "merriweather", weight: 400 | 700): string {
 export function pdfText(text: string): string {
   return text
     .replace(/≥/g, ">=").replace(/≤/g, "<=").replace(/→/g, "->").replace(/←/g, "<-")
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: the range keeps what the PDF font can draw, control characters included in the count
     .replace(/≈/g, "~").replace(/[\u2070-\u209f]/g, "").replace(/[^\u0000-\u024f\u2000-\u206f\u20ac\u2122\u2212]/g, "?");
 }
 

@@ -31,7 +31,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
             placeholder="e.g. sealed crawlspace, exterior foam, basement wall"
             className="flex-1 rounded border border-rule bg-sheet px-3 py-2"
           />
-          <button className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Search</button>
+          <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Search</button>
         </Form>
         <div className="mt-6">
           <p className="text-sm text-graphite-soft">Or start from your climate zone:</p>

@@ -20,7 +20,7 @@ export const belowGradeWaterSensitiveInsulation: Rule = {
       if (!isInsulation(wet) || !wet.material.water_sensitive) continue;
       // Separated from the structure and the soil by a taped foam layer: the foam keeps the
       // concrete's moisture off it (the interior stud wall of a foam-lined basement).
-      const lo = Math.min(wet.index, structure < 0 ? 0 : structure);
+      const lo = Math.min(wet.index, Math.max(structure , 0));
       const hi = Math.max(wet.index, structure);
       const shielded = layers.slice(lo + 1, hi).some(isTapedFoam) && !isMasonry(layers[wet.index - 1]) && !isMasonry(layers[wet.index + 1]);
       if (shielded) continue;

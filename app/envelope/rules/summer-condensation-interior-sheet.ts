@@ -9,7 +9,7 @@ export const summerCondensationInteriorSheet: Rule = {
   applies: (ctx) => ctx.summer.condensingPlanes.length > 0,
   check(ctx) {
     const s = summerCondensation(ctx);
-    if (!s || s.kind !== "interior-sheet") return null;
+    if (s?.kind !== "interior-sheet") return null;
     return flagOf(this, "stop", "Summer condensation on the interior vapour barrier",
       `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Remove the interior sheet or replace it with a variable-permeance retarder.`);
   },

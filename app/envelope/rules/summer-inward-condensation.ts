@@ -9,7 +9,7 @@ export const summerInwardCondensation: Rule = {
   applies: (ctx) => ctx.summer.condensingPlanes.length > 0,
   check(ctx) {
     const s = summerCondensation(ctx);
-    if (!s || s.kind !== "inward") return null;
+    if (s?.kind !== "inward") return null;
     return flagOf(this, "caution", "Summer inward vapour drive condenses inside",
       `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Add a drainage/ventilation gap behind absorptive cladding or a vapour-resistant layer outboard.`);
   },

@@ -70,9 +70,9 @@ export default function Billing({ loaderData, actionData }: Route.ComponentProps
               <Form method="post" {...getFormProps(form)} className="mt-4">
                 <CsrfField />
                 {plan.cancelAtPeriodEnd ? (
-                  <button name={fields.intent.name} value="keep-running" className="rounded border border-rule px-3 py-2" data-testid="plan-resume">Keep my plan running</button>
+                  <button type="submit" name={fields.intent.name} value="keep-running" className="rounded border border-rule px-3 py-2" data-testid="plan-resume">Keep my plan running</button>
                 ) : (
-                  <button name={fields.intent.name} value="end-at-period-end" className="rounded border border-rule px-3 py-2" data-testid="plan-cancel">Stop at the end of this period</button>
+                  <button type="submit" name={fields.intent.name} value="end-at-period-end" className="rounded border border-rule px-3 py-2" data-testid="plan-cancel">Stop at the end of this period</button>
                 )}
               </Form>
             )}

@@ -56,7 +56,7 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
       <Form method="get" role="search" className="mt-4 flex max-w-md gap-2">
         <label htmlFor="user-q" className="sr-only">Search by name or e-mail</label>
         <input id="user-q" name="q" defaultValue={searchParams.get("q") ?? ""} placeholder="Name or e-mail" className="flex-1 rounded border border-rule bg-sheet px-3 py-2" />
-        <button className="rounded border border-rule px-3 py-2">Search</button>
+        <button type="submit" className="rounded border border-rule px-3 py-2">Search</button>
       </Form>
       {actionData?.message && <p role="status" className="mt-4 text-sm">{actionData.message}</p>}
       <table className="mt-6 w-full text-left text-sm">
@@ -83,7 +83,7 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                     <select id={`role-${user.id}`} name="role" defaultValue={user.role} className="rounded border border-rule bg-sheet px-2 py-1">
                       {STAFF_ROLES.map((role) => <option key={role} value={role}>{STAFF_ROLE_LABELS[role]}</option>)}
                     </select>
-                    <button className="rounded border border-rule px-2 py-1">Change</button>
+                    <button type="submit" className="rounded border border-rule px-2 py-1">Change</button>
                   </UserAdminForm>
                 )}
               </td>
@@ -91,7 +91,7 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                 <UserAdminForm>
                   <input type="hidden" name="intent" value="revoke-sessions" />
                   <input type="hidden" name="userId" value={user.id} />
-                  <button className="text-stop underline-offset-2 hover:underline" disabled={user.liveSessions === 0}>Sign out everywhere</button>
+                  <button type="submit" className="text-stop underline-offset-2 hover:underline" disabled={user.liveSessions === 0}>Sign out everywhere</button>
                 </UserAdminForm>
               </td>
             </tr>

@@ -70,7 +70,7 @@ export default function Catalogue({ loaderData }: Route.ComponentProps) {
           <FacetRail query={query} facets={result.facets} />
           <div className="mt-6 flex gap-3 text-sm">
             <noscript>
-              <button className="rounded bg-graphite px-3 py-1 text-paper">Apply</button>
+              <button type="submit" className="rounded bg-graphite px-3 py-1 text-paper">Apply</button>
             </noscript>
             {anyFilter ? <Link to="/details">Clear all</Link> : null}
           </div>
@@ -91,7 +91,7 @@ export default function Catalogue({ loaderData }: Route.ComponentProps) {
                 ))}
               </select>
             </label>
-            <button className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Search</button>
+            <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Search</button>
           </div>
 
           {result.cards.length === 0 ? (

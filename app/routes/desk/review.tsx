@@ -94,6 +94,7 @@ export default function Review({ loaderData, actionData }: Route.ComponentProps)
         <h2 id="layers-heading" className="mb-2 text-xl">Layers</h2>
         <LayerTable layers={r.layers} result={null} units={r.units} />
       </section>
+      {/* biome-ignore lint/security/noDangerouslySetInnerHtml: bodyHtml is rendered by marked and sanitised by DOMPurify on the server (app/markdown/render.server.ts) */}
       <section className="prose prose-stone max-w-none prose-headings:font-serif" dangerouslySetInnerHTML={{ __html: r.bodyHtml }} />
       <section aria-labelledby="refs-heading">
         <h2 id="refs-heading" className="text-xl">References</h2>

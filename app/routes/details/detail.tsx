@@ -89,6 +89,7 @@ export default function DetailPage({ loaderData }: Route.ComponentProps) {
           <div className="no-print">
             <SiteCheckPanel slug={detail.slug} units={units} values={siteValues} initial={initialCheck} claimedZones={detail.zones} />
           </div>
+          {/* biome-ignore lint/security/noDangerouslySetInnerHtml: bodyHtml is rendered by marked and sanitised by DOMPurify on the server (app/markdown/render.server.ts) */}
           <section className="prose prose-stone max-w-none prose-headings:font-serif" data-testid="detail-body" dangerouslySetInnerHTML={{ __html: detail.full.bodyHtml }} />
           {detail.full.attachments.length ? (
             <section aria-labelledby="attachments-title" data-testid="attachments">

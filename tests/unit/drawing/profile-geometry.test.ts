@@ -54,7 +54,7 @@ const basement = check({
 
 function polyline(g: ProfileGeometry, tag: string): [number, number][] {
   const s = g.shapes.find((x) => x.tag === tag);
-  if (!s || s.type !== "polyline") throw new Error(`no ${tag} line`);
+  if (s?.type !== "polyline") throw new Error(`no ${tag} line`);
   return s.points;
 }
 

@@ -5,7 +5,6 @@ import { runSiteCheck } from "~/envelope";
 import { resolveSite } from "~/envelope/climate";
 import { MONTH_NAMES } from "~/envelope/climate-year";
 import { resolveAssembly } from "~/envelope/layers";
-import { seasonalBalance } from "~/envelope/monthly-balance";
 import { computeProfile } from "~/envelope/profile";
 import { winterCase } from "~/envelope/site-check";
 import type { MaterialFamily } from "~/envelope/material-schema";

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { runSiteCheck } from "~/envelope";
 import { resolveSite } from "~/envelope/climate";
-import { SiteCheckInputError } from "~/envelope/errors";
+import type { SiteCheckInputError } from "~/envelope/errors";
 import { NBC_EFFECTIVE_RSI, NBC_ZONES, NBC_VAPOUR_BARRIER_NG, NBC_ZONE_BANDS, outboardRatioAt, PROVINCE_REFERENCE } from "~/envelope/nbc-tables";
 import type { LayerInput } from "~/envelope/types";
 import { fixedRsiMaterial, libraryOf } from "./library";
