@@ -66,6 +66,8 @@ test("a bad CSV year is shown on its field with the line, and the pasted text is
   await page.waitForFunction(() => /Line 6: Apr appears twice/.test(document.querySelector('[data-testid="csv-year"]')?.textContent ?? ""));
   expect(await box.inputValue()).toBe(bad.join("\n"));
   expect(await box.getAttribute("aria-invalid")).toBe("true");
+  mkdirSync("test-results/screenshots", { recursive: true });
+  await panel.getByTestId("csv-year").screenshot({ path: "test-results/screenshots/site-form-csv-error.png" });
 
   // Fixed, the year is used as given.
   await box.fill(ROWS.join("\n"));
@@ -104,4 +106,22 @@ test("a basement wall shows the top of the wall beside deep ground, and the wall
   await paths.waitFor();
   expect(await paths.locator("thead").textContent()).toMatch(/Clear cavity.*Through framing/);
   await page.close();
+});
+
+test("at phone width the typed year fits the screen", async () => {
+  const context = await openBrowser();
+  const page = await context.newPage();
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto(`${baseUrl()}/details/${WALL}`);
+  const panel = page.getByTestId("site-check-panel");
+  await panel.getByTestId("site-check-results").waitFor();
+  await panel.getByLabel("Twelve monthly means, typed").check();
+  await panel.getByTestId("typed-year").waitFor();
+  expect(await panel.locator('input[name="yearMonths[11].rh"]').isVisible()).toBe(true);
+  const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  expect(overflow).toBeLessThanOrEqual(1);
+  mkdirSync("test-results/screenshots", { recursive: true });
+  await panel.locator("form").screenshot({ path: "test-results/screenshots/site-form-typed-phone.png" });
+  await page.close();
+  await context.close();
 });
