@@ -81,7 +81,6 @@ export const materialSchema = z
   .strict();
 
 export type Material = z.output<typeof materialSchema>;
-export type MaterialInput = z.input<typeof materialSchema>;
 export type MaterialLibrary = ReadonlyMap<string, Material> | Readonly<Record<string, Material>>;
 
 /** Builds a library from parsed entries (each validated); duplicate slugs are an error. */

@@ -64,7 +64,7 @@ export function layerRsi(layer: ResolvedLayer): number {
 export type HeatPath = "clear-cavity" | "stud";
 
 /** RSI of one layer along a heat path at a mean temperature (temperature-dependent insulations). */
-export function pathLayerRsi(layer: ResolvedLayer, path: HeatPath, mean_t_c: number): number {
+function pathLayerRsi(layer: ResolvedLayer, path: HeatPath, mean_t_c: number): number {
   const m = layer.framing && path === "stud" ? layer.framing.material : layer.material;
   return materialRsiAt(m, layer.thickness_mm, mean_t_c);
 }

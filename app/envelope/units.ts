@@ -22,7 +22,6 @@ export const deltaCToF = (dc: number): number => (dc * 9) / 5;
 export const mmToIn = (mm: number): number => mm / MM_PER_IN;
 export const inToMm = (inch: number): number => inch * MM_PER_IN;
 export const paToPsi = (pa: number): number => pa / PA_PER_PSI;
-export const psiToPa = (psi: number): number => psi * PA_PER_PSI;
 /** Degree-days: base 18 °C ↔ base 65 °F, base 10 °C ↔ base 50 °F differ only by the 1.8 scale. */
 export const degreeDaysCToF = (dd: number): number => dd * 1.8;
 export const degreeDaysFToC = (dd: number): number => dd / 1.8;
@@ -65,10 +64,6 @@ export function formatPermeance(ng: number, system: UnitSystem): string {
   const perm = ngToPerm(ng);
   if (system === "ip") return `${fixed(perm, perm < 1 ? 3 : 1)} perm`;
   return `${fixed(ng, ng < 10 ? 2 : 0)} ng/(s·m²·Pa)`;
-}
-
-export function formatPressure(pa: number, system: UnitSystem): string {
-  return system === "ip" ? `${fixed(paToPsi(pa), 4)} psi` : `${fixed(pa, 0)} Pa`;
 }
 
 export function formatRate(gPerM2Day: number, system: UnitSystem): string {

@@ -71,7 +71,7 @@ export function evaluateRules(ctx: RuleContext): Flag[] {
   return flags;
 }
 
-export { isReservoirCladding, SCREENING_RATE_G_M2_DAY } from "./helpers";
+export { isReservoirCladding } from "./helpers";
 export type { Rule, RuleContext } from "./types";
 
 export { SITE_CHECK_CAUTION as LOCAL_CODE_CAUTION } from "~/vocabulary/caution";
