@@ -39,7 +39,7 @@ function expectedSheets(): Map<string, { title: string; effectiveR: string }> {
   return sheets;
 }
 
-test("a member buys a set with a test card, returns, sees it as theirs and downloads a pack of one-page sheets", async () => {
+test("a member buys a set with a test card, returns, sees it as theirs and downloads a pack of detail sheets (the detail, then its year)", async () => {
   const page = await browser.newPage();
   const email = `buyer-${Date.now()}@example.test`;
   const password = "a set buyer passphrase"; // our own minimum is 12 characters
@@ -81,7 +81,7 @@ test("a member buys a set with a test card, returns, sees it as theirs and downl
   expect(expected.size).toBeGreaterThan(0);
   for (const [slug, sheet] of expected) {
     const info = execFileSync("pdfinfo", [`${slug}.pdf`], { cwd: dir, encoding: "utf8" });
-    expect(info, slug).toMatch(/^Pages:\s+1$/m);
+    expect(info, slug).toMatch(/^Pages:\s+2$/m); // the detail, then its seasonal balance
     const title = /^Title:\s+(.*)$/m.exec(info)?.[1];
     expect(title, slug).toBe(pdfText(sheet.title));
     const text = execFileSync("pdftotext", ["-layout", `${slug}.pdf`, "-"], { cwd: dir, encoding: "utf8" });
