@@ -88,6 +88,7 @@ function Seasonal({ seasonal, units }: { seasonal: SeasonalResult; units: UnitSy
         {seasonalVerdictLabel(seasonal)}
       </p>
       <p className="text-sm" data-testid="seasonal-figures">{seasonalFigures(seasonal, units)}</p>
+      {seasonal.scopeNote ? <p className="text-sm text-graphite-soft" data-testid="seasonal-scope">{seasonal.scopeNote}</p> : null}
       <p className={`text-sm ${seasonal.surface.pass ? "" : "font-semibold text-stop"}`} data-testid="seasonal-surface">{surfaceCheckLine(seasonal)}</p>
       <SeasonalChart seasonal={seasonal} units={units} className="rounded border border-rule bg-sheet p-2" />
       <p className="text-xs text-graphite-soft" data-testid="climate-year" data-source={year.source}>

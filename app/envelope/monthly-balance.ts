@@ -466,5 +466,6 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     verdict,
     surface: mould.check,
     explanation,
+    scopeNote: null,
   };
 }

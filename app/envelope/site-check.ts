@@ -108,6 +108,12 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   };
 }
 
+// ISO 13788:2012 leaves ground contact out of the monthly method's scope (from memory): the soil face
+// is held saturated at the ground temperature all year, so condensate there can never evaporate
+// outward, and the wall's own moisture from the soil is not modelled at all.
+const SOIL_SCOPE_NOTE =
+  "Against soil the monthly method is outside its scope: the soil face is held saturated at ground temperature all year, so these figures are shown for reference and raise no flag. The top of the wall (above grade and at frost depth) and the design-day cases judge this assembly.";
+
 /** seasonal: false skips the 12-month balance (bulk screening, the design-day benchmark). */
 export interface SiteCheckOptions { seasonal?: boolean }
 
@@ -119,7 +125,9 @@ export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials
   const upper = upperWallCases(a, resolvedSite);
   const upperWall = upper ? { aboveGrade: computeProfile(a, upper.aboveGrade), frostDepth: computeProfile(a, upper.frostDepth) } : null;
   const rows = codeRows(a, resolvedSite, vapour.interiorClass);
-  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, upperWall, codeRows: rows });
+  const balance = options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite));
+  const seasonal = balance && winter.exterior.label === "soil" ? { ...balance, scopeNote: SOIL_SCOPE_NOTE } : balance;
+  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, upperWall, codeRows: rows, seasonal });
   return {
     site: resolvedSite,
     thermal,
@@ -129,6 +137,6 @@ export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials
     code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
-    seasonal: options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite)),
+    seasonal,
   };
 }

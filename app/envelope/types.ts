@@ -353,6 +353,9 @@ export interface SeasonalResult {
   /** Water still held after the twelve months from the start month, g/m². */
   endOfYear_g_m2: number;
   verdict: "no-condensation" | "dries-within-year" | "accumulates";
+  /** Set where the monthly method is outside its scope for this assembly (ground contact): the
+   * figures are shown, but no flag is raised from them. */
+  scopeNote: string | null;
   surface: SurfaceMouldCheck;
   explanation: string;
 }

@@ -200,7 +200,7 @@ function siteCheckBlock(doc: Doc, input: DetailSheetInput, x: number, y: number,
   y = block(doc, `Interior retarder: ${r.vapour.interiorClass === "none" ? "none" : `Class ${r.vapour.interiorClass}`}; dries ${r.vapour.dryingDirections.length ? r.vapour.dryingDirections.join(" and ") : "in neither direction"}.`, x, y, width, limit, { ...small, gap: 3 });
   if (r.seasonal) {
     y = block(doc, `Through the year: ${seasonalVerdictLabel(r.seasonal)}.`, x, y, width, limit, { font: FONTS.sansBold, size: 7.4, color: r.seasonal.verdict === "accumulates" ? INK.stop : INK.graphite, gap: 1 });
-    y = block(doc, `${seasonalFigures(r.seasonal, units)} Monthly chart overleaf.`, x, y, width, limit, { ...small, gap: 4 });
+    y = block(doc, `${seasonalFigures(r.seasonal, units)}${r.seasonal.scopeNote ? ` ${r.seasonal.scopeNote}` : ""} Monthly chart overleaf.`, x, y, width, limit, { ...small, gap: 4 });
   }
   y = heading(doc, `Code rows compared, ${r.code.edition}`, x, y + 2, width);
   for (const row of r.code.rows) {

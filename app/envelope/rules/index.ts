@@ -29,6 +29,9 @@ import { summerCondensationInteriorSheet } from "./summer-condensation-interior-
 import { summerInwardCondensation } from "./summer-inward-condensation";
 import { winterCondensingSurface } from "./winter-condensing-surface";
 import type { Rule, RuleContext } from "./types";
+import { interiorSurfaceMould } from "./interior-surface-mould";
+import { seasonalAccumulation } from "./seasonal-accumulation";
+import { seasonalPeak } from "./seasonal-peak";
 
 export const RULES: readonly Rule[] = [
   doubleVapourBarrier,
@@ -57,6 +60,9 @@ export const RULES: readonly Rule[] = [
   hotHumidExteriorFoamUnder10pct,
   crawlspaceNoClassIGroundCover,
   openCellRoofNoRetarder,
+  seasonalAccumulation,
+  seasonalPeak,
+  interiorSurfaceMould,
 ];
 
 export function evaluateRules(ctx: RuleContext): Flag[] {

@@ -1,6 +1,6 @@
 // The shape of a trade rule: a small named object, one per file, listed in ./index.ts.
 import type { ResolvedAssembly } from "../layers";
-import type { CodeRow, Flag, ProfileCase, ResolvedSite, Severity, UpperWallProfiles, VapourResult } from "../types";
+import type { CodeRow, Flag, ProfileCase, ResolvedSite, SeasonalResult, Severity, UpperWallProfiles, VapourResult } from "../types";
 
 export interface RuleContext {
   assembly: ResolvedAssembly;
@@ -11,6 +11,8 @@ export interface RuleContext {
   /** Basement and crawl-space walls: the band above grade and the soil at frost depth. */
   upperWall: UpperWallProfiles | null;
   codeRows: CodeRow[];
+  /** The ISO 13788 monthly balance, or null when the caller asked for the design day only. */
+  seasonal: SeasonalResult | null;
 }
 
 export interface Rule {

@@ -10,7 +10,7 @@ const loaded = loadContent(path.resolve(__dirname, "../../../content"));
 const lib = buildMaterialLibrary((loaded.materials ?? []).map((m) => m.material));
 
 const checks = loaded.details.flatMap((detail) => detail.zones.map((zone) => ({
-  detail, zone, flags: runSiteCheck({ kind: detail.assembly, layers: detail.layers }, { zone }, lib, { seasonal: false }).flags,
+  detail, zone, flags: runSiteCheck({ kind: detail.assembly, layers: detail.layers }, { zone }, lib).flags,
 })));
 
 test("no demo detail claims a zone where its own site check stops or cautions without saying why", () => {
