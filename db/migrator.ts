@@ -14,7 +14,10 @@ export interface Migration {
 }
 
 // The list is explicit (not a glob) so the same code runs under tsx, vitest and a compiled build.
-export function createMigrator(sequelize: Sequelize, logger: Pick<Console, "info" | "warn" | "error" | "debug"> | undefined = undefined) {
+export function createMigrator(
+  sequelize: Sequelize,
+  logger: Pick<Console, "info" | "warn" | "error" | "debug"> | undefined = undefined,
+) {
   return new Umzug<MigrationContext>({
     migrations: migrations.map((m) => ({
       name: m.name,

@@ -7,7 +7,11 @@ import { parse } from "yaml";
 import { buildMaterialLibrary, runSiteCheck, type AssemblyInput, type SiteInput } from "../app/envelope/index.ts";
 
 const dir = join(process.cwd(), "content", "materials");
-const materials = buildMaterialLibrary(readdirSync(dir).filter((f) => f.endsWith(".yaml")).map((f) => parse(readFileSync(join(dir, f), "utf8")) as unknown));
+const materials = buildMaterialLibrary(
+  readdirSync(dir)
+    .filter((f) => f.endsWith(".yaml"))
+    .map((f) => parse(readFileSync(join(dir, f), "utf8")) as unknown),
+);
 
 // 12 layers, with a framed cavity and two RH-dependent layers (plywood, variable retarder),
 // so the permeance iteration is part of what is measured.
@@ -21,9 +25,19 @@ const wall: AssemblyInput = {
     { role: "insulation", material: "xps-board", thickness_mm: 25.4, joints: "taped" },
     { role: "sheathing", material: "plywood", thickness_mm: 12.7 },
     { role: "air-barrier", material: "self-adhered-vapour-open-membrane", thickness_mm: 0.5 },
-    { role: "insulation", material: "dense-pack-cellulose", thickness_mm: 139.7, framing: { material: "softwood-lumber", fraction: 0.23 } },
+    {
+      role: "insulation",
+      material: "dense-pack-cellulose",
+      thickness_mm: 139.7,
+      framing: { material: "softwood-lumber", fraction: 0.23 },
+    },
     { role: "vapour-retarder", material: "variable-permeance-retarder", thickness_mm: 0.2 },
-    { role: "insulation", material: "mineral-wool-batt", thickness_mm: 38, framing: { material: "softwood-lumber", fraction: 0.12 } },
+    {
+      role: "insulation",
+      material: "mineral-wool-batt",
+      thickness_mm: 38,
+      framing: { material: "softwood-lumber", fraction: 0.12 },
+    },
     { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
     { role: "interior-finish", material: "latex-paint", thickness_mm: 0.1 },
   ],
@@ -50,11 +64,32 @@ const designDay = { seasonal: false } as const;
 // The same wall at five sites: what a detail page, a pack or the content re-check does.
 const same = rate(20000, (i) => runSiteCheck(wall, sites[i % sites.length], materials, designDay).thermal.rsi);
 // A different wall every check (a note that changes each time): nothing the assembly cache holds helps.
-const fresh = rate(5000, (i) => runSiteCheck({ ...wall, layers: [{ ...wall.layers[0], note: `n${i}` }, ...wall.layers.slice(1)] }, sites[i % sites.length], materials, designDay).thermal.rsi);
+const fresh = rate(
+  5000,
+  (i) =>
+    runSiteCheck(
+      { ...wall, layers: [{ ...wall.layers[0], note: `n${i}` }, ...wall.layers.slice(1)] },
+      sites[i % sites.length],
+      materials,
+      designDay,
+    ).thermal.rsi,
+);
 // Anchor: a fixed arithmetic loop, so a run on a slower or busier machine can be compared as a ratio.
-const anchor = rate(20000, (i) => { let s = 0; for (let k = 1; k <= 200; k++) s += Math.sqrt(k * (i + 1)); return s; });
+const anchor = rate(20000, (i) => {
+  let s = 0;
+  for (let k = 1; k <= 200; k++) s += Math.sqrt(k * (i + 1));
+  return s;
+});
 
-console.log(`design-day site check, 12-layer wall at 5 sites: ${f(same.median)} checks/s on one core (median of 5 rounds; min ${f(same.min)}, max ${f(same.max)})`);
-console.log(`design-day site check, a new 12-layer wall every check: ${f(fresh.median)} checks/s (min ${f(fresh.min)}, max ${f(fresh.max)})`);
-console.log(`anchor (200 square roots): ${f(anchor.median)} loops/s; checks per anchor loop: ${(same.median / anchor.median).toFixed(3)} (same wall), ${(fresh.median / anchor.median).toFixed(3)} (new wall)`);
-console.log(`target ≥ 100,000 design-day checks/s: ${same.median >= 100000 ? "met" : "NOT met on this machine"}${sink === 0 ? "" : ""}`);
+console.log(
+  `design-day site check, 12-layer wall at 5 sites: ${f(same.median)} checks/s on one core (median of 5 rounds; min ${f(same.min)}, max ${f(same.max)})`,
+);
+console.log(
+  `design-day site check, a new 12-layer wall every check: ${f(fresh.median)} checks/s (min ${f(fresh.min)}, max ${f(fresh.max)})`,
+);
+console.log(
+  `anchor (200 square roots): ${f(anchor.median)} loops/s; checks per anchor loop: ${(same.median / anchor.median).toFixed(3)} (same wall), ${(fresh.median / anchor.median).toFixed(3)} (new wall)`,
+);
+console.log(
+  `target ≥ 100,000 design-day checks/s: ${same.median >= 100000 ? "met" : "NOT met on this machine"}${sink === 0 ? "" : ""}`,
+);

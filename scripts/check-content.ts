@@ -45,11 +45,15 @@ for (const detail of content.details) {
     console.log(`\n${detail.slug} @ ${zone}  (R-${result.thermal.r_ip.toFixed(1)}, ${detail.tier})`);
     for (const flag of flags) console.log(`  [${flag.severity}] ${flag.id}: ${flag.title}`);
     for (const row of rows) {
-      console.log(`  [code ${row.pass ? "pass" : "FAIL"}] ${row.label}: required ${row.required}, provided ${row.provided}`);
+      console.log(
+        `  [code ${row.pass ? "pass" : "FAIL"}] ${row.label}: required ${row.required}, provided ${row.provided}`,
+      );
     }
   }
 }
 if (!asJson) {
-  console.log(`\n${content.details.length} details, ${checks} detail-zone checks: ${stops} stop flag(s), ${failingRows} failing code row(s).`);
+  console.log(
+    `\n${content.details.length} details, ${checks} detail-zone checks: ${stops} stop flag(s), ${failingRows} failing code row(s).`,
+  );
 }
 process.exit(stops > 0 ? 2 : 0);

@@ -11,7 +11,9 @@ try {
       if (!interactive) return;
       const width = 30;
       const filled = Math.round((done / total) * width);
-      process.stderr.write(`\r  [${"#".repeat(filled)}${".".repeat(width - filled)}] ${done}/${total} ${label.padEnd(60).slice(0, 60)}`);
+      process.stderr.write(
+        `\r  [${"#".repeat(filled)}${".".repeat(width - filled)}] ${done}/${total} ${label.padEnd(60).slice(0, 60)}`,
+      );
       if (done === total) process.stderr.write("\n");
     },
   });

@@ -5,12 +5,18 @@ import { sequelize } from "../app/db/sequelize.server.ts";
 
 const appUrl = process.env.APP_URL ?? "http://127.0.0.1:3000";
 if (!demoAccountsAllowed(appUrl, process.env.DEMO_ACCOUNTS)) {
-  console.error(`demo accounts: refusing to create known-password logins for ${appUrl} (set DEMO_ACCOUNTS=1 to override)`);
+  console.error(
+    `demo accounts: refusing to create known-password logins for ${appUrl} (set DEMO_ACCOUNTS=1 to override)`,
+  );
   process.exit(1);
 }
 try {
   const created = await ensureDemoAccounts();
-  console.log(created.length ? `demo accounts created: ${created.join(", ")}; password "${DEMO_PASSWORD}"` : "demo accounts already present");
+  console.log(
+    created.length
+      ? `demo accounts created: ${created.join(", ")}; password "${DEMO_PASSWORD}"`
+      : "demo accounts already present",
+  );
 } finally {
   await sequelize.close();
 }

@@ -26,7 +26,11 @@ try {
 
   if (demoAccountsAllowed(process.env.APP_URL ?? "http://127.0.0.1:3000", process.env.DEMO_ACCOUNTS)) {
     const created = await ensureDemoAccounts();
-    console.log(created.length ? `demo logins created (password "${DEMO_PASSWORD}"): ${created.join(", ")}` : "demo logins present");
+    console.log(
+      created.length
+        ? `demo logins created (password "${DEMO_PASSWORD}"): ${created.join(", ")}`
+        : "demo logins present",
+    );
   }
 
   const prices = await withRetries(() => syncPaymentsCatalogue());

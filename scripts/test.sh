@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# npm test: typecheck, then unit + integration tests against a throwaway MariaDB, then browser tests
+# npm test: typecheck, format and lint, then unit + integration tests against a throwaway MariaDB, then browser tests
 # against a built server. Cleans up what it started, also on failure; ends with one summary line.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -23,6 +23,9 @@ status=0
 log "typecheck (react-router typegen && tsc)"
 if npm run -s typecheck; then echo "typecheck ok" > "$results/typecheck.txt"; else status=1; echo "typecheck failed" > "$results/typecheck.txt"; fi
 
+log "format and lint (biome), dead exports and files (knip)"
+if npx biome ci --reporter=summary . && npx knip --no-progress; then echo "lint ok" > "$results/lint.txt"; else status=1; echo "lint failed" > "$results/lint.txt"; fi
+
 DB_PORT=$(free_port)
 log "throwaway MariaDB on 127.0.0.1:$DB_PORT in $scratch"
 start_mariadb "$scratch/mariadb" "$DB_PORT" --innodb-log-file-size=8M --innodb-buffer-pool-size=64M \
@@ -32,7 +35,7 @@ export SESSION_SECRET=test-secret-that-is-long-enough-for-signing-cookies
 export TEST_SCRATCH_DIR="$scratch"
 
 log "unit and integration tests (vitest)"
-# Arguments narrow the run to matching test files, e.g. `npm test -- tests/e2e/desk` (the typecheck always runs).
+# Arguments narrow the run to matching test files, e.g. `npm test -- tests/e2e/desk` (the typecheck and lint always run).
 npx vitest run --passWithNoTests --reporter=default --reporter=json --outputFile.json="$results/vitest.json" "$@" || status=1
 
 log "building the app for browser tests"

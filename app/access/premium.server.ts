@@ -13,7 +13,10 @@ export interface Viewer {
 
 // An entitlement counts while live: ~/vocabulary/entitlements says which (isLive; the SQL form is LIVE_ENTITLEMENT_SQL).
 /** Whether this viewer may read the full premium content of one detail. Free details need nothing. */
-export async function canReadDetail(viewer: Viewer | null, detail: { id: number; tier: "free" | "premium" }): Promise<boolean> {
+export async function canReadDetail(
+  viewer: Viewer | null,
+  detail: { id: number; tier: "free" | "premium" },
+): Promise<boolean> {
   if (detail.tier === "free") return true;
   if (!viewer) return false;
   // Editors and reviewers must read what they review.
@@ -43,15 +46,20 @@ export async function downloadableSetIds(viewer: Viewer | null): Promise<Set<num
 /** Whether the viewer holds a live plan (not only bought sets): a second plan is not sold to them. */
 export async function hasLivePlan(viewer: Viewer | null): Promise<boolean> {
   if (!viewer) return false;
-  const rows = await sequelize.query(`SELECT 1 FROM entitlements e WHERE e.user_id = :userId AND e.kind = 'plan' AND ${LIVE_ENTITLEMENT_SQL} LIMIT 1`, {
-    type: QueryTypes.SELECT,
-    replacements: { userId: viewer.id },
-  });
+  const rows = await sequelize.query(
+    `SELECT 1 FROM entitlements e WHERE e.user_id = :userId AND e.kind = 'plan' AND ${LIVE_ENTITLEMENT_SQL} LIMIT 1`,
+    {
+      type: QueryTypes.SELECT,
+      replacements: { userId: viewer.id },
+    },
+  );
   return rows.length > 0;
 }
 
 /** What a premium guard protects: one detail (its drawings, its site check) or one set's pack. */
-export type PremiumContent = { what: string; detail: { id: number; tier: "free" | "premium" } } | { what: string; set: { id: number; slug: string; title: string } };
+export type PremiumContent =
+  | { what: string; detail: { id: number; tier: "free" | "premium" } }
+  | { what: string; set: { id: number; slug: string; title: string } };
 
 /** The refusal for content this viewer may not read, naming the sets that would give access. */
 export async function refusalFor(content: PremiumContent): Promise<PremiumRefusal> {
@@ -69,7 +77,8 @@ export async function refusalFor(content: PremiumContent): Promise<PremiumRefusa
  * (403, JSON `PremiumRefusal`). Pages that show a preview instead use `canReadDetail` and `refusalFor`.
  */
 export async function requireEntitlement(viewer: Viewer | null, content: PremiumContent): Promise<void> {
-  const allowed = "set" in content ? await canDownloadSet(viewer, content.set.id) : await canReadDetail(viewer, content.detail);
+  const allowed =
+    "set" in content ? await canDownloadSet(viewer, content.set.id) : await canReadDetail(viewer, content.detail);
   if (allowed) return;
   const { error, message, ...details } = await refusalFor(content);
   throw jsonError(403, error, message, details);

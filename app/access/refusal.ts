@@ -19,6 +19,9 @@ export function premiumRefusal(what: string, sets: readonly { slug: string; titl
   return {
     error: "premium_required",
     message: `${what} is premium: a plan or ${where} gives access.`,
-    offers: [{ label: "See plans", href: "/pricing" }, ...sets.map((set) => ({ label: `Buy “${set.title}”`, href: `/sets#${set.slug}` }))],
+    offers: [
+      { label: "See plans", href: "/pricing" },
+      ...sets.map((set) => ({ label: `Buy “${set.title}”`, href: `/sets#${set.slug}` })),
+    ],
   };
 }

@@ -27,7 +27,10 @@ function link(path: string): string {
 
 async function sendVerification(user: User): Promise<void> {
   const token = await issueToken(user.id, "verify-email");
-  await sendMailOrLog(user.email, verifyEmailMail({ displayName: user.displayName, link: link(`/verify-email/${token}`) }));
+  await sendMailOrLog(
+    user.email,
+    verifyEmailMail({ displayName: user.displayName, link: link(`/verify-email/${token}`) }),
+  );
 }
 
 /** Mails to one typed-in address are capped so the site cannot be used to flood an inbox. */
@@ -52,7 +55,14 @@ export async function signUp(input: { email: string; displayName: string; passwo
     if (!(error instanceof UniqueConstraintError)) throw error;
     const existing = await User.findOne({ where: { email } });
     if (existing) {
-      await sendMailOrLog(email, alreadyRegisteredMail({ displayName: existing.displayName, signInLink: link("/sign-in"), resetLink: link("/forgot-password") }));
+      await sendMailOrLog(
+        email,
+        alreadyRegisteredMail({
+          displayName: existing.displayName,
+          signInLink: link("/sign-in"),
+          resetLink: link("/forgot-password"),
+        }),
+      );
     }
     return;
   }
@@ -63,7 +73,8 @@ export async function signUp(input: { email: string; displayName: string; passwo
 /** Checks a password under the per-account and per-address limits; used by the form strategy. */
 export async function signInWithPassword(input: { email: string; password: string; address: string }): Promise<User> {
   const email = normaliseEmail(input.email);
-  if ((await isLimited("address", input.address)) || (await isLimited("account", email))) throw new SignInError(SIGN_IN_LIMITED);
+  if ((await isLimited("address", input.address)) || (await isLimited("account", email)))
+    throw new SignInError(SIGN_IN_LIMITED);
   const user = await User.findOne({ where: { email } });
   const ok = user ? await verifyPassword(user.passwordHash, input.password) : await verifyAgainstDecoy(input.password);
   if (!user || !ok) {
@@ -79,7 +90,13 @@ export async function signInWithPassword(input: { email: string; password: strin
     throw new SignInError("Confirm your e-mail address first: we have sent you a new link.");
   }
   if (passwordNeedsRehash(user.passwordHash)) await user.update({ passwordHash: await hashPassword(input.password) });
-  await recordAudit({ actorId: user.id, action: "user.signed_in", subjectType: "user", subjectId: user.id, details: { address: input.address } });
+  await recordAudit({
+    actorId: user.id,
+    action: "user.signed_in",
+    subjectType: "user",
+    subjectId: user.id,
+    details: { address: input.address },
+  });
   return user;
 }
 
@@ -102,7 +119,10 @@ export async function requestPasswordReset(rawEmail: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user || !(await mayMail(email))) return;
   const token = await issueToken(user.id, "reset-password");
-  await sendMailOrLog(user.email, resetPasswordMail({ displayName: user.displayName, link: link(`/reset-password/${token}`) }));
+  await sendMailOrLog(
+    user.email,
+    resetPasswordMail({ displayName: user.displayName, link: link(`/reset-password/${token}`) }),
+  );
 }
 
 /**
@@ -114,7 +134,10 @@ export async function resetPassword(token: string, password: string): Promise<bo
   if (userId === null) return false;
   const user = await User.findByPk(userId);
   if (!user) return false;
-  await user.update({ passwordHash: await hashPassword(password), emailVerifiedAt: user.emailVerifiedAt ?? new Date() });
+  await user.update({
+    passwordHash: await hashPassword(password),
+    emailVerifiedAt: user.emailVerifiedAt ?? new Date(),
+  });
   await revokeUserSessions(user.id);
   await recordAudit({ actorId: user.id, action: "user.password_reset", subjectType: "user", subjectId: user.id });
   return true;

@@ -24,13 +24,16 @@ export interface AuditEntry {
 
 /** Pass the caller's transaction so the record commits or rolls back with the change it describes. */
 export async function recordAudit(entry: AuditEntry, transaction?: Transaction): Promise<void> {
-  await AuditEvent.create({
-    actorId: entry.actorId,
-    action: entry.action,
-    subjectType: entry.subjectType,
-    subjectId: String(entry.subjectId),
-    details: entry.details ?? null,
-  }, { transaction });
+  await AuditEvent.create(
+    {
+      actorId: entry.actorId,
+      action: entry.action,
+      subjectType: entry.subjectType,
+      subjectId: String(entry.subjectId),
+      details: entry.details ?? null,
+    },
+    { transaction },
+  );
 }
 
 export interface AuditRow {
@@ -42,7 +45,13 @@ export interface AuditRow {
   details: AuditDetails | null;
 }
 
-export async function listAuditEvents({ limit = 100, subject }: { limit?: number; subject?: { type: string; id: string } } = {}): Promise<AuditRow[]> {
+export async function listAuditEvents({
+  limit = 100,
+  subject,
+}: {
+  limit?: number;
+  subject?: { type: string; id: string };
+} = {}): Promise<AuditRow[]> {
   const rows = await AuditEvent.findAll({
     where: subject ? { subjectType: subject.type, subjectId: subject.id } : {},
     include: [{ model: User, as: "actor", attributes: ["displayName", "email"] }],

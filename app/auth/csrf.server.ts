@@ -38,7 +38,8 @@ function originIsOurs(request: Request): boolean {
  * Reads a clone, so the request body stays readable (remix-auth reads it again).
  */
 export async function requireCsrf(request: Request): Promise<FormData> {
-  const refuse = () => data({ message: "This form expired or came from another site. Reload the page and try again." }, { status: 403 });
+  const refuse = () =>
+    data({ message: "This form expired or came from another site. Reload the page and try again." }, { status: 403 });
   if (!originIsOurs(request)) throw refuse();
   const form = await request.clone().formData();
   const submitted = form.get(CSRF_FIELD);

@@ -21,7 +21,11 @@ export function demoAccountsAllowed(appUrl: string, override: string | undefined
 
 /** Creates the demo logins that are missing; existing accounts are left as they are. */
 export async function ensureDemoAccounts(): Promise<string[]> {
-  const existing = new Set((await User.findAll({ attributes: ["email"], where: { email: DEMO_ACCOUNTS.map((a) => a.email) } })).map((u) => u.email));
+  const existing = new Set(
+    (await User.findAll({ attributes: ["email"], where: { email: DEMO_ACCOUNTS.map((a) => a.email) } })).map(
+      (u) => u.email,
+    ),
+  );
   const missing = DEMO_ACCOUNTS.filter((account) => !existing.has(account.email));
   if (missing.length === 0) return [];
   const passwordHash = await hashPassword(DEMO_PASSWORD);

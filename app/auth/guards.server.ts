@@ -3,7 +3,6 @@ import type { User } from "~/models/index.server";
 import { roleAtLeast, type StaffRole } from "~/vocabulary/roles";
 import { findSessionUser } from "./session.server";
 
-
 /** The fields of a user that any page may show; never the hash or the payment ids. */
 export interface PublicUser {
   id: number;
@@ -58,7 +57,8 @@ export function requireUser(request: Request, context: Context): User {
 export function requireRole(request: Request, context: Context, needed: StaffRole): User {
   const user = requireUser(request, context);
   if (roleAtLeast(user.role, needed)) return user;
-  if (isApi(request)) throw Response.json({ error: "forbidden", message: `This needs the ${needed} role.` }, { status: 403 });
+  if (isApi(request))
+    throw Response.json({ error: "forbidden", message: `This needs the ${needed} role.` }, { status: 403 });
   throw data({ message: `This page needs the ${needed} role.` }, { status: 403 });
 }
 

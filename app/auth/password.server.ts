@@ -5,7 +5,6 @@ import argon2 from "argon2";
 // needsRehash() lets sign-in upgrade old ones.
 export const PASSWORD_HASH_OPTIONS = { type: argon2.argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1 } as const;
 
-
 export function hashPassword(password: string): Promise<string> {
   return argon2.hash(password, PASSWORD_HASH_OPTIONS);
 }

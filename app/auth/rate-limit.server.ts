@@ -21,14 +21,20 @@ export function bucket(kind: LimitKind, key: string): string {
  */
 export function clientAddress(request: Request): string {
   const forwarded = request.headers.get("X-Forwarded-For");
-  const last = forwarded?.split(",").map((part) => part.trim()).filter(Boolean).at(-1);
+  const last = forwarded
+    ?.split(",")
+    .map((part) => part.trim())
+    .filter(Boolean)
+    .at(-1);
   return last ?? request.headers.get("X-Real-IP") ?? "direct";
 }
 
 /** Failures in the window since the bucket's last success (a correct sign-in clears the account's count). */
 export async function recentFailures(bucketName: string, windowMs: number, now = new Date()): Promise<number> {
   const windowStart = new Date(now.getTime() - windowMs);
-  const lastSuccess = await SignInAttempt.max<Date | null, SignInAttempt>("createdAt", { where: { bucket: bucketName, succeeded: true, createdAt: { [Op.gt]: windowStart } } });
+  const lastSuccess = await SignInAttempt.max<Date | null, SignInAttempt>("createdAt", {
+    where: { bucket: bucketName, succeeded: true, createdAt: { [Op.gt]: windowStart } },
+  });
   const since = lastSuccess && lastSuccess > windowStart ? lastSuccess : windowStart;
   return SignInAttempt.count({ where: { bucket: bucketName, succeeded: false, createdAt: { [Op.gt]: since } } });
 }

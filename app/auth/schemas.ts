@@ -5,7 +5,11 @@ import { STAFF_ROLES } from "~/vocabulary/roles";
 const PASSWORD_MIN = 12; // NIST SP 800-63B asks for at least 8; we ask a little more
 const PASSWORD_MAX = 200;
 
-const email = z.string({ error: "Enter your e-mail address." }).trim().max(254).pipe(z.email({ error: "Enter an e-mail address like name@example.com." }));
+const email = z
+  .string({ error: "Enter your e-mail address." })
+  .trim()
+  .max(254)
+  .pipe(z.email({ error: "Enter an e-mail address like name@example.com." }));
 const newPassword = z
   .string({ error: `Choose a password of at least ${PASSWORD_MIN} characters.` })
   .min(PASSWORD_MIN, { error: `Use at least ${PASSWORD_MIN} characters; a few unrelated words work well.` })
@@ -17,7 +21,11 @@ const confirmPassword = z.string({ error: "Type the password again." });
 
 export const signUpSchema = z
   .object({
-    displayName: z.string({ error: "Tell us what to call you." }).trim().min(1).max(120, { error: "Keep it under 120 characters." }),
+    displayName: z
+      .string({ error: "Tell us what to call you." })
+      .trim()
+      .min(1)
+      .max(120, { error: "Keep it under 120 characters." }),
     email,
     password: newPassword,
     confirmPassword,
@@ -32,7 +40,9 @@ export const signInSchema = z.object({
 
 export const forgotPasswordSchema = z.object({ email });
 
-export const resetPasswordSchema = z.object({ password: newPassword, confirmPassword }).refine(sameTwice, passwordsMatch);
+export const resetPasswordSchema = z
+  .object({ password: newPassword, confirmPassword })
+  .refine(sameTwice, passwordsMatch);
 
 export const userAdminSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("change-role"), userId: z.coerce.number().int().positive(), role: z.enum(STAFF_ROLES) }),

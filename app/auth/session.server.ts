@@ -69,7 +69,8 @@ export async function findSessionUser(request: Request): Promise<User | null> {
 export async function startSession(request: Request, userId: number): Promise<string> {
   const cookie = await getCookieSession(request);
   const previous = cookie.get("sid");
-  if (previous) await Session.update({ revokedAt: new Date() }, { where: { id: sessionRowId(previous), revokedAt: null } });
+  if (previous)
+    await Session.update({ revokedAt: new Date() }, { where: { id: sessionRowId(previous), revokedAt: null } });
   const sid = randomToken();
   await Session.create({
     id: sessionRowId(sid),
@@ -92,7 +93,10 @@ export async function endSession(request: Request): Promise<string> {
 
 /** Revokes every live session of a user (role change, password reset, admin action). Returns how many. */
 export async function revokeUserSessions(userId: number): Promise<number> {
-  const [count] = await Session.update({ revokedAt: new Date() }, { where: { userId, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
+  const [count] = await Session.update(
+    { revokedAt: new Date() },
+    { where: { userId, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } },
+  );
   return count;
 }
 

@@ -17,7 +17,12 @@ function hashToken(token: string): string {
 export async function issueToken(userId: number, purpose: TokenPurpose, now = new Date()): Promise<string> {
   await AuthToken.update({ usedAt: now }, { where: { userId, purpose, usedAt: null } });
   const token = randomToken();
-  await AuthToken.create({ userId, purpose, tokenHash: hashToken(token), expiresAt: new Date(now.getTime() + TOKEN_LIFETIME_MS[purpose]) });
+  await AuthToken.create({
+    userId,
+    purpose,
+    tokenHash: hashToken(token),
+    expiresAt: new Date(now.getTime() + TOKEN_LIFETIME_MS[purpose]),
+  });
   return token;
 }
 

@@ -17,7 +17,9 @@ export interface UserRow {
 export async function listUsers({ q, limit = 50 }: { q?: string; limit?: number } = {}): Promise<UserRow[]> {
   const term = q?.trim();
   const users = await User.findAll({
-    where: term ? { [Op.or]: [{ email: { [Op.like]: `%${term}%` } }, { displayName: { [Op.like]: `%${term}%` } }] } : {},
+    where: term
+      ? { [Op.or]: [{ email: { [Op.like]: `%${term}%` } }, { displayName: { [Op.like]: `%${term}%` } }] }
+      : {},
     order: [["createdAt", "DESC"]],
     limit,
   });
@@ -50,13 +52,22 @@ export async function changeRole(actorId: number, userId: number, role: StaffRol
   if (from === role) return;
   await sequelize.transaction(async (transaction) => {
     await user.update({ role }, { transaction });
-    await recordAudit({ actorId, action: "user.role_changed", subjectType: "user", subjectId: userId, details: { from, to: role } }, transaction);
+    await recordAudit(
+      { actorId, action: "user.role_changed", subjectType: "user", subjectId: userId, details: { from, to: role } },
+      transaction,
+    );
   });
   await revokeUserSessions(userId);
 }
 
 export async function revokeSessionsByAdmin(actorId: number, userId: number): Promise<number> {
   const count = await revokeUserSessions(userId);
-  await recordAudit({ actorId, action: "user.sessions_revoked", subjectType: "user", subjectId: userId, details: { count } });
+  await recordAudit({
+    actorId,
+    action: "user.sessions_revoked",
+    subjectType: "user",
+    subjectId: userId,
+    details: { count },
+  });
   return count;
 }

@@ -117,7 +117,14 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
       family: library.get(layer.material)?.family ?? "unknown",
       materialName: materialName(library, layer.material),
       thickness_mm: layer.thickness_mm,
-      ...(layer.framing ? { framing: { fraction: layer.framing.fraction, family: library.get(layer.framing.material)?.family ?? "lumber" } } : {}),
+      ...(layer.framing
+        ? {
+            framing: {
+              fraction: layer.framing.fraction,
+              family: library.get(layer.framing.material)?.family ?? "lumber",
+            },
+          }
+        : {}),
     })),
     revision: { ...current, reviewedAt: revision.reviewedAt?.toISOString() ?? null },
     history: entries.reverse(),
@@ -127,7 +134,11 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
   };
   if (allowed) {
     view.full = {
-      layers: front.layers.map((layer) => ({ ...layer, materialName: materialName(library, layer.material), family: library.get(layer.material)?.family ?? "unknown" })),
+      layers: front.layers.map((layer) => ({
+        ...layer,
+        materialName: materialName(library, layer.material),
+        family: library.get(layer.material)?.family ?? "unknown",
+      })),
       bodyHtml: renderMarkdown(revision.bodyMd),
       references: front.references,
       attachments: await uploadsOf(revision.id),
@@ -141,7 +152,9 @@ export async function getDetailView(slug: string, viewer: Viewer | null): Promis
 }
 
 /** The published front matter (layers and metadata) of a detail, for the site check. */
-export async function getPublishedAssembly(slug: string): Promise<{ id: number; tier: "free" | "premium"; frontMatter: DetailFrontMatter } | null> {
+export async function getPublishedAssembly(
+  slug: string,
+): Promise<{ id: number; tier: "free" | "premium"; frontMatter: DetailFrontMatter } | null> {
   const detail = await Detail.scope("live").findOne({
     where: { slug },
     include: [{ model: DetailRevision, as: "publishedRevision", attributes: ["frontMatter"], required: true }],
@@ -156,7 +169,10 @@ async function relatedDetails(detail: Detail): Promise<{ slug: string; title: st
     where: {
       id: { [Op.ne]: detail.id },
       // Same kind of assembly, or (below grade) the same condition: a basement wall relates to basement slabs.
-      [Op.or]: detail.belowGrade === "none" ? [{ assembly: detail.assembly }] : [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade }],
+      [Op.or]:
+        detail.belowGrade === "none"
+          ? [{ assembly: detail.assembly }]
+          : [{ assembly: detail.assembly }, { belowGrade: detail.belowGrade }],
     },
     order: [["publishedAt", "DESC"]],
     limit: 4,

@@ -6,15 +6,31 @@ import type { DetailFrontMatter } from "~/content/detail-schema";
 // order of the content format, and optional keys that are absent stay absent.
 
 const KEY_ORDER: (keyof DetailFrontMatter)[] = [
-  "slug", "title", "summary", "assembly", "substrate", "below_grade", "strategy", "zones", "tier", "sets",
-  "revision", "revised", "change_note", "author", "reviewer", "references", "layers",
+  "slug",
+  "title",
+  "summary",
+  "assembly",
+  "substrate",
+  "below_grade",
+  "strategy",
+  "zones",
+  "tier",
+  "sets",
+  "revision",
+  "revised",
+  "change_note",
+  "author",
+  "reviewer",
+  "references",
+  "layers",
 ];
 
 export function exportDetailMarkdown(frontMatter: DetailFrontMatter, body: string): string {
   const ordered: Record<string, unknown> = {};
   for (const key of KEY_ORDER) if (frontMatter[key] !== undefined) ordered[key] = frontMatter[key];
   // Keys the format grows later are kept rather than silently dropped.
-  for (const [key, value] of Object.entries(frontMatter)) if (!(key in ordered) && value !== undefined) ordered[key] = value;
+  for (const [key, value] of Object.entries(frontMatter))
+    if (!(key in ordered) && value !== undefined) ordered[key] = value;
   const yaml = stringify(ordered, { lineWidth: 0 });
   const text = body.startsWith("\n") ? body : `\n${body}`;
   return `---\n${yaml}---${text.endsWith("\n") ? text : `${text}\n`}`;

@@ -16,10 +16,15 @@ function quoteTerm(term: string): string {
  * phrase) is required, each with its synonyms as alternatives. Returns "" when nothing searchable is left.
  */
 export function toBooleanQuery(text: string): string {
-  let rest = ` ${text.toLowerCase().replace(/[^\p{L}\p{N}\s-]+/gu, " ").replace(/\s+/g, " ")} `;
+  let rest = ` ${text
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}\s-]+/gu, " ")
+    .replace(/\s+/g, " ")} `;
   const groups: string[] = [];
   // Phrases first, longest first, so "vapor barrier" wins over "vapor".
-  const phrases = Object.keys(SEARCH_SYNONYMS).filter((key) => key.includes(" ")).sort((a, b) => b.length - a.length);
+  const phrases = Object.keys(SEARCH_SYNONYMS)
+    .filter((key) => key.includes(" "))
+    .sort((a, b) => b.length - a.length);
   for (const phrase of phrases) {
     if (rest.includes(` ${phrase} `)) {
       groups.push(`+(${[phrase, ...SEARCH_SYNONYMS[phrase]].map(quoteTerm).filter(Boolean).join(" ")})`);
@@ -28,7 +33,9 @@ export function toBooleanQuery(text: string): string {
   }
   for (const word of rest.trim().split(" ").filter(Boolean)) {
     const synonyms = SEARCH_SYNONYMS[word] ?? [];
-    const terms = [word, ...synonyms].filter((term) => term.length >= MIN_TOKEN).map((term) => term.replace(/^-+|-+$/g, ""));
+    const terms = [word, ...synonyms]
+      .filter((term) => term.length >= MIN_TOKEN)
+      .map((term) => term.replace(/^-+|-+$/g, ""));
     if (terms.length === 0) continue;
     const quoted = terms.map(quoteTerm).filter(Boolean);
     if (quoted.length) groups.push(quoted.length === 1 ? `+${quoted[0]}` : `+(${quoted.join(" ")})`);

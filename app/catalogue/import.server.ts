@@ -9,7 +9,9 @@ import { buildProjection, publishRevision } from "./publish.server";
 
 export class ImportRejected extends Error {
   constructor(readonly problems: readonly ContentProblem[]) {
-    super(`content import rejected: ${problems.length} problem${problems.length === 1 ? "" : "s"}; nothing was written`);
+    super(
+      `content import rejected: ${problems.length} problem${problems.length === 1 ? "" : "s"}; nothing was written`,
+    );
     this.name = "ImportRejected";
   }
 }
@@ -33,7 +35,13 @@ export interface ImportOptions {
 export async function importContent(root: string, options: ImportOptions = {}): Promise<ImportSummary> {
   const started = performance.now();
   const content = loadContent(root);
-  if (!content.materials) content.errors.push({ file: "materials/", line: 1, field: "", message: "the content folder has no materials/ directory" });
+  if (!content.materials)
+    content.errors.push({
+      file: "materials/",
+      line: 1,
+      field: "",
+      message: "the content folder has no materials/ directory",
+    });
   if (content.errors.length > 0) throw new ImportRejected(content.errors);
 
   const library = new Map<string, Material>(content.materials!.map((entry) => [entry.slug, entry.material]));
@@ -43,7 +51,12 @@ export async function importContent(root: string, options: ImportOptions = {}): 
     try {
       buildProjection(detail, detail.body, library);
     } catch (error) {
-      problems.push({ file: detail.file, line: 2, field: "layers", message: error instanceof Error ? error.message : String(error) });
+      problems.push({
+        file: detail.file,
+        line: 2,
+        field: "layers",
+        message: error instanceof Error ? error.message : String(error),
+      });
     }
   }
   if (problems.length > 0) throw new ImportRejected(problems);
@@ -62,7 +75,10 @@ export async function importContent(root: string, options: ImportOptions = {}): 
     for (const { slug, material } of content.materials!) {
       const existing = await MaterialRecord.findOne({ where: { slug }, transaction });
       if (!existing) {
-        await MaterialRecord.create({ slug, name: material.name, family: material.family, properties: material }, { transaction });
+        await MaterialRecord.create(
+          { slug, name: material.name, family: material.family, properties: material },
+          { transaction },
+        );
         summary.materials.created++;
       } else if (JSON.stringify(existing.properties) !== JSON.stringify(material)) {
         await existing.update({ name: material.name, family: material.family, properties: material }, { transaction });
@@ -75,8 +91,17 @@ export async function importContent(root: string, options: ImportOptions = {}): 
 
     for (const set of content.sets) {
       const values = { title: set.title, summary: set.summary, priceCents: set.price_cents, currency: set.currency };
-      const [record, created] = await DetailSet.findOrCreate({ where: { slug: set.slug }, defaults: { slug: set.slug, ...values }, transaction });
-      const changed = !created && (record.title !== values.title || record.summary !== values.summary || record.priceCents !== values.priceCents || record.currency !== values.currency);
+      const [record, created] = await DetailSet.findOrCreate({
+        where: { slug: set.slug },
+        defaults: { slug: set.slug, ...values },
+        transaction,
+      });
+      const changed =
+        !created &&
+        (record.title !== values.title ||
+          record.summary !== values.summary ||
+          record.priceCents !== values.priceCents ||
+          record.currency !== values.currency);
       if (changed) await record.update(values, { transaction });
       summary.sets[created ? "created" : changed ? "updated" : "unchanged"]++;
       tick(`set ${set.slug}`);
@@ -126,14 +151,32 @@ async function importDetail(
   let record = await Detail.findOne({ where: { slug: detail.slug }, transaction });
   let outcome: DetailOutcome;
   if (!record) {
-    record = await Detail.create({ slug: detail.slug, ...buildProjection(frontMatter, body, library), publishedRevisionId: null, publishedAt: null }, { transaction });
+    record = await Detail.create(
+      {
+        slug: detail.slug,
+        ...buildProjection(frontMatter, body, library),
+        publishedRevisionId: null,
+        publishedAt: null,
+      },
+      { transaction },
+    );
     outcome = { kind: "created" };
   } else {
-    const latest = await DetailRevision.findOne({ where: { detailId: record.id }, order: [["number", "DESC"]], transaction });
-    const current = record.publishedRevisionId ? await DetailRevision.findByPk(record.publishedRevisionId, { transaction }) : null;
+    const latest = await DetailRevision.findOne({
+      where: { detailId: record.id },
+      order: [["number", "DESC"]],
+      transaction,
+    });
+    const current = record.publishedRevisionId
+      ? await DetailRevision.findByPk(record.publishedRevisionId, { transaction })
+      : null;
     if (current && current.contentHash === hash) return { kind: "unchanged" };
     // The web desk has a newer (or equal) revision: the file must be re-exported or its revision raised.
-    if (latest && latest.number >= detail.revision) return { kind: "kept", reason: `database has revision ${latest.number}; raise \`revision\` above it to import this file` };
+    if (latest && latest.number >= detail.revision)
+      return {
+        kind: "kept",
+        reason: `database has revision ${latest.number}; raise \`revision\` above it to import this file`,
+      };
     outcome = { kind: "revised" };
   }
   const revision = await DetailRevision.create({ detailId: record.id, ...revisionValues }, { transaction });
@@ -142,6 +185,10 @@ async function importDetail(
 }
 
 async function staffByName(transaction: Transaction): Promise<Map<string, number>> {
-  const users = await User.findAll({ attributes: ["id", "displayName"], where: { role: ["editor", "reviewer", "admin"] }, transaction });
+  const users = await User.findAll({
+    attributes: ["id", "displayName"],
+    where: { role: ["editor", "reviewer", "admin"] },
+    transaction,
+  });
   return new Map(users.map((user) => [user.displayName, user.id]));
 }

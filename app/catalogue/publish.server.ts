@@ -30,7 +30,11 @@ export interface DetailProjection {
 }
 
 /** The `details` columns derived from one revision's front matter and body (throws on unknown materials). */
-export function buildProjection(front: DetailFrontMatter, body: string, library: ReadonlyMap<string, Material>): DetailProjection {
+export function buildProjection(
+  front: DetailFrontMatter,
+  body: string,
+  library: ReadonlyMap<string, Material>,
+): DetailProjection {
   const assembly = { kind: front.assembly, layers: front.layers };
   return {
     title: front.title,
@@ -43,7 +47,11 @@ export function buildProjection(front: DetailFrontMatter, body: string, library:
     interiorClass: interiorRetarderClass(assembly, library),
     tier: front.tier,
     rValueRsi: Math.round(assemblyRValue(assembly, library).rsi * 1000) / 1000,
-    layerStrip: front.layers.map((layer) => ({ role: layer.role, family: library.get(layer.material)?.family ?? "unknown", thickness_mm: layer.thickness_mm })),
+    layerStrip: front.layers.map((layer) => ({
+      role: layer.role,
+      family: library.get(layer.material)?.family ?? "unknown",
+      thickness_mm: layer.thickness_mm,
+    })),
     zonesLabel: front.zones.join(" "),
     zoneMask: zoneMask(front.zones),
     regimeMask: regimeMask(front.zones),
@@ -69,7 +77,11 @@ export interface Publication {
  * `superseded`, the revision becomes `published` (with the reviewer, when given), and the detail's
  * projection, zones and set members are rewritten from it. Every step is audit-logged.
  */
-export async function publishRevision(revisionId: number, reviewer: { id: number; displayName: string } | null, options: PublishOptions): Promise<Publication> {
+export async function publishRevision(
+  revisionId: number,
+  reviewer: { id: number; displayName: string } | null,
+  options: PublishOptions,
+): Promise<Publication> {
   const { transaction } = options;
   const at = options.at ?? new Date();
   const revision = await DetailRevision.findByPk(revisionId, { transaction, lock: transaction.LOCK.UPDATE });
@@ -85,7 +97,16 @@ export async function publishRevision(revisionId: number, reviewer: { id: number
     superseded = await DetailRevision.findByPk(detail.publishedRevisionId, { transaction });
     if (superseded && superseded.state === "published") {
       await superseded.update({ state: "superseded" }, { transaction });
-      await recordAudit({ actorId: reviewer?.id ?? null, action: "detail.superseded", subjectType: "detail", subjectId: detail.id, details: { slug: detail.slug, revision: superseded.number, by: revision.number } }, transaction);
+      await recordAudit(
+        {
+          actorId: reviewer?.id ?? null,
+          action: "detail.superseded",
+          subjectType: "detail",
+          subjectId: detail.id,
+          details: { slug: detail.slug, revision: superseded.number, by: revision.number },
+        },
+        transaction,
+      );
     }
   }
 
@@ -98,30 +119,64 @@ export async function publishRevision(revisionId: number, reviewer: { id: number
     },
     { transaction },
   );
-  await detail.update({ slug: front.slug, ...projection, publishedRevisionId: revision.id, publishedAt: at, withdrawnAt: null }, { transaction });
+  await detail.update(
+    { slug: front.slug, ...projection, publishedRevisionId: revision.id, publishedAt: at, withdrawnAt: null },
+    { transaction },
+  );
   await writeZonesAndSets(detail.id, front, transaction);
-  await recordAudit({ actorId: reviewer?.id ?? null, action: "detail.published", subjectType: "detail", subjectId: detail.id, details: { slug: detail.slug, revision: revision.number } }, transaction);
+  await recordAudit(
+    {
+      actorId: reviewer?.id ?? null,
+      action: "detail.published",
+      subjectType: "detail",
+      subjectId: detail.id,
+      details: { slug: detail.slug, revision: revision.number },
+    },
+    transaction,
+  );
   return { detail, revision, superseded };
 }
 
 /** Zone rows and set memberships follow the published front matter. */
 async function writeZonesAndSets(detailId: number, front: DetailFrontMatter, transaction: Transaction): Promise<void> {
   await DetailZone.destroy({ where: { detailId }, transaction });
-  await DetailZone.bulkCreate(front.zones.map((zone) => ({ detailId, zone, zoneNumber: zoneNumber(zone), regime: moistureRegime(zone) })), { transaction });
-  const sets = front.sets.length ? await DetailSet.findAll({ attributes: ["id", "slug"], where: { slug: { [Op.in]: front.sets } }, transaction }) : [];
+  await DetailZone.bulkCreate(
+    front.zones.map((zone) => ({ detailId, zone, zoneNumber: zoneNumber(zone), regime: moistureRegime(zone) })),
+    { transaction },
+  );
+  const sets = front.sets.length
+    ? await DetailSet.findAll({ attributes: ["id", "slug"], where: { slug: { [Op.in]: front.sets } }, transaction })
+    : [];
   const missing = front.sets.filter((slug) => !sets.some((set) => set.slug === slug));
   if (missing.length) throw new Error(`unknown set${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`);
   await DetailSetMember.destroy({ where: { detailId }, transaction });
-  await DetailSetMember.bulkCreate(sets.map((set) => ({ detailId, setId: set.id })), { transaction });
+  await DetailSetMember.bulkCreate(
+    sets.map((set) => ({ detailId, setId: set.id })),
+    { transaction },
+  );
 }
 
 /** Takes a published detail out of the catalogue; its history stays. */
-export async function withdrawDetail(detailId: number, actor: { id: number }, reason: string, transaction: Transaction): Promise<Detail> {
+export async function withdrawDetail(
+  detailId: number,
+  actor: { id: number },
+  reason: string,
+  transaction: Transaction,
+): Promise<Detail> {
   const detail = await Detail.findByPk(detailId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!detail?.isLive()) throw new Error("only a published detail can be withdrawn");
   const revision = await DetailRevision.findByPk(detail.publishedRevisionId, { transaction });
   if (revision) await revision.update({ state: "withdrawn" }, { transaction });
   await detail.update({ withdrawnAt: new Date() }, { transaction });
-  await recordAudit({ actorId: actor.id, action: "detail.withdrawn", subjectType: "detail", subjectId: detail.id, details: { slug: detail.slug, revision: revision?.number ?? null, reason } }, transaction);
+  await recordAudit(
+    {
+      actorId: actor.id,
+      action: "detail.withdrawn",
+      subjectType: "detail",
+      subjectId: detail.id,
+      details: { slug: detail.slug, revision: revision?.number ?? null, reason },
+    },
+    transaction,
+  );
   return detail;
 }

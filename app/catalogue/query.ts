@@ -1,4 +1,10 @@
-import type { ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, INSULATION_STRATEGIES, SUBSTRATES, TIERS } from "~/content/vocabularies";
+import type {
+  ASSEMBLY_KINDS,
+  BELOW_GRADE_CONDITIONS,
+  INSULATION_STRATEGIES,
+  SUBSTRATES,
+  TIERS,
+} from "~/content/vocabularies";
 import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
 
 // The catalogue's URL is its state: one parser for the page, the API and the client, so a shared
@@ -22,13 +28,28 @@ export interface CatalogueQuery {
   sort?: Sort;
   page: number;
 }
-export const FILTER_KEYS = ["zone", "regime", "assembly", "substrate", "belowGrade", "strategy", "interiorClass", "tier"] as const;
+export const FILTER_KEYS = [
+  "zone",
+  "regime",
+  "assembly",
+  "substrate",
+  "belowGrade",
+  "strategy",
+  "interiorClass",
+  "tier",
+] as const;
 export type FilterKey = (typeof FILTER_KEYS)[number];
 
 // URL parameter names (kebab for the two-word keys, so links read naturally).
 export const PARAM: Record<FilterKey, string> = {
-  zone: "zone", regime: "regime", assembly: "assembly", substrate: "substrate",
-  belowGrade: "below-grade", strategy: "strategy", interiorClass: "interior-class", tier: "tier",
+  zone: "zone",
+  regime: "regime",
+  assembly: "assembly",
+  substrate: "substrate",
+  belowGrade: "below-grade",
+  strategy: "strategy",
+  interiorClass: "interior-class",
+  tier: "tier",
 };
 
 export function effectiveSort(query: CatalogueQuery): Sort {
@@ -46,7 +67,6 @@ export function toSearchParams(query: Partial<CatalogueQuery>): URLSearchParams 
   if (query.page && query.page > 1) params.set("page", String(query.page));
   return params;
 }
-
 
 export function paramName(key: FilterKey): string {
   return PARAM[key];

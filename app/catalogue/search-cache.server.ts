@@ -42,6 +42,9 @@ export class VersionedCache<T> {
 }
 
 export async function catalogueVersion(): Promise<string> {
-  const [row] = await sequelize.query<{ version: Date | string | null }>("SELECT MAX(updated_at) AS version FROM details", { type: QueryTypes.SELECT });
+  const [row] = await sequelize.query<{ version: Date | string | null }>(
+    "SELECT MAX(updated_at) AS version FROM details",
+    { type: QueryTypes.SELECT },
+  );
   return row?.version ? new Date(row.version).toISOString() : "empty";
 }

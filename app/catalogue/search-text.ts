@@ -29,8 +29,13 @@ const RATIONALE_CHARS = 600;
 
 /** Everything a builder might type to find a detail besides its title and summary. */
 export function buildSearchText(detail: SearchableDetail, materialName: (slug: string) => string): string {
-  const facets = [detail.assembly, detail.substrate, detail.below_grade, detail.strategy].map((value) => labelFor(value));
+  const facets = [detail.assembly, detail.substrate, detail.below_grade, detail.strategy].map((value) =>
+    labelFor(value),
+  );
   const layers = detail.layers.map((layer) => `${materialName(layer.material)} ${layer.role.replaceAll("-", " ")}`);
-  const rationale = plainText(bodySection(detail.body, BODY_SECTION_HEADINGS["why-it-works"]) || detail.body).slice(0, RATIONALE_CHARS);
+  const rationale = plainText(bodySection(detail.body, BODY_SECTION_HEADINGS["why-it-works"]) || detail.body).slice(
+    0,
+    RATIONALE_CHARS,
+  );
   return [...facets, ...layers, ...detail.references, rationale].join(" · ");
 }

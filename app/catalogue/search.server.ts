@@ -66,7 +66,8 @@ function buildFilters(query: CatalogueQuery): Filter[] {
   return filters;
 }
 
-const regimeMaskOf = (values: readonly MoistureRegime[]) => values.reduce((mask, regime) => mask | regimeBit(regime), 0);
+const regimeMaskOf = (values: readonly MoistureRegime[]) =>
+  values.reduce((mask, regime) => mask | regimeBit(regime), 0);
 
 const LIVE = liveDetailSql("d");
 const MATCH = "MATCH (d.title, d.summary, d.search_text) AGAINST (:booleanQuery IN BOOLEAN MODE)";
@@ -119,14 +120,24 @@ function withValues<T extends FacetCombination>(row: T): T {
 /** A predicate for "this combination passes every active filter of the query". */
 export function acceptsAll(query: CatalogueQuery): (row: FacetCombination) => boolean {
   const active = FILTER_KEYS.filter((key) => query[key].length > 0);
-  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<Record<FilterKey, Set<string>>>;
+  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<
+    Record<FilterKey, Set<string>>
+  >;
   return (row) => active.every((key) => valuesOf(row, key).some((value) => selected[key]!.has(value)));
 }
 
-export function countFacets(combinations: FacetCombination[], query: CatalogueQuery): { total: number; facets: Record<FilterKey, FacetCount[]> } {
+export function countFacets(
+  combinations: FacetCombination[],
+  query: CatalogueQuery,
+): { total: number; facets: Record<FilterKey, FacetCount[]> } {
   const active = FILTER_KEYS.filter((key) => query[key].length > 0);
-  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<Record<FilterKey, Set<string>>>;
-  const tallies = Object.fromEntries(FILTER_KEYS.map((key) => [key, new Map<string, number>()])) as Record<FilterKey, Map<string, number>>;
+  const selected = Object.fromEntries(active.map((key) => [key, new Set<string>(query[key])])) as Partial<
+    Record<FilterKey, Set<string>>
+  >;
+  const tallies = Object.fromEntries(FILTER_KEYS.map((key) => [key, new Map<string, number>()])) as Record<
+    FilterKey,
+    Map<string, number>
+  >;
   let total = 0;
   for (const row of combinations) {
     const n = Number(row.n);
@@ -142,7 +153,9 @@ export function countFacets(combinations: FacetCombination[], query: CatalogueQu
   const facets = Object.fromEntries(
     FILTER_KEYS.map((key) => [
       key,
-      [...tallies[key]].map(([value, count]) => ({ value, count })).sort((a, b) => a.value.localeCompare(b.value, "en", { numeric: true })),
+      [...tallies[key]]
+        .map(([value, count]) => ({ value, count }))
+        .sort((a, b) => a.value.localeCompare(b.value, "en", { numeric: true })),
     ]),
   ) as Record<FilterKey, FacetCount[]>;
   return { total, facets };
@@ -197,7 +210,8 @@ async function searchUncached(query: CatalogueQuery, version: string): Promise<O
 
 const CARD_COLUMNS = `d.id, d.slug, d.title, d.summary, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.tier,
   d.r_value_rsi, d.zones_label, d.layer_strip, d.published_at`;
-const GROUPING = "d.tier, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.zone_mask, d.regime_mask";
+const GROUPING =
+  "d.tier, d.assembly, d.substrate, d.below_grade, d.strategy, d.interior_class, d.zone_mask, d.regime_mask";
 
 function replacementsFor(query: CatalogueQuery): Record<string, unknown> {
   const replacements: Record<string, unknown> = {};
@@ -205,7 +219,13 @@ function replacementsFor(query: CatalogueQuery): Record<string, unknown> {
   return replacements;
 }
 
-function page(query: CatalogueQuery, total: number, sort: Sort, cards: DetailCard[], facets: Record<FilterKey, FacetCount[]>): Omit<CatalogueResult, "ms"> {
+function page(
+  query: CatalogueQuery,
+  total: number,
+  sort: Sort,
+  cards: DetailCard[],
+  facets: Record<FilterKey, FacetCount[]>,
+): Omit<CatalogueResult, "ms"> {
   return { total, page: query.page, pages: Math.max(1, Math.ceil(total / PER_PAGE)), sort, cards, facets };
 }
 
@@ -266,7 +286,9 @@ interface TextMatchSet {
 async function matchesFor(booleanQuery: string, version: string): Promise<TextMatchSet> {
   const cached = textMatches.get(booleanQuery, version);
   if (cached) return cached;
-  const rows = await sequelize.query<Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }>(
+  const rows = await sequelize.query<
+    Omit<TextMatch, "n" | "published_ms" | "rsi"> & { published_at: Date | null; r_value_rsi: string | null }
+  >(
     `SELECT d.id, ${MATCH} AS score, d.title, d.published_at, d.r_value_rsi, ${GROUPING} FROM details d WHERE ${LIVE} AND ${MATCH}`,
     { type: QueryTypes.SELECT, replacements: { booleanQuery } },
   );
@@ -291,7 +313,11 @@ const COMPARE: Record<Sort, (a: TextMatch, b: TextMatch) => number> = {
   "r-value": (a, b) => b.rsi - a.rsi || a.id - b.id,
 };
 
-async function searchWithText(query: CatalogueQuery, booleanQuery: string, version: string): Promise<Omit<CatalogueResult, "ms">> {
+async function searchWithText(
+  query: CatalogueQuery,
+  booleanQuery: string,
+  version: string,
+): Promise<Omit<CatalogueResult, "ms">> {
   const set = await matchesFor(booleanQuery, version);
   const { total, facets } = countFacets(set.matches, query);
   const sort = effectiveSort(query);
@@ -311,7 +337,13 @@ async function searchWithText(query: CatalogueQuery, booleanQuery: string, versi
     replacements: { ids: pageIds },
   });
   const byId = new Map(rows.map((row) => [row.id, row]));
-  return page(query, total, sort, pageIds.flatMap((id) => (byId.has(id) ? [toCard(byId.get(id)!)] : [])), facets);
+  return page(
+    query,
+    total,
+    sort,
+    pageIds.flatMap((id) => (byId.has(id) ? [toCard(byId.get(id)!)] : [])),
+    facets,
+  );
 }
 
 function toCard(row: CardRow): DetailCard {

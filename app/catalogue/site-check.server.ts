@@ -17,15 +17,24 @@ export type SiteFormInput = FormData | URLSearchParams | unknown;
 
 /** "yearMonths", 3, "t" → "yearMonths[3].t": the field names conform gives the panel's inputs. */
 function fieldName(path: readonly PropertyKey[]): string {
-  return path.reduce<string>((name, segment) => (typeof segment === "number" ? `${name}[${segment}]` : name ? `${name}.${String(segment)}` : String(segment)), "") || "form";
+  return (
+    path.reduce<string>(
+      (name, segment) =>
+        typeof segment === "number" ? `${name}[${segment}]` : name ? `${name}.${String(segment)}` : String(segment),
+      "",
+    ) || "form"
+  );
 }
 
-function parseSiteForm(input: SiteFormInput): { ok: true; form: SiteForm } | { ok: false; fieldErrors: Record<string, string[]> } {
+function parseSiteForm(
+  input: SiteFormInput,
+): { ok: true; form: SiteForm } | { ok: false; fieldErrors: Record<string, string[]> } {
   if (input instanceof FormData || input instanceof URLSearchParams) {
     const submission = parseWithZod(input, { schema: siteFormSchema });
     if (submission.status === "success") return { ok: true, form: submission.value };
     const fieldErrors: Record<string, string[]> = {};
-    for (const [name, messages] of Object.entries(submission.error ?? {})) if (messages?.length) fieldErrors[name || "form"] = messages;
+    for (const [name, messages] of Object.entries(submission.error ?? {}))
+      if (messages?.length) fieldErrors[name || "form"] = messages;
     return { ok: false, fieldErrors };
   }
   const parsed = siteFormSchema.safeParse(input);
@@ -46,17 +55,29 @@ export function resultUnits(result: SiteCheckResult, viewerUnits: UnitSystem): U
 }
 
 /** Validates a site form and runs the engine for one assembly; input problems come back per field. */
-export async function checkAssemblyForSite(front: Pick<DetailFrontMatter, "assembly" | "layers">, input: SiteFormInput): Promise<SiteCheckOutcome> {
+export async function checkAssemblyForSite(
+  front: Pick<DetailFrontMatter, "assembly" | "layers">,
+  input: SiteFormInput,
+): Promise<SiteCheckOutcome> {
   const parsed = parseSiteForm(input);
   if (!parsed.ok) return parsed;
   const library = await materialLibrary();
   try {
-    const result = runSiteCheck({ kind: front.assembly, layers: front.layers }, siteInputFromForm(parsed.form), library);
+    const result = runSiteCheck(
+      { kind: front.assembly, layers: front.layers },
+      siteInputFromForm(parsed.form),
+      library,
+    );
     return { ok: true, result, units: resultUnits(result, parsed.form.units) };
   } catch (error) {
     if (error instanceof SiteCheckInputError) {
       const message = error.message.replace(`${error.field}: `, "");
-      return { ok: false, fieldErrors: { [formFieldOf(error.field, parsed.form.country)]: [message.charAt(0).toUpperCase() + message.slice(1)] } };
+      return {
+        ok: false,
+        fieldErrors: {
+          [formFieldOf(error.field, parsed.form.country)]: [message.charAt(0).toUpperCase() + message.slice(1)],
+        },
+      };
     }
     throw error;
   }

@@ -14,12 +14,16 @@ import { DEFAULT_UNIT_SYSTEM, UNIT_SYSTEMS, type UnitSystem } from "~/vocabulary
 const optionalNumber = (label: string) =>
   z.preprocess(
     (value) => (value === "" || value === null || value === undefined ? undefined : Number(value)),
-    z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a number`).optional(),
+    z
+      .number({ error: `${label} must be a number` })
+      .refine(Number.isFinite, `${label} must be a number`)
+      .optional(),
   );
 
 const isNbcZone = (value: string): value is NbcZone => (NBC_ZONES as readonly string[]).includes(value);
 
-const blankable = <T extends readonly [string, ...string[]]>(values: T) => z.union([z.enum(values), z.literal("")]).optional();
+const blankable = <T extends readonly [string, ...string[]]>(values: T) =>
+  z.union([z.enum(values), z.literal("")]).optional();
 
 export const SITE_COUNTRIES = ["US", "CA"] as const;
 /** How the site year for the seasonal balance is given; the first is the default. */
@@ -36,14 +40,45 @@ export const siteFormSchema = z
     units: z.enum(UNIT_SYSTEMS).default(DEFAULT_UNIT_SYSTEM),
     country: z.enum(SITE_COUNTRIES).default("US"),
     zone: blankable(CLIMATE_ZONE_IDS),
-    hdd: optionalNumber("Heating degree-days").pipe(z.number().min(0, "Heating degree-days cannot be negative").max(20000, "Heating degree-days above 20,000 are outside every climate zone").optional()),
-    cdd: optionalNumber("Cooling degree-days").pipe(z.number().min(0, "Cooling degree-days cannot be negative").max(20000, "Cooling degree-days look too high").optional()),
+    hdd: optionalNumber("Heating degree-days").pipe(
+      z
+        .number()
+        .min(0, "Heating degree-days cannot be negative")
+        .max(20000, "Heating degree-days above 20,000 are outside every climate zone")
+        .optional(),
+    ),
+    cdd: optionalNumber("Cooling degree-days").pipe(
+      z
+        .number()
+        .min(0, "Cooling degree-days cannot be negative")
+        .max(20000, "Cooling degree-days look too high")
+        .optional(),
+    ),
     moisture: blankable(MOISTURE_REGIMES),
     province: blankable(PROVINCES),
-    nbcZone: z.union([z.custom<NbcZone>((value) => typeof value === "string" && isNbcZone(value), { message: `The NBC zone is one of ${NBC_ZONES.join(", ")}` }), z.literal("")]).optional(),
-    hdd18: optionalNumber("Heating degree-days below 18 °C").pipe(z.number().min(0, "Heating degree-days cannot be negative").max(20000, "Heating degree-days above 20,000 are outside every NBC zone").optional()),
+    nbcZone: z
+      .union([
+        z.custom<NbcZone>((value) => typeof value === "string" && isNbcZone(value), {
+          message: `The NBC zone is one of ${NBC_ZONES.join(", ")}`,
+        }),
+        z.literal(""),
+      ])
+      .optional(),
+    hdd18: optionalNumber("Heating degree-days below 18 °C").pipe(
+      z
+        .number()
+        .min(0, "Heating degree-days cannot be negative")
+        .max(20000, "Heating degree-days above 20,000 are outside every NBC zone")
+        .optional(),
+    ),
     indoorMethod: blankable(INDOOR_METHODS),
-    indoorRh: optionalNumber("Indoor relative humidity").pipe(z.number().min(5, "Indoor relative humidity below 5 % is not a realistic design value").max(95, "Indoor relative humidity above 95 % is not a design condition").optional()),
+    indoorRh: optionalNumber("Indoor relative humidity").pipe(
+      z
+        .number()
+        .min(5, "Indoor relative humidity below 5 % is not a realistic design value")
+        .max(95, "Indoor relative humidity above 95 % is not a design condition")
+        .optional(),
+    ),
     indoorT: optionalNumber("Indoor temperature").optional(),
     winterT: optionalNumber("Winter design temperature").optional(),
     yearSource: z.enum(YEAR_SOURCES).default("generated"),
@@ -55,13 +90,19 @@ export const siteFormSchema = z
   .superRefine((form, ctx) => {
     if (form.country === "CA") {
       if (!form.province && !form.nbcZone && form.hdd18 === undefined) {
-        ctx.addIssue({ code: "custom", path: ["province"], message: "Choose a province or territory, an NBC zone, or enter heating degree-days below 18 °C" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["province"],
+          message: "Choose a province or territory, an NBC zone, or enter heating degree-days below 18 °C",
+        });
       }
     } else {
       const hasZone = Boolean(form.zone);
       const hasDegreeDays = form.hdd !== undefined;
-      if (!hasZone && !hasDegreeDays) ctx.addIssue({ code: "custom", path: ["zone"], message: "Choose a climate zone or enter heating degree-days" });
-      if (hasDegreeDays && form.cdd === undefined) ctx.addIssue({ code: "custom", path: ["cdd"], message: "Enter cooling degree-days too (0 if none)" });
+      if (!hasZone && !hasDegreeDays)
+        ctx.addIssue({ code: "custom", path: ["zone"], message: "Choose a climate zone or enter heating degree-days" });
+      if (hasDegreeDays && form.cdd === undefined)
+        ctx.addIssue({ code: "custom", path: ["cdd"], message: "Enter cooling degree-days too (0 if none)" });
     }
     if (form.yearSource === "typed") typedYearIssues(form, ctx);
     if (form.yearSource === "csv") {
@@ -94,10 +135,30 @@ function typedYearIssues(form: SiteForm, ctx: z.RefinementCtx): void {
   const unit = ip ? "°F" : "°C";
   for (let i = 0; i < 12; i++) {
     const row = rows[i] ?? { t: undefined, rh: undefined };
-    if (row.t === undefined) ctx.addIssue({ code: "custom", path: ["yearMonths", i, "t"], message: `Enter the mean temperature of month ${i + 1}` });
-    else if (row.t < lo || row.t > hi) ctx.addIssue({ code: "custom", path: ["yearMonths", i, "t"], message: `Month ${i + 1}: a mean temperature from ${lo} to ${hi} ${unit}` });
-    if (row.rh === undefined) ctx.addIssue({ code: "custom", path: ["yearMonths", i, "rh"], message: `Enter the mean relative humidity of month ${i + 1}` });
-    else if (row.rh <= 0 || row.rh > 100) ctx.addIssue({ code: "custom", path: ["yearMonths", i, "rh"], message: `Month ${i + 1}: relative humidity above 0 and at most 100 %` });
+    if (row.t === undefined)
+      ctx.addIssue({
+        code: "custom",
+        path: ["yearMonths", i, "t"],
+        message: `Enter the mean temperature of month ${i + 1}`,
+      });
+    else if (row.t < lo || row.t > hi)
+      ctx.addIssue({
+        code: "custom",
+        path: ["yearMonths", i, "t"],
+        message: `Month ${i + 1}: a mean temperature from ${lo} to ${hi} ${unit}`,
+      });
+    if (row.rh === undefined)
+      ctx.addIssue({
+        code: "custom",
+        path: ["yearMonths", i, "rh"],
+        message: `Enter the mean relative humidity of month ${i + 1}`,
+      });
+    else if (row.rh <= 0 || row.rh > 100)
+      ctx.addIssue({
+        code: "custom",
+        path: ["yearMonths", i, "rh"],
+        message: `Month ${i + 1}: relative humidity above 0 and at most 100 %`,
+      });
   }
 }
 
@@ -122,7 +183,9 @@ export function siteInputFromForm(form: SiteForm): SiteInput {
   if (form.winterT !== undefined) site.winter = { t_c: temperature(form.winterT) };
   if (form.yearSource === "typed" && form.yearMonths) {
     const monthIp = siteTemperatureUnits(form) === "ip";
-    site.year = { months: form.yearMonths.map((row) => ({ t_c: monthIp ? fToC(row.t ?? NaN) : (row.t ?? NaN), rh: row.rh ?? NaN })) };
+    site.year = {
+      months: form.yearMonths.map((row) => ({ t_c: monthIp ? fToC(row.t ?? NaN) : (row.t ?? NaN), rh: row.rh ?? NaN })),
+    };
   }
   if (form.yearSource === "csv") site.year = { csv: form.yearCsv ?? "" };
   return site;
@@ -133,8 +196,16 @@ export function formFieldOf(enginePath: string, country: SiteForm["country"] = "
   const month = /^year\.months\[(\d+)\]\.(t_c|rh)$/.exec(enginePath);
   if (month) return `yearMonths[${month[1]}].${month[2] === "t_c" ? "t" : "rh"}`;
   const direct: Record<string, string> = {
-    "year.csv": "yearCsv", "year.months": "yearMonths", "indoor.method": "indoorMethod", "indoor.rh": "indoorRh", "indoor.t_c": "indoorT",
-    "winter.t_c": "winterT", hdd65: "hdd", cdd50: "cdd", cdd10: "cdd", hdd18: country === "CA" ? "hdd18" : "hdd",
+    "year.csv": "yearCsv",
+    "year.months": "yearMonths",
+    "indoor.method": "indoorMethod",
+    "indoor.rh": "indoorRh",
+    "indoor.t_c": "indoorT",
+    "winter.t_c": "winterT",
+    hdd65: "hdd",
+    cdd50: "cdd",
+    cdd10: "cdd",
+    hdd18: country === "CA" ? "hdd18" : "hdd",
   };
   return direct[enginePath] ?? enginePath;
 }

@@ -13,10 +13,17 @@ export async function suggestionCorpus(): Promise<Suggestion[]> {
         ORDER BY d.published_at DESC LIMIT ${TITLE_LIMIT}`,
       { type: QueryTypes.SELECT },
     ),
-    sequelize.query<{ name: string; family: string }>("SELECT name, family FROM materials ORDER BY name", { type: QueryTypes.SELECT }),
+    sequelize.query<{ name: string; family: string }>("SELECT name, family FROM materials ORDER BY name", {
+      type: QueryTypes.SELECT,
+    }),
   ]);
   return [
-    ...details.map((d) => ({ kind: "detail" as const, text: d.title, hint: labelFor(d.assembly), href: `/details/${d.slug}` })),
+    ...details.map((d) => ({
+      kind: "detail" as const,
+      text: d.title,
+      hint: labelFor(d.assembly),
+      href: `/details/${d.slug}`,
+    })),
     ...materials.map((m) => ({ kind: "material" as const, text: m.name, hint: "material" })),
     ...Object.keys(SEARCH_SYNONYMS).map((term) => ({ kind: "term" as const, text: term, hint: "trade term" })),
   ];

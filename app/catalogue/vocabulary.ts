@@ -95,7 +95,7 @@ export const SEARCH_SYNONYMS: Record<string, string[]> = {
   spf: ["spray foam"],
   housewrap: ["water-resistive barrier", "wrb"],
   wrb: ["water-resistive barrier", "housewrap"],
-  "ci": ["continuous insulation", "exterior insulation"],
+  ci: ["continuous insulation", "exterior insulation"],
   "continuous insulation": ["exterior insulation"],
   rainscreen: ["drainage gap", "vented air space", "furring"],
   "rim joist": ["band joist", "rim"],

@@ -1,4 +1,10 @@
-import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES, moistureRegime, type ClimateZoneId, type MoistureRegime } from "~/vocabulary/climate-zones";
+import {
+  CLIMATE_ZONE_IDS,
+  MOISTURE_REGIMES,
+  moistureRegime,
+  type ClimateZoneId,
+  type MoistureRegime,
+} from "~/vocabulary/climate-zones";
 
 // Bit i stands for CLIMATE_ZONE_IDS[i]; regimes A, B, C are bits 0, 1, 2 (MOISTURE_REGIMES order).
 // The facet-index migration backfilled with the same order, so the vocabulary's lists only grow at the end.

@@ -8,7 +8,6 @@ const nav = [
   { to: "/pricing", label: "Pricing" },
 ];
 
-
 export function AppShell({ children }: { children: React.ReactNode }) {
   return (
     <div className="flex min-h-screen flex-col">

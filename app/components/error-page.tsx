@@ -12,7 +12,11 @@ function describe(error: unknown): { status: number; title: string; message: str
     };
     return { status: error.status, title: titles[error.status] ?? "Something went wrong", message };
   }
-  return { status: 500, title: "Something went wrong on our side", message: "The error has been logged. Try again in a moment." };
+  return {
+    status: 500,
+    title: "Something went wrong on our side",
+    message: "The error has been logged. Try again in a moment.",
+  };
 }
 
 /** The one error view every route's boundary renders. */

@@ -20,11 +20,15 @@ export function FacetRail({ query, facets }: { query: CatalogueQuery; facets: Re
         if (values.length === 0) return null;
         return (
           <fieldset key={key}>
-            <legend className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-soft">{FACET_LABELS[key]}</legend>
+            <legend className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-soft">
+              {FACET_LABELS[key]}
+            </legend>
             <ul className={key === "zone" ? "grid grid-cols-3 gap-x-2" : "space-y-0.5"}>
               {values.map(({ value, count }) => (
                 <li key={value}>
-                  <label className={`flex cursor-pointer items-center gap-1.5 text-sm ${count === 0 && !selected.has(value) ? "text-graphite-soft/60" : ""}`}>
+                  <label
+                    className={`flex cursor-pointer items-center gap-1.5 text-sm ${count === 0 && !selected.has(value) ? "text-graphite-soft/60" : ""}`}
+                  >
                     <input
                       type="checkbox"
                       name={paramName(key)}
@@ -33,7 +37,9 @@ export function FacetRail({ query, facets }: { query: CatalogueQuery; facets: Re
                       className="accent-ochre"
                     />
                     <span className="flex-1">{key === "zone" ? value : labelFor(value, key)}</span>
-                    <span className="tabular-nums text-xs text-graphite-soft" data-facet-count={`${key}:${value}`}>{count}</span>
+                    <span className="tabular-nums text-xs text-graphite-soft" data-facet-count={`${key}:${value}`}>
+                      {count}
+                    </span>
                   </label>
                 </li>
               ))}

@@ -14,7 +14,15 @@ interface Row {
 const ROLE_LABEL = (role: string) => role.replaceAll("-", " ");
 
 /** Layers exterior → interior; R and permeance columns come from the same site-check result the chart uses. */
-export function LayerTable({ layers, result, units }: { layers: Row[]; result: SiteCheckResult | null; units: UnitSystem }) {
+export function LayerTable({
+  layers,
+  result,
+  units,
+}: {
+  layers: Row[];
+  result: SiteCheckResult | null;
+  units: UnitSystem;
+}) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm" data-testid="layer-table">
@@ -40,14 +48,24 @@ export function LayerTable({ layers, result, units }: { layers: Row[]; result: S
                 <td className="py-1.5 pr-2 capitalize">{ROLE_LABEL(layer.role)}</td>
                 <td className="py-1.5 pr-2">
                   {layer.materialName}
-                  {layer.framing ? <span className="block text-xs text-graphite-soft">framed, {Math.round(layer.framing.fraction * 100)} % framing</span> : null}
-                  {layer.joints ? <span className="block text-xs text-graphite-soft">joints {layer.joints}</span> : null}
+                  {layer.framing ? (
+                    <span className="block text-xs text-graphite-soft">
+                      framed, {Math.round(layer.framing.fraction * 100)} % framing
+                    </span>
+                  ) : null}
+                  {layer.joints ? (
+                    <span className="block text-xs text-graphite-soft">joints {layer.joints}</span>
+                  ) : null}
                   {layer.note ? <span className="block text-xs text-graphite-soft">{layer.note}</span> : null}
                 </td>
                 <td className="py-1.5 pr-2 text-right tabular-nums">{formatThickness(layer.thickness_mm, units)}</td>
                 <td className="py-1.5 pr-2 text-right tabular-nums">{thermal ? formatR(thermal.rsi, units) : "—"}</td>
-                <td className="py-1.5 pr-2 text-right tabular-nums">{vapour ? formatPermeance(vapour.perm_ng, units) : "—"}</td>
-                <td className="py-1.5">{vapour ? (vapour.class === "permeable" ? "open" : labelFor(vapour.class)) : "—"}</td>
+                <td className="py-1.5 pr-2 text-right tabular-nums">
+                  {vapour ? formatPermeance(vapour.perm_ng, units) : "—"}
+                </td>
+                <td className="py-1.5">
+                  {vapour ? (vapour.class === "permeable" ? "open" : labelFor(vapour.class)) : "—"}
+                </td>
               </tr>
             );
           })}
@@ -55,8 +73,12 @@ export function LayerTable({ layers, result, units }: { layers: Row[]; result: S
         {result ? (
           <tfoot>
             <tr className="text-sm">
-              <td colSpan={4} className="py-1.5 pr-2 text-right text-graphite-soft">With air films ({result.thermal.films.map((f) => f.label).join(", ")})</td>
-              <td className="py-1.5 pr-2 text-right font-semibold tabular-nums">{formatR(result.thermal.rsi, units)}</td>
+              <td colSpan={4} className="py-1.5 pr-2 text-right text-graphite-soft">
+                With air films ({result.thermal.films.map((f) => f.label).join(", ")})
+              </td>
+              <td className="py-1.5 pr-2 text-right font-semibold tabular-nums">
+                {formatR(result.thermal.rsi, units)}
+              </td>
               <td colSpan={2} />
             </tr>
           </tfoot>

@@ -23,7 +23,17 @@ export function profileChartTitle(profile: ProfileCase): string {
   return `${caseName(profile)} profile: temperature by thermal resistance, vapour pressure by vapour resistance`;
 }
 
-function ChartSvg({ chart, label, title, className }: { chart: ProfileGeometry; label: string; title: string; className: string }): ReactElement {
+function ChartSvg({
+  chart,
+  label,
+  title,
+  className,
+}: {
+  chart: ProfileGeometry;
+  label: string;
+  title: string;
+  className: string;
+}): ReactElement {
   return (
     <svg
       viewBox={`0 0 ${chart.width} ${chart.height}`}
@@ -55,8 +65,18 @@ export function ProfileChart({ profile, units, className }: ProfileChartProps): 
   return (
     <figure className={className} data-testid={`profile-chart-${profile.name}`}>
       <figcaption className="mb-1 text-sm font-semibold">{`${caseName(profile)} profile`}</figcaption>
-      <ChartSvg chart={profileGeometry(profile, { units, width: PROFILE_CHART_WIDTHS.narrow })} label={label} title={title} className="block sm:hidden" />
-      <ChartSvg chart={profileGeometry(profile, { units, width: PROFILE_CHART_WIDTHS.wide })} label={label} title={title} className="hidden sm:block" />
+      <ChartSvg
+        chart={profileGeometry(profile, { units, width: PROFILE_CHART_WIDTHS.narrow })}
+        label={label}
+        title={title}
+        className="block sm:hidden"
+      />
+      <ChartSvg
+        chart={profileGeometry(profile, { units, width: PROFILE_CHART_WIDTHS.wide })}
+        label={label}
+        title={title}
+        className="hidden sm:block"
+      />
     </figure>
   );
 }

@@ -49,7 +49,9 @@ export function SearchBox({ defaultValue, name = "q" }: { defaultValue: string; 
 
   return (
     <div className="relative">
-      <label htmlFor={`${listId}-input`} className="sr-only">Search details</label>
+      <label htmlFor={`${listId}-input`} className="sr-only">
+        Search details
+      </label>
       <input
         ref={inputRef}
         id={`${listId}-input`}
@@ -91,8 +93,13 @@ export function SearchBox({ defaultValue, name = "q" }: { defaultValue: string; 
       />
       {open && matches.length > 0 ? (
         // The WAI-ARIA combobox pattern: focus stays in the input, aria-activedescendant points at the option.
-        // biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: a listbox of options is the pattern's own markup
-        <ul id={listId} role="listbox" className="absolute z-20 mt-1 w-full overflow-hidden rounded border border-rule bg-sheet shadow-lg" data-testid="suggestions">
+        <ul
+          id={listId}
+          // biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: a listbox of options is the pattern's own markup
+          role="listbox"
+          className="absolute z-20 mt-1 w-full overflow-hidden rounded border border-rule bg-sheet shadow-lg"
+          data-testid="suggestions"
+        >
           {matches.map((suggestion, i) => (
             // biome-ignore lint/a11y/useFocusableInteractive: options are reached by aria-activedescendant, never focused
             <li

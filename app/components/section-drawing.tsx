@@ -17,20 +17,88 @@ export function ShapeElements({ shapes }: { shapes: readonly Shape[] }): ReactEl
       {shapes.map((s, i) => {
         switch (s.type) {
           case "rect":
-            return <rect key={i} x={s.x} y={s.y} width={s.w} height={s.h} fill={s.fill ?? "none"} stroke={s.stroke} strokeWidth={s.strokeWidth} strokeDasharray={s.dash?.join(" ")} opacity={s.opacity} />;
+            return (
+              <rect
+                key={i}
+                x={s.x}
+                y={s.y}
+                width={s.w}
+                height={s.h}
+                fill={s.fill ?? "none"}
+                stroke={s.stroke}
+                strokeWidth={s.strokeWidth}
+                strokeDasharray={s.dash?.join(" ")}
+                opacity={s.opacity}
+              />
+            );
           case "line":
-            return <line key={i} x1={s.x1} y1={s.y1} x2={s.x2} y2={s.y2} stroke={s.stroke} strokeWidth={s.strokeWidth} strokeDasharray={s.dash?.join(" ")} opacity={s.opacity} strokeLinecap="round" />;
+            return (
+              <line
+                key={i}
+                x1={s.x1}
+                y1={s.y1}
+                x2={s.x2}
+                y2={s.y2}
+                stroke={s.stroke}
+                strokeWidth={s.strokeWidth}
+                strokeDasharray={s.dash?.join(" ")}
+                opacity={s.opacity}
+                strokeLinecap="round"
+              />
+            );
           case "polyline": {
             const points = s.points.map(([x, y]) => `${x.toFixed(2)},${y.toFixed(2)}`).join(" ");
-            return s.closed
-              ? <polygon key={i} points={points} fill={s.fill ?? "none"} stroke={s.stroke} strokeWidth={s.strokeWidth} strokeDasharray={s.dash?.join(" ")} opacity={s.opacity} strokeLinejoin="round" />
-              : <polyline key={i} points={points} fill={s.fill ?? "none"} stroke={s.stroke} strokeWidth={s.strokeWidth} strokeDasharray={s.dash?.join(" ")} opacity={s.opacity} strokeLinejoin="round" strokeLinecap="round" />;
+            return s.closed ? (
+              <polygon
+                key={i}
+                points={points}
+                fill={s.fill ?? "none"}
+                stroke={s.stroke}
+                strokeWidth={s.strokeWidth}
+                strokeDasharray={s.dash?.join(" ")}
+                opacity={s.opacity}
+                strokeLinejoin="round"
+              />
+            ) : (
+              <polyline
+                key={i}
+                points={points}
+                fill={s.fill ?? "none"}
+                stroke={s.stroke}
+                strokeWidth={s.strokeWidth}
+                strokeDasharray={s.dash?.join(" ")}
+                opacity={s.opacity}
+                strokeLinejoin="round"
+                strokeLinecap="round"
+              />
+            );
           }
           case "circle":
-            return <circle key={i} cx={s.cx} cy={s.cy} r={s.r} fill={s.fill ?? "none"} stroke={s.stroke} strokeWidth={s.strokeWidth} opacity={s.opacity} />;
+            return (
+              <circle
+                key={i}
+                cx={s.cx}
+                cy={s.cy}
+                r={s.r}
+                fill={s.fill ?? "none"}
+                stroke={s.stroke}
+                strokeWidth={s.strokeWidth}
+                opacity={s.opacity}
+              />
+            );
           case "text":
             return (
-              <text key={i} x={s.x} y={s.y} fontSize={s.size} fontWeight={s.weight === "bold" ? 700 : 400} textAnchor={ANCHOR[s.anchor]} fontFamily={FONTS[s.font]} fill={s.fill} letterSpacing={s.tracking}>
+              <text
+                key={i}
+                x={s.x}
+                y={s.y}
+                fontSize={s.size}
+                fontWeight={s.weight === "bold" ? 700 : 400}
+                textAnchor={ANCHOR[s.anchor]}
+                fontFamily={FONTS[s.font]}
+                fill={s.fill}
+                letterSpacing={s.tracking}
+              >
                 {s.text}
               </text>
             );

@@ -10,11 +10,29 @@ export function SectionStrip({ layers, className = "" }: { layers: LayerStripEnt
   const total = widths.reduce((sum, w) => sum + w, 0) || 1;
   let x = 0;
   return (
-    <svg viewBox="0 0 100 8" preserveAspectRatio="none" className={`h-2 w-full ${className}`} role="img" aria-label={`Layers, exterior to interior: ${layers.map((l) => familyStyle(l.family).label).join(", ")}`}>
+    <svg
+      viewBox="0 0 100 8"
+      preserveAspectRatio="none"
+      className={`h-2 w-full ${className}`}
+      role="img"
+      aria-label={`Layers, exterior to interior: ${layers.map((l) => familyStyle(l.family).label).join(", ")}`}
+    >
       {layers.map((layer, i) => {
         const w = (widths[i] / total) * 100;
         const style = familyStyle(layer.family);
-        const rect = <rect key={i} x={x} y={0} width={w} height={8} fill={style.fill} stroke={style.stroke} strokeWidth={0.15} vectorEffect="non-scaling-stroke" />;
+        const rect = (
+          <rect
+            key={i}
+            x={x}
+            y={0}
+            width={w}
+            height={8}
+            fill={style.fill}
+            stroke={style.stroke}
+            strokeWidth={0.15}
+            vectorEffect="non-scaling-stroke"
+          />
+        );
         x += w;
         return rect;
       })}

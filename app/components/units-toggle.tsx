@@ -7,9 +7,15 @@ export function UnitsToggle({ units }: { units: UnitSystem }) {
   const pending = fetcher.formData?.get("units");
   const current = parseUnitSystem(pending) ?? units;
   return (
-    <fetcher.Form method="post" action="/preferences/units" className="inline-flex overflow-hidden rounded border border-rule text-xs" data-testid="units-toggle">
+    <fetcher.Form
+      method="post"
+      action="/preferences/units"
+      className="inline-flex overflow-hidden rounded border border-rule text-xs"
+      data-testid="units-toggle"
+    >
       {UNIT_SYSTEMS.map((system) => (
-        <button type="submit"
+        <button
+          type="submit"
           key={system}
           name="units"
           value={system}

@@ -31,7 +31,9 @@ let cached: Env | undefined;
 
 /** Just the database settings: the Sequelize singleton is built at import, before other settings matter. */
 export function databaseEnv() {
-  return envSchema.pick({ DB_HOST: true, DB_PORT: true, DB_NAME: true, DB_USER: true, DB_PASSWORD: true }).parse(process.env);
+  return envSchema
+    .pick({ DB_HOST: true, DB_PORT: true, DB_NAME: true, DB_USER: true, DB_PASSWORD: true })
+    .parse(process.env);
 }
 
 export function env(): Env {

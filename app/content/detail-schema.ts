@@ -1,14 +1,32 @@
 import { z } from "zod";
 import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
 
-import { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, EXPOSURES, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS } from "./vocabularies";
+import {
+  ADHESIVES,
+  ASSEMBLY_KINDS,
+  BELOW_GRADE_CONDITIONS,
+  EXPOSURES,
+  INSULATION_STRATEGIES,
+  JOINT_TREATMENTS,
+  LAYER_ROLES,
+  SUBSTRATES,
+  TIERS,
+} from "./vocabularies";
 
-export { ADHESIVES, ASSEMBLY_KINDS, BELOW_GRADE_CONDITIONS, EXPOSURES, INSULATION_STRATEGIES, JOINT_TREATMENTS, LAYER_ROLES, SUBSTRATES, TIERS };
+export {
+  ADHESIVES,
+  ASSEMBLY_KINDS,
+  BELOW_GRADE_CONDITIONS,
+  EXPOSURES,
+  INSULATION_STRATEGIES,
+  JOINT_TREATMENTS,
+  LAYER_ROLES,
+  SUBSTRATES,
+  TIERS,
+};
 
 /** Lower-case words joined by single hyphens: the shape of every slug. */
-export const slugSchema = z
-  .string()
-  .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "must be lower-case words joined by hyphens");
+export const slugSchema = z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "must be lower-case words joined by hyphens");
 
 // YAML 1.2 reads 2026-09-14 as a string; an editor's tool may hand us a Date.
 const isoDateSchema = z.preprocess(

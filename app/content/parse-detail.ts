@@ -58,17 +58,27 @@ export function slugFromFileName(fileName: string): string {
 }
 
 function splitFrontMatter(fileName: string, text: string): SplitFile {
-  const lines = text.replace(/^\uFEFF/, "").replace(/\r\n?/g, "\n").split("\n");
+  const lines = text
+    .replace(/^\uFEFF/, "")
+    .replace(/\r\n?/g, "\n")
+    .split("\n");
   if (lines[0]?.trim() !== "---") {
-    throw new ContentError([{ file: fileName, line: 1, field: "", message: "a detail must start with a `---` line opening its front matter" }]);
+    throw new ContentError([
+      { file: fileName, line: 1, field: "", message: "a detail must start with a `---` line opening its front matter" },
+    ]);
   }
   const closing = lines.findIndex((line, index) => index > 0 && line.trim() === "---");
   if (closing === -1) {
-    throw new ContentError([{ file: fileName, line: 1, field: "", message: "the front matter is never closed by a second `---` line" }]);
+    throw new ContentError([
+      { file: fileName, line: 1, field: "", message: "the front matter is never closed by a second `---` line" },
+    ]);
   }
   return {
     frontMatter: lines.slice(1, closing).join("\n"),
-    body: lines.slice(closing + 1).join("\n").trim(),
+    body: lines
+      .slice(closing + 1)
+      .join("\n")
+      .trim(),
     bodyStartLine: closing + 2,
   };
 }
@@ -76,12 +86,14 @@ function splitFrontMatter(fileName: string, text: string): SplitFile {
 function slugProblems(file: string, located: LocatedDocument, detail: DetailFrontMatter): ContentProblem[] {
   const expected = slugFromFileName(file);
   if (detail.slug === expected) return [];
-  return [{
-    file,
-    line: lineOfPath(located, ["slug"]),
-    field: "slug",
-    message: `slug "${detail.slug}" does not match the file name (expected "${expected}")`,
-  }];
+  return [
+    {
+      file,
+      line: lineOfPath(located, ["slug"]),
+      field: "slug",
+      message: `slug "${detail.slug}" does not match the file name (expected "${expected}")`,
+    },
+  ];
 }
 
 function referenceProblems(
@@ -130,10 +142,12 @@ function referenceProblems(
 function bodyProblems(file: string, split: SplitFile): ContentProblem[] {
   const missing = missingBodySections(split.body);
   if (missing.length === 0) return [];
-  return [{
-    file,
-    line: split.bodyStartLine,
-    field: "body",
-    message: `the body lacks the section${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"## ${m}"`).join(", ")}`,
-  }];
+  return [
+    {
+      file,
+      line: split.bodyStartLine,
+      field: "body",
+      message: `the body lacks the section${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"## ${m}"`).join(", ")}`,
+    },
+  ];
 }

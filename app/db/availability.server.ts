@@ -13,9 +13,16 @@ This page retries by itself every ten seconds.</p></body></html>`;
 export async function replaceWithUnavailableIfDatabaseDown(request: Request, response: Response): Promise<Response> {
   if (response.status < 500 || response.status === 503) return response;
   if (await databaseIsUp()) return response;
-  const wantsJson = new URL(request.url).pathname.startsWith("/api/") || request.headers.get("accept")?.includes("application/json");
+  const wantsJson =
+    new URL(request.url).pathname.startsWith("/api/") || request.headers.get("accept")?.includes("application/json");
   const headers = { "Retry-After": "10", "Cache-Control": "no-store" };
   return wantsJson
-    ? Response.json({ error: "database_unavailable", message: "The database is unavailable; retry shortly." }, { status: 503, headers })
-    : new Response(UNAVAILABLE_PAGE, { status: 503, headers: { ...headers, "Content-Type": "text/html; charset=utf-8" } });
+    ? Response.json(
+        { error: "database_unavailable", message: "The database is unavailable; retry shortly." },
+        { status: 503, headers },
+      )
+    : new Response(UNAVAILABLE_PAGE, {
+        status: 503,
+        headers: { ...headers, "Content-Type": "text/html; charset=utf-8" },
+      });
 }

@@ -31,7 +31,13 @@ const globalForDb = globalThis as typeof globalThis & { __drysideSequelize?: Seq
 
 function fromEnvironment(): Sequelize {
   const e = databaseEnv();
-  return createSequelize({ host: e.DB_HOST, port: e.DB_PORT, database: e.DB_NAME, username: e.DB_USER, password: e.DB_PASSWORD });
+  return createSequelize({
+    host: e.DB_HOST,
+    port: e.DB_PORT,
+    database: e.DB_NAME,
+    username: e.DB_USER,
+    password: e.DB_PASSWORD,
+  });
 }
 
 export const sequelize: Sequelize = (globalForDb.__drysideSequelize ??= fromEnvironment());

@@ -16,7 +16,11 @@ export async function reviewPage(reviewer: DeskActor, revisionId: number, units:
   if (!found) return null;
   const { revision, detail, published } = found;
   const front = revision.frontMatter;
-  const [library, comments, uploads] = await Promise.all([materialLibrary(), commentsOn(revision.id), uploadsOf(revision.id)]);
+  const [library, comments, uploads] = await Promise.all([
+    materialLibrary(),
+    commentsOn(revision.id),
+    uploadsOf(revision.id),
+  ]);
   const own = revision.authorId === reviewer.id;
   return {
     id: revision.id,
@@ -29,8 +33,20 @@ export async function reviewPage(reviewer: DeskActor, revisionId: number, units:
     changeNote: revision.changeNote,
     own,
     canDecide: !own && revision.state === "in_review",
-    front: { assembly: front.assembly, substrate: front.substrate, below_grade: front.below_grade, strategy: front.strategy, zones: front.zones, tier: front.tier, sets: front.sets, references: front.references },
-    layers: front.layers.map((layer) => ({ ...layer, materialName: library.get(layer.material)?.name ?? layer.material })),
+    front: {
+      assembly: front.assembly,
+      substrate: front.substrate,
+      below_grade: front.below_grade,
+      strategy: front.strategy,
+      zones: front.zones,
+      tier: front.tier,
+      sets: front.sets,
+      references: front.references,
+    },
+    layers: front.layers.map((layer) => ({
+      ...layer,
+      materialName: library.get(layer.material)?.name ?? layer.material,
+    })),
     bodyHtml: renderMarkdown(revision.bodyMd),
     comparedWith: published ? published.number : null,
     changes: published ? describeChanges(published.frontMatter, front, published.bodyMd, revision.bodyMd) : [],
@@ -43,7 +59,10 @@ export async function reviewPage(reviewer: DeskActor, revisionId: number, units:
 
 /** The withdraw page: which detail, and whether it is live (only a live detail can be withdrawn). Null: no such detail. */
 export async function withdrawPage(slug: string) {
-  const detail = await Detail.findOne({ where: { slug }, attributes: ["slug", "title", "publishedRevisionId", "withdrawnAt"] });
+  const detail = await Detail.findOne({
+    where: { slug },
+    attributes: ["slug", "title", "publishedRevisionId", "withdrawnAt"],
+  });
   if (!detail) return null;
   return { slug: detail.slug, title: detail.title, live: detail.isLive() };
 }
@@ -56,7 +75,10 @@ export async function startRevisionPage(slug: string) {
     include: [{ model: DetailRevision, as: "publishedRevision", attributes: ["number"] }],
   });
   if (!detail) return null;
-  const open = await DetailRevision.findOne({ where: { detailId: detail.id, state: { [Op.in]: OPEN_REVISION_STATES } }, attributes: ["id", "number", "state", "authorName"] });
+  const open = await DetailRevision.findOne({
+    where: { detailId: detail.id, state: { [Op.in]: OPEN_REVISION_STATES } },
+    attributes: ["id", "number", "state", "authorName"],
+  });
   return {
     slug: detail.slug,
     title: detail.title,

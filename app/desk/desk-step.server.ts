@@ -16,7 +16,8 @@ export async function deskStep<T, R>(work: () => Promise<T>, refused: (error: De
 
 /** The refusal as a conform form's answer: the message as the form's own error. */
 export function refusedForm<R>(submission: { reply(options: { formErrors: string[] }): R }) {
-  return (error: DeskError) => data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
+  return (error: DeskError) =>
+    data({ result: submission.reply({ formErrors: [error.message] }) }, { status: error.status });
 }
 
 /** The refusal as a JSON answer, for the desk's fetch endpoints. */

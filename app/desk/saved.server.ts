@@ -15,7 +15,10 @@ export async function setSaved(userId: number, slug: string, saved: boolean): Pr
   if (!detail) return null;
   if (saved) {
     if (!detail.isLive()) return null;
-    await SavedDetail.findOrCreate({ where: { userId, detailId: detail.id }, defaults: { userId, detailId: detail.id } });
+    await SavedDetail.findOrCreate({
+      where: { userId, detailId: detail.id },
+      defaults: { userId, detailId: detail.id },
+    });
   } else {
     await SavedDetail.destroy({ where: { userId, detailId: detail.id } });
   }
@@ -33,10 +36,29 @@ export interface SavedRow {
 export async function listSaved(userId: number): Promise<SavedRow[]> {
   const saved = await SavedDetail.findAll({
     where: { userId },
-    include: [{ model: Detail, as: "detail", attributes: ["id", "slug", "title", "tier", "publishedRevisionId", "withdrawnAt"], required: true }],
+    include: [
+      {
+        model: Detail,
+        as: "detail",
+        attributes: ["id", "slug", "title", "tier", "publishedRevisionId", "withdrawnAt"],
+        required: true,
+      },
+    ],
     order: [["createdAt", "DESC"]],
   });
-  return saved.flatMap(({ detail, createdAt }) => (detail ? [{ slug: detail.slug, title: detail.title, tier: detail.tier, savedAt: createdAt.toISOString(), live: detail.isLive() }] : []));
+  return saved.flatMap(({ detail, createdAt }) =>
+    detail
+      ? [
+          {
+            slug: detail.slug,
+            title: detail.title,
+            tier: detail.tier,
+            savedAt: createdAt.toISOString(),
+            live: detail.isLive(),
+          },
+        ]
+      : [],
+  );
 }
 
 /** E-mails every member who saved the detail about its new revision, with the change note. Returns how many were sent. */
@@ -44,7 +66,9 @@ export async function alertSavers(detail: Detail, revision: DetailRevision): Pro
   const saved = await SavedDetail.findAll({
     where: { detailId: detail.id },
     attributes: ["userId"],
-    include: [{ model: User, as: "user", attributes: ["id", "email", "displayName", "emailVerifiedAt"], required: true }],
+    include: [
+      { model: User, as: "user", attributes: ["id", "email", "displayName", "emailVerifiedAt"], required: true },
+    ],
   });
   if (saved.length === 0) return 0;
   const users = saved.flatMap((row) => (row.user ? [row.user] : []));
@@ -53,7 +77,16 @@ export async function alertSavers(detail: Detail, revision: DetailRevision): Pro
     users
       .filter((user) => user.emailVerifiedAt)
       .map((user) =>
-        sendMailOrLog(user.email, revisionAlertMail({ displayName: user.displayName, detailTitle: revision.title, revision: revision.number, changeNote: revision.changeNote ?? "See the revision history on the detail page.", link })),
+        sendMailOrLog(
+          user.email,
+          revisionAlertMail({
+            displayName: user.displayName,
+            detailTitle: revision.title,
+            revision: revision.number,
+            changeNote: revision.changeNote ?? "See the revision history on the detail page.",
+            link,
+          }),
+        ),
       ),
   );
   return sent.filter(Boolean).length;

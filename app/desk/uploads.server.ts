@@ -39,7 +39,14 @@ export interface UploadRow {
 }
 
 function row(upload: Upload): UploadRow {
-  return { id: upload.id, name: upload.originalName, contentType: upload.contentType, byteSize: upload.byteSize, caption: upload.caption, href: `/uploads/${upload.id}` };
+  return {
+    id: upload.id,
+    name: upload.originalName,
+    contentType: upload.contentType,
+    byteSize: upload.byteSize,
+    caption: upload.caption,
+    href: `/uploads/${upload.id}`,
+  };
 }
 
 export async function uploadsOf(revisionId: number): Promise<UploadRow[]> {
@@ -54,11 +61,17 @@ function displayName(name: string): string {
 }
 
 /** Checks, cleans and stores one file for the author's open revision. */
-export async function storeUpload(actor: DeskActor, revisionId: number, file: File, caption: string): Promise<UploadRow> {
+export async function storeUpload(
+  actor: DeskActor,
+  revisionId: number,
+  file: File,
+  caption: string,
+): Promise<UploadRow> {
   const revision = await DetailRevision.findByPk(revisionId);
   if (!revision) throw new DeskError(404, "No such revision.");
   if (revision.authorId !== actor.id) throw new DeskError(403, "Only the revision's author attaches files to it.");
-  if (!isEditableRevisionState(revision.state)) throw new DeskError(409, "Files are attached while the revision is a draft.");
+  if (!isEditableRevisionState(revision.state))
+    throw new DeskError(409, "Files are attached while the revision is a draft.");
   if (file.size > MAX_UPLOAD_BYTES) throw new DeskError(400, "That file is larger than 5 MB.");
   let bytes: Buffer = Buffer.from(await file.arrayBuffer());
   if (bytes.length > MAX_UPLOAD_BYTES) throw new DeskError(400, "That file is larger than 5 MB.");
@@ -68,7 +81,11 @@ export async function storeUpload(actor: DeskActor, revisionId: number, file: Fi
   if (!type) throw new DeskError(400, "Only SVG, PNG, JPEG and PDF files can be attached.");
   const claimed = claimedExtension(file.name);
   // A name that says one thing while the bytes say another is refused rather than guessed at.
-  if (claimed && claimed !== EXTENSION[type]) throw new DeskError(400, `“${displayName(file.name)}” is named .${claimed} but its content is ${EXTENSION[type].toUpperCase()}.`);
+  if (claimed && claimed !== EXTENSION[type])
+    throw new DeskError(
+      400,
+      `“${displayName(file.name)}” is named .${claimed} but its content is ${EXTENSION[type].toUpperCase()}.`,
+    );
   if (type === "image/svg+xml") {
     const clean = sanitiseSvg(bytes.toString("utf8"));
     if (!clean) throw new DeskError(400, "That SVG could not be read as a drawing.");
@@ -99,7 +116,8 @@ export async function removeUpload(actor: DeskActor, uploadId: number): Promise<
   const upload = await Upload.findByPk(uploadId);
   if (!upload) throw new DeskError(404, "No such file.");
   const revision = await DetailRevision.findByPk(upload.revisionId);
-  if (!revision || revision.authorId !== actor.id || !isEditableRevisionState(revision.state)) throw new DeskError(403, "Only the author removes files from an open revision.");
+  if (!revision || revision.authorId !== actor.id || !isEditableRevisionState(revision.state))
+    throw new DeskError(403, "Only the author removes files from an open revision.");
   await upload.destroy();
   await blobStorage().remove(upload.storageKey);
 }

@@ -1,7 +1,12 @@
 // Clipping of hatch primitives to the rectangle of their band, so hatch never spills into a
 // neighbouring layer and both renderers need no clip paths.
 
-export interface Box { x: number; y: number; w: number; h: number }
+export interface Box {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
 export type Point = [number, number];
 
 const EPS = 1e-9;
@@ -63,7 +68,9 @@ export function clipPolyline(points: readonly Point[], box: Box): Point[][] {
 }
 
 export function insideBox(x: number, y: number, box: Box, tolerance = 1e-6): boolean {
-  return x >= box.x - tolerance && x <= box.x + box.w + tolerance && y >= box.y - tolerance && y <= box.y + box.h + tolerance;
+  return (
+    x >= box.x - tolerance && x <= box.x + box.w + tolerance && y >= box.y - tolerance && y <= box.y + box.h + tolerance
+  );
 }
 
 export function circleInsideBox(cx: number, cy: number, r: number, box: Box): boolean {

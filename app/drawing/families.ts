@@ -2,7 +2,17 @@
 // concrete, wavy batt lines for fibrous insulation, grain for wood, dots for aggregate), in our palette.
 
 export type HatchKind =
-  | "none" | "diagonal" | "cross" | "batt" | "grain" | "dots" | "gravel" | "stipple" | "foam" | "dash" | "solid";
+  | "none"
+  | "diagonal"
+  | "cross"
+  | "batt"
+  | "grain"
+  | "dots"
+  | "gravel"
+  | "stipple"
+  | "foam"
+  | "dash"
+  | "solid";
 
 export interface FamilyStyle {
   label: string;

@@ -28,7 +28,17 @@ function segments(lines: [Point, Point][], box: Box, paint: HatchPaint, width: n
   for (const [a, b] of lines) {
     const seg = clipSegment(a, b, box);
     if (!seg) continue;
-    out.push({ type: "line", x1: seg[0][0], y1: seg[0][1], x2: seg[1][0], y2: seg[1][1], stroke: paint.stroke, strokeWidth: width, dash, tag: paint.tag });
+    out.push({
+      type: "line",
+      x1: seg[0][0],
+      y1: seg[0][1],
+      x2: seg[1][0],
+      y2: seg[1][1],
+      stroke: paint.stroke,
+      strokeWidth: width,
+      dash,
+      tag: paint.tag,
+    });
   }
   return out;
 }
@@ -38,14 +48,28 @@ function diagonals(box: Box, spacing: number, direction: 1 | -1): [Point, Point]
   // Lines y = ±x + c swept across the whole box; clipping trims them.
   const span = box.w + box.h;
   for (let c = -span; c <= span; c += spacing) {
-    if (direction === 1) lines.push([[box.x + c, box.y + box.h], [box.x + c + box.h, box.y]]);
-    else lines.push([[box.x + c, box.y], [box.x + c + box.h, box.y + box.h]]);
+    if (direction === 1)
+      lines.push([
+        [box.x + c, box.y + box.h],
+        [box.x + c + box.h, box.y],
+      ]);
+    else
+      lines.push([
+        [box.x + c, box.y],
+        [box.x + c + box.h, box.y + box.h],
+      ]);
   }
   return lines;
 }
 
 function polylines(points: Point[], box: Box, paint: HatchPaint, width: number): Shape[] {
-  return clipPolyline(points, box).map((run) => ({ type: "polyline" as const, points: run, stroke: paint.stroke, strokeWidth: width, tag: paint.tag }));
+  return clipPolyline(points, box).map((run) => ({
+    type: "polyline" as const,
+    points: run,
+    stroke: paint.stroke,
+    strokeWidth: width,
+    tag: paint.tag,
+  }));
 }
 
 function dots(box: Box, paint: HatchPaint, count: number, rMin: number, rMax: number, filled: boolean): Shape[] {
@@ -56,9 +80,11 @@ function dots(box: Box, paint: HatchPaint, count: number, rMin: number, rMax: nu
     const cx = box.x + rnd() * box.w;
     const cy = box.y + rnd() * box.h;
     if (!circleInsideBox(cx, cy, r + 0.4, box)) continue;
-    out.push(filled
-      ? { type: "circle", cx, cy, r, fill: paint.stroke, tag: paint.tag }
-      : { type: "circle", cx, cy, r, stroke: paint.stroke, strokeWidth: 0.6, tag: paint.tag });
+    out.push(
+      filled
+        ? { type: "circle", cx, cy, r, fill: paint.stroke, tag: paint.tag }
+        : { type: "circle", cx, cy, r, stroke: paint.stroke, strokeWidth: 0.6, tag: paint.tag },
+    );
   }
   return out;
 }
@@ -130,7 +156,10 @@ function dashes(box: Box, paint: HatchPaint): Shape[] {
   const columns = Math.max(1, Math.min(3, Math.floor(box.w / 8)));
   for (let k = 1; k <= columns; k++) {
     const x = box.x + (box.w * k) / (columns + 1);
-    lines.push([[x, box.y], [x, box.y + box.h]]);
+    lines.push([
+      [x, box.y],
+      [x, box.y + box.h],
+    ]);
   }
   return segments(lines, box, paint, 0.6, [5, 3]);
 }
@@ -142,9 +171,26 @@ export function hatchShapes(kind: HatchKind, box: Box, paint: HatchPaint): Shape
     case "diagonal":
       return segments(diagonals(box, 5, 1), box, paint, 0.6);
     case "foam":
-      return [...segments(diagonals(box, 9, 1), box, paint, 0.45), ...segments(diagonals(box, 9, -1), box, paint, 0.45)];
+      return [
+        ...segments(diagonals(box, 9, 1), box, paint, 0.45),
+        ...segments(diagonals(box, 9, -1), box, paint, 0.45),
+      ];
     case "cross":
-      return segments([[[box.x, box.y], [box.x + box.w, box.y + box.h]], [[box.x + box.w, box.y], [box.x, box.y + box.h]]], box, paint, 0.7);
+      return segments(
+        [
+          [
+            [box.x, box.y],
+            [box.x + box.w, box.y + box.h],
+          ],
+          [
+            [box.x + box.w, box.y],
+            [box.x, box.y + box.h],
+          ],
+        ],
+        box,
+        paint,
+        0.7,
+      );
     case "batt":
       return batt(box, paint);
     case "grain":

@@ -55,17 +55,23 @@ export function profileAxes(profile: ProfileCase): ProfileAxes {
   const totalZ = cumulative[cumulative.length - 1];
 
   const clamp = (v: number): number => Math.min(1, Math.max(0, v));
-  const points = interfaces.map((p, k): ProfilePoint => ({
-    k,
-    thermal: thermalFromTemperature ? clamp((p.t_c - profile.exterior.t_c) / dT) : thickness > 0 ? (p.position_mm - x0) / thickness : 0,
-    vapour: totalZ > 0 ? cumulative[k] / totalZ : 0,
-    t_c: p.t_c,
-    dewPoint_c: dewPoint(p.p_v_pa),
-    p_sat_pa: p.p_sat_pa,
-    p_v_pa: p.p_v_pa,
-    p_v_linear_pa: p.p_v_linear_pa,
-    margin_c: p.t_c - dewPoint(p.p_v_linear_pa),
-    condensing: p.condensing,
-  }));
+  const points = interfaces.map(
+    (p, k): ProfilePoint => ({
+      k,
+      thermal: thermalFromTemperature
+        ? clamp((p.t_c - profile.exterior.t_c) / dT)
+        : thickness > 0
+          ? (p.position_mm - x0) / thickness
+          : 0,
+      vapour: totalZ > 0 ? cumulative[k] / totalZ : 0,
+      t_c: p.t_c,
+      dewPoint_c: dewPoint(p.p_v_pa),
+      p_sat_pa: p.p_sat_pa,
+      p_v_pa: p.p_v_pa,
+      p_v_linear_pa: p.p_v_linear_pa,
+      margin_c: p.t_c - dewPoint(p.p_v_linear_pa),
+      condensing: p.condensing,
+    }),
+  );
   return { points, thermalFromTemperature };
 }

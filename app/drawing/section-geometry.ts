@@ -94,10 +94,19 @@ export function sideLabelsFor(kind: AssemblyKind): { exterior: string; interior:
 }
 
 /** Scale (drawing units per mm) so that the widened bands exactly fill `available`. */
-export function fitBandWidths(thicknesses: readonly number[], available: number, minWidth: number): { widths: number[]; pxPerMm: number; widened: boolean[] } {
+export function fitBandWidths(
+  thicknesses: readonly number[],
+  available: number,
+  minWidth: number,
+): { widths: number[]; pxPerMm: number; widened: boolean[] } {
   const n = thicknesses.length;
   let widened = thicknesses.map(() => false);
-  let pxPerMm = available / Math.max(thicknesses.reduce((s, t) => s + t, 0), 1e-9);
+  let pxPerMm =
+    available /
+    Math.max(
+      thicknesses.reduce((s, t) => s + t, 0),
+      1e-9,
+    );
   // Widening a layer takes width from the others, which can push another under the minimum:
   // repeat until the set of widened layers stops changing.
   for (let pass = 0; pass <= n; pass++) {
@@ -116,7 +125,10 @@ export function fitBandWidths(thicknesses: readonly number[], available: number,
 
 /** Centres for callouts at least `gap` apart, as close as possible to the desired ones. */
 export function spreadCallouts(desired: readonly number[], gap: number, lo: number, hi: number): number[] {
-  interface Group { members: number[]; first: number }
+  interface Group {
+    members: number[];
+    first: number;
+  }
   const place = (g: Group): void => {
     const mean = g.members.reduce((s, i) => s + desired[i], 0) / g.members.length;
     const span = (g.members.length - 1) * gap;
@@ -139,7 +151,8 @@ export function spreadCallouts(desired: readonly number[], gap: number, lo: numb
 }
 
 function niceBarLength(pxPerMm: number, units: UnitSystem, maxPx: number): { length: number; mm: number } {
-  const candidates = units === "si" ? [5, 10, 20, 25, 50, 100, 200, 250, 500, 1000] : [0.25, 0.5, 1, 2, 3, 4, 6, 12, 24];
+  const candidates =
+    units === "si" ? [5, 10, 20, 25, 50, 100, 200, 250, 500, 1000] : [0.25, 0.5, 1, 2, 3, 4, 6, 12, 24];
   let best = candidates[0];
   for (const c of candidates) {
     const mm = units === "si" ? c : inToMm(c);
@@ -161,8 +174,24 @@ function legendName(layer: SectionLayer): string {
   return `${layer.materialName}, ${framing.toLowerCase()} framing ${Math.round(layer.framing.fraction * 100)} %`;
 }
 
-function text(x: number, y: number, value: string, extra: Partial<Omit<Shape & { type: "text" }, "type" | "x" | "y" | "text">> = {}): Shape {
-  return { type: "text", x, y, text: value, size: FONT_SIZE, weight: "normal", anchor: "start", font: "sans", fill: INK.graphite, ...extra };
+function text(
+  x: number,
+  y: number,
+  value: string,
+  extra: Partial<Omit<Shape & { type: "text" }, "type" | "x" | "y" | "text">> = {},
+): Shape {
+  return {
+    type: "text",
+    x,
+    y,
+    text: value,
+    size: FONT_SIZE,
+    weight: "normal",
+    anchor: "start",
+    font: "sans",
+    fill: INK.graphite,
+    ...extra,
+  };
 }
 
 export function sectionGeometry(input: SectionInput, options: SectionOptions): SectionGeometry {
@@ -175,7 +204,11 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
   const bottom = SECTION_TOP + SECTION_HEIGHT;
   const shapes: Shape[] = [];
 
-  const fit = fitBandWidths(input.layers.map((l) => l.thickness_mm), sectionWidth, minBand);
+  const fit = fitBandWidths(
+    input.layers.map((l) => l.thickness_mm),
+    sectionWidth,
+    minBand,
+  );
   const bands: SectionBand[] = [];
   let x = x0;
   input.layers.forEach((layer, index) => {
@@ -208,16 +241,40 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
     const regions: Box[] = band.framingBox
       ? [
           { x: band.box.x, y: top, w: band.box.w, h: band.framingBox.y - top },
-          { x: band.box.x, y: band.framingBox.y + band.framingBox.h, w: band.box.w, h: bottom - band.framingBox.y - band.framingBox.h },
+          {
+            x: band.box.x,
+            y: band.framingBox.y + band.framingBox.h,
+            w: band.box.w,
+            h: bottom - band.framingBox.y - band.framingBox.h,
+          },
         ]
       : [band.box];
     regions.forEach((region, k) => {
-      shapes.push(...hatchShapes(style.hatch, region, { stroke: style.stroke, tag: `hatch:${band.index}`, variant: band.index * 7 + k + 1 }));
+      shapes.push(
+        ...hatchShapes(style.hatch, region, {
+          stroke: style.stroke,
+          tag: `hatch:${band.index}`,
+          variant: band.index * 7 + k + 1,
+        }),
+      );
     });
     if (band.framingBox && layer.framing) {
       const framingStyle = familyStyle(layer.framing.family);
-      shapes.push({ type: "rect", ...band.framingBox, fill: framingStyle.fill, stroke: framingStyle.stroke, strokeWidth: 0.8, tag: `framing:${band.index}` });
-      shapes.push(...hatchShapes(framingStyle.hatch, band.framingBox, { stroke: framingStyle.stroke, tag: `hatch:${band.index}`, variant: band.index * 7 + 5 }));
+      shapes.push({
+        type: "rect",
+        ...band.framingBox,
+        fill: framingStyle.fill,
+        stroke: framingStyle.stroke,
+        strokeWidth: 0.8,
+        tag: `framing:${band.index}`,
+      });
+      shapes.push(
+        ...hatchShapes(framingStyle.hatch, band.framingBox, {
+          stroke: framingStyle.stroke,
+          tag: `hatch:${band.index}`,
+          variant: band.index * 7 + 5,
+        }),
+      );
     }
     shapes.push({ type: "rect", ...band.box, stroke: style.stroke, strokeWidth: 0.8, tag: `outline:${band.index}` });
   }
@@ -227,8 +284,17 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
   for (const y of [top, bottom]) {
     shapes.push({
       type: "polyline",
-      points: [[x0 - 8, y], [mid - 7, y], [mid - 3, y - 6], [mid + 3, y + 6], [mid + 7, y], [x1 + 8, y]],
-      stroke: INK.graphite, strokeWidth: 0.9, tag: "break",
+      points: [
+        [x0 - 8, y],
+        [mid - 7, y],
+        [mid - 3, y - 6],
+        [mid + 3, y + 6],
+        [mid + 7, y],
+        [x1 + 8, y],
+      ],
+      stroke: INK.graphite,
+      strokeWidth: 0.9,
+      tag: "break",
     });
   }
 
@@ -241,20 +307,56 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
     const tag = `callout:${band.number}`;
     shapes.push({
       type: "polyline",
-      points: [[cx, CALLOUT_Y + CALLOUT_R], [cx, CALLOUT_Y + CALLOUT_R + 8], [target, top - 10], [target, top + 14]],
-      stroke: INK.graphite, strokeWidth: 0.6, tag,
+      points: [
+        [cx, CALLOUT_Y + CALLOUT_R],
+        [cx, CALLOUT_Y + CALLOUT_R + 8],
+        [target, top - 10],
+        [target, top + 14],
+      ],
+      stroke: INK.graphite,
+      strokeWidth: 0.6,
+      tag,
     });
     shapes.push({ type: "circle", cx: target, cy: top + 14, r: 1.6, fill: INK.graphite, tag });
-    shapes.push({ type: "circle", cx, cy: CALLOUT_Y, r: CALLOUT_R, fill: INK.sheet, stroke: INK.graphite, strokeWidth: 0.9, tag });
+    shapes.push({
+      type: "circle",
+      cx,
+      cy: CALLOUT_Y,
+      r: CALLOUT_R,
+      fill: INK.sheet,
+      stroke: INK.graphite,
+      strokeWidth: 0.9,
+      tag,
+    });
     shapes.push(text(cx, CALLOUT_Y + 3.6, String(band.number), { anchor: "middle", weight: "bold", size: 10, tag }));
-    if (band.drawnWiderThanScale) shapes.push(text(cx, CALLOUT_Y - CALLOUT_R - 2, "*", { size: 9, fill: INK.ochre, weight: "bold", anchor: "middle", tag }));
+    if (band.drawnWiderThanScale)
+      shapes.push(
+        text(cx, CALLOUT_Y - CALLOUT_R - 2, "*", { size: 9, fill: INK.ochre, weight: "bold", anchor: "middle", tag }),
+      );
   });
 
   // Side labels under the section.
   const labels = sideLabelsFor(input.kind);
   const labelY = bottom + 20;
-  shapes.push(text(x0, labelY, labels.exterior, { weight: "bold", size: 9.5, tracking: 1.2, fill: INK.graphiteSoft, tag: "side:exterior" }));
-  shapes.push(text(x1, labelY, labels.interior, { weight: "bold", size: 9.5, tracking: 1.2, fill: INK.graphiteSoft, anchor: "end", tag: "side:interior" }));
+  shapes.push(
+    text(x0, labelY, labels.exterior, {
+      weight: "bold",
+      size: 9.5,
+      tracking: 1.2,
+      fill: INK.graphiteSoft,
+      tag: "side:exterior",
+    }),
+  );
+  shapes.push(
+    text(x1, labelY, labels.interior, {
+      weight: "bold",
+      size: 9.5,
+      tracking: 1.2,
+      fill: INK.graphiteSoft,
+      anchor: "end",
+      tag: "side:interior",
+    }),
+  );
 
   // Scale bar: a round length in the chosen units, in four alternating segments.
   const bar = niceBarLength(fit.pxPerMm, options.units, Math.min(190, sectionWidth * 0.35));
@@ -263,43 +365,112 @@ export function sectionGeometry(input: SectionInput, options: SectionOptions): S
   const barY = labelY - 8;
   const unit = options.units === "si" ? "mm" : "in";
   for (let k = 0; k < 4; k++) {
-    shapes.push({ type: "rect", x: barX + (barPx * k) / 4, y: barY, w: barPx / 4, h: 5, fill: k % 2 === 0 ? INK.graphite : INK.sheet, stroke: INK.graphite, strokeWidth: 0.6, tag: "scalebar" });
+    shapes.push({
+      type: "rect",
+      x: barX + (barPx * k) / 4,
+      y: barY,
+      w: barPx / 4,
+      h: 5,
+      fill: k % 2 === 0 ? INK.graphite : INK.sheet,
+      stroke: INK.graphite,
+      strokeWidth: 0.6,
+      tag: "scalebar",
+    });
   }
   shapes.push(text(barX, barY + 16, "0", { size: 8.5, anchor: "middle", fill: INK.graphiteSoft, tag: "scalebar" }));
-  shapes.push(text(barX + barPx, barY + 16, `${bar.length} ${unit}`, { size: 8.5, anchor: "middle", fill: INK.graphiteSoft, tag: "scalebar" }));
-  shapes.push(text(barX - 10, barY + 5.5, "SCALE", { size: 7.5, anchor: "end", tracking: 1, fill: INK.graphiteSoft, tag: "scalebar" }));
+  shapes.push(
+    text(barX + barPx, barY + 16, `${bar.length} ${unit}`, {
+      size: 8.5,
+      anchor: "middle",
+      fill: INK.graphiteSoft,
+      tag: "scalebar",
+    }),
+  );
+  shapes.push(
+    text(barX - 10, barY + 5.5, "SCALE", {
+      size: 7.5,
+      anchor: "end",
+      tracking: 1,
+      fill: INK.graphiteSoft,
+      tag: "scalebar",
+    }),
+  );
 
   // Legend: number, material, thickness; two columns when the stack is long.
   const showLegend = options.legend ?? true;
   const legendTop = barY + 40;
   const columnGap = 24;
   const thicknessWidth = 52;
-  const nameRoom = (columns: number): number => (x1 - x0 - columnGap * (columns - 1)) / columns - 34 - thicknessWidth - 6;
+  const nameRoom = (columns: number): number =>
+    (x1 - x0 - columnGap * (columns - 1)) / columns - 34 - thicknessWidth - 6;
   // Two columns for long stacks, unless a name would have to be cut short.
   const namesFitTwo = input.layers.every((l) => estimateTextWidth(legendName(l), FONT_SIZE) <= nameRoom(2));
   const columns = bands.length > 5 && namesFitTwo ? 2 : 1;
   const perColumn = Math.ceil(bands.length / columns);
   const columnWidth = (x1 - x0 - columnGap * (columns - 1)) / columns;
-  if (showLegend) shapes.push({ type: "line", x1: x0, y1: legendTop - 14, x2: x1, y2: legendTop - 14, stroke: INK.rule, strokeWidth: 0.8, tag: "legend" });
-  if (showLegend) bands.forEach((band, i) => {
-    const col = Math.floor(i / perColumn);
-    const row = i % perColumn;
-    const cx = x0 + col * (columnWidth + columnGap);
-    const y = legendTop + row * LEGEND_ROW;
-    const tag = `legend:${band.number}`;
-    const thickness = `${formatThickness(band.thickness_mm, options.units)}${band.drawnWiderThanScale ? " *" : ""}`;
-    shapes.push({ type: "circle", cx: cx + 7, cy: y - 3.6, r: 7, stroke: INK.graphite, strokeWidth: 0.7, fill: INK.sheet, tag });
-    shapes.push(text(cx + 7, y, String(band.number), { size: 8.5, weight: "bold", anchor: "middle", tag }));
-    const swatch = familyStyle(band.family);
-    shapes.push({ type: "rect", x: cx + 19, y: y - 8, w: 9, h: 9, fill: swatch.fill, stroke: swatch.stroke, strokeWidth: 0.6, tag });
-    shapes.push(text(cx + 34, y, truncate(legendName(input.layers[band.index]), FONT_SIZE, columnWidth - 34 - thicknessWidth - 6), { tag }));
-    shapes.push(text(cx + columnWidth, y, thickness, { anchor: "end", fill: INK.graphiteSoft, tag }));
-  });
+  if (showLegend)
+    shapes.push({
+      type: "line",
+      x1: x0,
+      y1: legendTop - 14,
+      x2: x1,
+      y2: legendTop - 14,
+      stroke: INK.rule,
+      strokeWidth: 0.8,
+      tag: "legend",
+    });
+  if (showLegend)
+    bands.forEach((band, i) => {
+      const col = Math.floor(i / perColumn);
+      const row = i % perColumn;
+      const cx = x0 + col * (columnWidth + columnGap);
+      const y = legendTop + row * LEGEND_ROW;
+      const tag = `legend:${band.number}`;
+      const thickness = `${formatThickness(band.thickness_mm, options.units)}${band.drawnWiderThanScale ? " *" : ""}`;
+      shapes.push({
+        type: "circle",
+        cx: cx + 7,
+        cy: y - 3.6,
+        r: 7,
+        stroke: INK.graphite,
+        strokeWidth: 0.7,
+        fill: INK.sheet,
+        tag,
+      });
+      shapes.push(text(cx + 7, y, String(band.number), { size: 8.5, weight: "bold", anchor: "middle", tag }));
+      const swatch = familyStyle(band.family);
+      shapes.push({
+        type: "rect",
+        x: cx + 19,
+        y: y - 8,
+        w: 9,
+        h: 9,
+        fill: swatch.fill,
+        stroke: swatch.stroke,
+        strokeWidth: 0.6,
+        tag,
+      });
+      shapes.push(
+        text(
+          cx + 34,
+          y,
+          truncate(legendName(input.layers[band.index]), FONT_SIZE, columnWidth - 34 - thicknessWidth - 6),
+          { tag },
+        ),
+      );
+      shapes.push(text(cx + columnWidth, y, thickness, { anchor: "end", fill: INK.graphiteSoft, tag }));
+    });
   let bottomY = showLegend ? legendTop + (perColumn - 1) * LEGEND_ROW + 6 : barY + 18;
   const notToScale = bands.some((b) => b.drawnWiderThanScale);
   if (notToScale) {
     bottomY += 16;
-    shapes.push(text(x0, bottomY, "* Thin layer drawn wider than true scale so it stays visible.", { size: 9, fill: INK.graphiteSoft, tag: "note:not-to-scale" }));
+    shapes.push(
+      text(x0, bottomY, "* Thin layer drawn wider than true scale so it stays visible.", {
+        size: 9,
+        fill: INK.graphiteSoft,
+        tag: "note:not-to-scale",
+      }),
+    );
   }
 
   return {

@@ -13,10 +13,31 @@ export interface Paint {
   tag?: string;
 }
 
-export interface RectShape extends Paint { type: "rect"; x: number; y: number; w: number; h: number }
-export interface LineShape extends Paint { type: "line"; x1: number; y1: number; x2: number; y2: number }
-export interface PolylineShape extends Paint { type: "polyline"; points: [number, number][]; closed?: boolean }
-export interface CircleShape extends Paint { type: "circle"; cx: number; cy: number; r: number }
+export interface RectShape extends Paint {
+  type: "rect";
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+export interface LineShape extends Paint {
+  type: "line";
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+}
+export interface PolylineShape extends Paint {
+  type: "polyline";
+  points: [number, number][];
+  closed?: boolean;
+}
+export interface CircleShape extends Paint {
+  type: "circle";
+  cx: number;
+  cy: number;
+  r: number;
+}
 
 export type TextAnchor = "start" | "middle" | "end";
 export type FontFace = "sans" | "serif";

@@ -44,17 +44,42 @@ const hashOptional = (h: number, s: string | undefined): number => (s === undefi
 /** A hash of the assembly's content, or null where any field has an unexpected type (then the
  * input goes straight to resolveAssembly, which says what is wrong with it). */
 function contentHash(assembly: AssemblyInput): number | null {
-  if (assembly === null || typeof assembly !== "object" || typeof assembly.kind !== "string" || !Array.isArray(assembly.layers)) return null;
+  if (
+    assembly === null ||
+    typeof assembly !== "object" ||
+    typeof assembly.kind !== "string" ||
+    !Array.isArray(assembly.layers)
+  )
+    return null;
   let h = hashString(0x811c9dc5, assembly.kind);
   for (const l of assembly.layers as readonly LayerInput[]) {
-    if (l === null || typeof l !== "object" || typeof l.role !== "string" || typeof l.material !== "string" || typeof l.thickness_mm !== "number") return null;
-    if (!isOptionalString(l.joints) || !isOptionalString(l.adhesive) || !isOptionalString(l.exposure) || !isOptionalString(l.note)) return null;
+    if (
+      l === null ||
+      typeof l !== "object" ||
+      typeof l.role !== "string" ||
+      typeof l.material !== "string" ||
+      typeof l.thickness_mm !== "number"
+    )
+      return null;
+    if (
+      !isOptionalString(l.joints) ||
+      !isOptionalString(l.adhesive) ||
+      !isOptionalString(l.exposure) ||
+      !isOptionalString(l.note)
+    )
+      return null;
     if (l.exposed !== undefined && typeof l.exposed !== "boolean") return null;
     h = hashNumber(hashString(hashString(h, l.role), l.material), l.thickness_mm);
     h = hashOptional(hashOptional(hashOptional(hashOptional(h, l.joints), l.adhesive), l.exposure), l.note);
     h = mix(h, l.exposed === undefined ? 2 : l.exposed ? 1 : 0);
     if (l.framing !== undefined) {
-      if (l.framing === null || typeof l.framing !== "object" || typeof l.framing.material !== "string" || typeof l.framing.fraction !== "number") return null;
+      if (
+        l.framing === null ||
+        typeof l.framing !== "object" ||
+        typeof l.framing.material !== "string" ||
+        typeof l.framing.fraction !== "number"
+      )
+        return null;
       h = hashNumber(hashString(h, l.framing.material), l.framing.fraction);
     } else h = mix(h, 0x1d);
   }
@@ -74,11 +99,25 @@ function sameContent(assembly: AssemblyInput, entry: AnalysedAssembly): boolean 
     const l = layers[i];
     const h = held[i].input;
     if (l === null || typeof l !== "object") return false;
-    if (l.role !== h.role || l.material !== h.material || l.thickness_mm !== h.thickness_mm || l.joints !== h.joints || l.adhesive !== h.adhesive ||
-      l.exposed !== h.exposed || l.exposure !== h.exposure || l.note !== h.note) return false;
+    if (
+      l.role !== h.role ||
+      l.material !== h.material ||
+      l.thickness_mm !== h.thickness_mm ||
+      l.joints !== h.joints ||
+      l.adhesive !== h.adhesive ||
+      l.exposed !== h.exposed ||
+      l.exposure !== h.exposure ||
+      l.note !== h.note
+    )
+      return false;
     if (l.framing === undefined || h.framing === undefined) {
       if (l.framing !== h.framing) return false;
-    } else if (l.framing === null || l.framing.material !== h.framing.material || l.framing.fraction !== h.framing.fraction) return false;
+    } else if (
+      l.framing === null ||
+      l.framing.material !== h.framing.material ||
+      l.framing.fraction !== h.framing.fraction
+    )
+      return false;
   }
   return true;
 }
@@ -94,7 +133,10 @@ export function analyseAssembly(assembly: AssemblyInput, materials: MaterialLibr
   const h = contentHash(assembly);
   if (h === null) return analyse(assembly, materials);
   let cache = caches.get(materials);
-  if (!cache) { cache = { entries: new Map(), size: 0, seenOnce: new Set() }; caches.set(materials, cache); }
+  if (!cache) {
+    cache = { entries: new Map(), size: 0, seenOnce: new Set() };
+    caches.set(materials, cache);
+  }
   const bucket = cache.entries.get(h);
   const hit = bucket?.find((e) => sameContent(assembly, e));
   if (hit) {
@@ -109,9 +151,13 @@ export function analyseAssembly(assembly: AssemblyInput, materials: MaterialLibr
   const fresh = analyse(assembly, materials);
   // The resolved layers keep the caller's inputs: copy them, so later edits by the caller cannot
   // change what the cache holds.
-  for (const l of fresh.assembly.layers) l.input = { ...l.input, ...(l.input.framing ? { framing: { ...l.input.framing } } : {}) };
+  for (const l of fresh.assembly.layers)
+    l.input = { ...l.input, ...(l.input.framing ? { framing: { ...l.input.framing } } : {}) };
   // Full: start again (simpler than recency order, and a detail library is far below the limit).
-  if (cache.size >= MAX_ENTRIES) { cache.entries.clear(); cache.size = 0; }
+  if (cache.size >= MAX_ENTRIES) {
+    cache.entries.clear();
+    cache.size = 0;
+  }
   if (bucket) bucket.push(fresh);
   else cache.entries.set(h, [fresh]);
   cache.size++;

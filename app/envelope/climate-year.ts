@@ -3,7 +3,20 @@
 import { SiteCheckInputError } from "./errors";
 import type { ClimateYear, ClimateYearInput, MonthClimate, MonthInput, ResolvedSite } from "./types";
 
-export const MONTH_NAMES = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"] as const;
+export const MONTH_NAMES = [
+  "Jan",
+  "Feb",
+  "Mar",
+  "Apr",
+  "May",
+  "Jun",
+  "Jul",
+  "Aug",
+  "Sep",
+  "Oct",
+  "Nov",
+  "Dec",
+] as const;
 /** Days per month of a common year (the balance runs over 365 days). */
 export const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31] as const;
 
@@ -22,10 +35,16 @@ export class ClimateCsvError extends SiteCheckInputError {
 
 function checkMonth(t: unknown, rh: unknown, field: string): { t_c: number; rh: number } {
   if (typeof t !== "number" || !Number.isFinite(t) || t < T_MIN || t > T_MAX) {
-    throw new SiteCheckInputError(`${field}.t_c`, `monthly mean temperature must be a number from ${T_MIN} to ${T_MAX} °C (got ${String(t)})`);
+    throw new SiteCheckInputError(
+      `${field}.t_c`,
+      `monthly mean temperature must be a number from ${T_MIN} to ${T_MAX} °C (got ${String(t)})`,
+    );
   }
   if (typeof rh !== "number" || !Number.isFinite(rh) || rh <= 0 || rh > 100) {
-    throw new SiteCheckInputError(`${field}.rh`, `monthly mean relative humidity must be a number above 0 and at most 100 % (got ${String(rh)})`);
+    throw new SiteCheckInputError(
+      `${field}.rh`,
+      `monthly mean relative humidity must be a number above 0 and at most 100 % (got ${String(rh)})`,
+    );
   }
   return { t_c: t, rh };
 }
@@ -33,7 +52,10 @@ function checkMonth(t: unknown, rh: unknown, field: string): { t_c: number; rh: 
 /** Twelve typed months, January first. */
 export function validateMonths(rows: unknown, field = "year.months"): MonthClimate[] {
   if (!Array.isArray(rows) || rows.length !== 12) {
-    throw new SiteCheckInputError(field, `give exactly 12 months, January to December (got ${Array.isArray(rows) ? rows.length : "none"})`);
+    throw new SiteCheckInputError(
+      field,
+      `give exactly 12 months, January to December (got ${Array.isArray(rows) ? rows.length : "none"})`,
+    );
   }
   return rows.map((row: unknown, i) => {
     const r = (row ?? {}) as Partial<MonthInput>;
@@ -62,7 +84,8 @@ function parseNumber(text: string): number | null {
  * or Jan–Dec, each once, any order). Blank lines and lines starting with # are skipped. Errors name
  * the line. */
 export function parseClimateCsv(text: string): MonthClimate[] {
-  if (typeof text !== "string" || text.trim() === "") throw new ClimateCsvError(null, "the file is empty; it needs 12 rows: month,temperature_c,rh_percent");
+  if (typeof text !== "string" || text.trim() === "")
+    throw new ClimateCsvError(null, "the file is empty; it needs 12 rows: month,temperature_c,rh_percent");
   const lines = text.replace(/^\uFEFF/, "").split(/\r\n|\r|\n/);
   const byMonth = new Map<number, MonthClimate>();
   let seenData = false;
@@ -73,18 +96,25 @@ export function parseClimateCsv(text: string): MonthClimate[] {
     const cells = raw.split(",").map((c) => c.trim());
     if (!seenData && cells.map((c) => c.toLowerCase()).join(",") === HEADER.join(",")) continue;
     seenData = true;
-    if (cells.length !== 3) throw new ClimateCsvError(line, `expected 3 values (month,temperature_c,rh_percent), found ${cells.length}`);
+    if (cells.length !== 3)
+      throw new ClimateCsvError(line, `expected 3 values (month,temperature_c,rh_percent), found ${cells.length}`);
     const month = monthNumber(cells[0]);
     if (month === null) throw new ClimateCsvError(line, `"${cells[0]}" is not a month; use 1–12 or Jan–Dec`);
     if (byMonth.has(month)) throw new ClimateCsvError(line, `${MONTH_NAMES[month - 1]} appears twice`);
     const t = parseNumber(cells[1]);
-    if (t === null || t < T_MIN || t > T_MAX) throw new ClimateCsvError(line, `temperature "${cells[1]}" must be a number from ${T_MIN} to ${T_MAX} °C`);
+    if (t === null || t < T_MIN || t > T_MAX)
+      throw new ClimateCsvError(line, `temperature "${cells[1]}" must be a number from ${T_MIN} to ${T_MAX} °C`);
     const rh = parseNumber(cells[2]);
-    if (rh === null || rh <= 0 || rh > 100) throw new ClimateCsvError(line, `relative humidity "${cells[2]}" must be a number above 0 and at most 100 (percent)`);
+    if (rh === null || rh <= 0 || rh > 100)
+      throw new ClimateCsvError(
+        line,
+        `relative humidity "${cells[2]}" must be a number above 0 and at most 100 (percent)`,
+      );
     byMonth.set(month, { month, name: MONTH_NAMES[month - 1], t_c: t, rh });
   }
   const missing = MONTH_NAMES.filter((_, i) => !byMonth.has(i + 1));
-  if (missing.length) throw new ClimateCsvError(null, `missing ${missing.join(", ")}: the file needs one row for each of the 12 months`);
+  if (missing.length)
+    throw new ClimateCsvError(null, `missing ${missing.join(", ")}: the file needs one row for each of the 12 months`);
   return MONTH_NAMES.map((_, i) => byMonth.get(i + 1) as MonthClimate);
 }
 
@@ -145,7 +175,8 @@ function meanFor(amplitude: number, target: number, kind: "hdd18" | "cdd10"): nu
     const mid = (lo + hi) / 2;
     const dd = cosineDegreeDays(mid, amplitude, kind);
     const tooCold = kind === "hdd18" ? dd > target : dd < target;
-    if (tooCold) lo = mid; else hi = mid;
+    if (tooCold) lo = mid;
+    else hi = mid;
   }
   return (lo + hi) / 2;
 }
@@ -164,7 +195,8 @@ function fitBoth(hdd18: number, cdd10: number): { mean: number; amplitude: numbe
       let hi = a;
       for (let k = 0; k < 24; k++) {
         const mid = (lo + hi) / 2;
-        if (Math.sign(miss(mid)) === Math.sign(prev.m)) lo = mid; else hi = mid;
+        if (Math.sign(miss(mid)) === Math.sign(prev.m)) lo = mid;
+        else hi = mid;
       }
       const amplitude = (lo + hi) / 2;
       return { mean: meanFor(amplitude, hdd18, "hdd18"), amplitude };
@@ -222,7 +254,9 @@ function fitYear(site: ResolvedSite): ClimateYear {
   const rhW = site.winter.rh;
   const rhS = site.summer.rh;
   const months: MonthClimate[] = temps.map((t, i) => ({
-    month: i + 1, name: MONTH_NAMES[i], t_c: round1(t),
+    month: i + 1,
+    name: MONTH_NAMES[i],
+    t_c: round1(t),
     rh: round1(Math.min(100, Math.max(1, rhW + ((rhS - rhW) * (1 - Math.cos((2 * Math.PI * i) / 12))) / 2))),
   }));
   return {

@@ -6,8 +6,14 @@ import { checkIndoorMethod, DEFAULT_INDOOR_METHOD, indoorBasis, indoorHumidity }
 import { NBC_EDITION, NBC_ZONE_BANDS, PROVINCE_REFERENCE } from "./nbc-tables";
 import {
   PROVINCES,
-  type CanadianSite, type ClimateNormals, type CodeEdition, type MoistureRegime, type NbcZone, type ResolvedSite,
-  type SiteInput, type ZoneId,
+  type CanadianSite,
+  type ClimateNormals,
+  type CodeEdition,
+  type MoistureRegime,
+  type NbcZone,
+  type ResolvedSite,
+  type SiteInput,
+  type ZoneId,
 } from "./types";
 import { degreeDaysFToC } from "./units";
 import { CLIMATE_ZONE_IDS } from "~/vocabulary/climate-zones";
@@ -71,7 +77,10 @@ export function parseZone(zone: string | number, moisture?: MoistureRegime): Zon
   }
   const id = makeZoneId(n, regime);
   if (!id) {
-    throw new SiteCheckInputError("zone", `zone ${n}${regime ?? ""} does not exist; marine (C) applies to zones 3–5 only`);
+    throw new SiteCheckInputError(
+      "zone",
+      `zone ${n}${regime ?? ""} does not exist; marine (C) applies to zones 3–5 only`,
+    );
   }
   return id;
 }
@@ -105,15 +114,24 @@ export function resolveCanada(site: SiteInput): CanadianSite | null {
     throw new SiteCheckInputError("country", `country must be "US" or "CA" (got "${String(site.country)}")`);
   }
   if (site.province !== undefined && !(PROVINCES as readonly string[]).includes(site.province)) {
-    throw new SiteCheckInputError("province", `"${String(site.province)}" is not a province or territory code; use one of ${PROVINCES.join(", ")}`);
+    throw new SiteCheckInputError(
+      "province",
+      `"${String(site.province)}" is not a province or territory code; use one of ${PROVINCES.join(", ")}`,
+    );
   }
   if (site.nbcZone !== undefined && !(site.nbcZone in NBC_ZONE_BANDS)) {
-    throw new SiteCheckInputError("nbcZone", `"${String(site.nbcZone)}" is not an NBC climate zone; use 4, 5, 6, 7A, 7B or 8`);
+    throw new SiteCheckInputError(
+      "nbcZone",
+      `"${String(site.nbcZone)}" is not an NBC climate zone; use 4, 5, 6, 7A, 7B or 8`,
+    );
   }
   const canadian = site.country === "CA" || site.province !== undefined || site.nbcZone !== undefined;
   if (!canadian) return null;
   if (site.country === "US") {
-    throw new SiteCheckInputError("country", "a province or NBC zone was given with country \"US\"; use \"CA\" for a Canadian site");
+    throw new SiteCheckInputError(
+      "country",
+      'a province or NBC zone was given with country "US"; use "CA" for a Canadian site',
+    );
   }
   const given = site.hdd18 ?? (site.hdd65 !== undefined ? degreeDaysFToC(site.hdd65) : undefined);
   const province = site.province ?? null;
@@ -131,7 +149,10 @@ export function resolveCanada(site: SiteInput): CanadianSite | null {
     place = PROVINCE_REFERENCE[province].place;
     hddSource = "province";
   } else {
-    throw new SiteCheckInputError("hdd18", "a Canadian site needs a province, an NBC zone or heating degree-days below 18 °C");
+    throw new SiteCheckInputError(
+      "hdd18",
+      "a Canadian site needs a province, an NBC zone or heating degree-days below 18 °C",
+    );
   }
   const nbcZone = site.nbcZone ?? nbcZoneFromHdd(hdd18);
   return { province, nbcZone, hdd18, hddSource, place, edition: NBC_EDITION };
@@ -168,11 +189,24 @@ export function resolveSite(input: SiteInput): ResolvedSite {
       site = { ...site, moisture: "A" };
       defaulted.push("moisture");
     }
-    if (site.nbcZone !== undefined && site.hdd18 !== undefined && canada.hddSource === "given" && nbcZoneFromHdd(site.hdd18) !== site.nbcZone) {
-      notes.push(`The degree-days given point to NBC zone ${nbcZoneFromHdd(site.hdd18)}; NBC zone ${site.nbcZone} as given is used.`);
+    if (
+      site.nbcZone !== undefined &&
+      site.hdd18 !== undefined &&
+      canada.hddSource === "given" &&
+      nbcZoneFromHdd(site.hdd18) !== site.nbcZone
+    ) {
+      notes.push(
+        `The degree-days given point to NBC zone ${nbcZoneFromHdd(site.hdd18)}; NBC zone ${site.nbcZone} as given is used.`,
+      );
     }
-    if (canada.hddSource === "province") notes.push(`Heating degree-days ${canada.hdd18} are ${canada.place}'s (NBC Appendix C, from memory); enter the site's own for a site elsewhere in the province.`);
-    if (canada.hddSource === "nbc-zone") notes.push(`Heating degree-days ${canada.hdd18} are the cold end of NBC zone ${canada.nbcZone}; enter the site's own.`);
+    if (canada.hddSource === "province")
+      notes.push(
+        `Heating degree-days ${canada.hdd18} are ${canada.place}'s (NBC Appendix C, from memory); enter the site's own for a site elsewhere in the province.`,
+      );
+    if (canada.hddSource === "nbc-zone")
+      notes.push(
+        `Heating degree-days ${canada.hdd18} are the cold end of NBC zone ${canada.nbcZone}; enter the site's own.`,
+      );
   }
   checkNumber(site.hdd18, "hdd18", 0, 20000, "heating degree-days (18 °C base)");
   checkNumber(site.cdd10, "cdd10", 0, 12000, "cooling degree-days (10 °C base)");
@@ -188,7 +222,9 @@ export function resolveSite(input: SiteInput): ResolvedSite {
   if (site.normals) {
     const fromNormals = moistureRegimeFromNormals(site.normals);
     if (moisture && moisture !== fromNormals) {
-      notes.push(`Moisture regime ${moisture} was given; the climate normals indicate ${fromNormals}. The given regime is used.`);
+      notes.push(
+        `Moisture regime ${moisture} was given; the climate normals indicate ${fromNormals}. The given regime is used.`,
+      );
     }
     moisture = moisture ?? fromNormals;
   }
@@ -207,19 +243,28 @@ export function resolveSite(input: SiteInput): ResolvedSite {
   } else if (hdd18 !== undefined) {
     const n = zoneNumberFromDegreeDays(hdd18, cdd10 ?? 0);
     if (cdd10 === undefined && hdd18 <= 2000) {
-      throw new SiteCheckInputError("cdd10", "with heating degree-days of 2000 (18 °C base) or less, cooling degree-days are needed to tell zones 0–3 apart");
+      throw new SiteCheckInputError(
+        "cdd10",
+        "with heating degree-days of 2000 (18 °C base) or less, cooling degree-days are needed to tell zones 0–3 apart",
+      );
     }
     if (n < 7 && !moisture) {
-      throw new SiteCheckInputError("moisture", `degree-days give zone ${n}; add a moisture regime (A, B or C) or climate normals`);
+      throw new SiteCheckInputError(
+        "moisture",
+        `degree-days give zone ${n}; add a moisture regime (A, B or C) or climate normals`,
+      );
     }
     const id = makeZoneId(n, n < 7 ? (moisture ?? null) : null);
     if (!id) {
-      throw new SiteCheckInputError("moisture", `zone ${n}${moisture ?? ""} does not exist; marine (C) applies to zones 3–5 only`);
+      throw new SiteCheckInputError(
+        "moisture",
+        `zone ${n}${moisture ?? ""} does not exist; marine (C) applies to zones 3–5 only`,
+      );
     }
     zone = id;
     zoneSource = "degree-days";
   } else {
-    throw new SiteCheckInputError("zone", "give a climate zone (e.g. \"5A\") or heating and cooling degree-days");
+    throw new SiteCheckInputError("zone", 'give a climate zone (e.g. "5A") or heating and cooling degree-days');
   }
 
   const zn = zoneNumberOf(zone);
@@ -234,7 +279,8 @@ export function resolveSite(input: SiteInput): ResolvedSite {
   checkNumber(site.indoor?.rh, "indoor.rh", 0, 100, "indoor RH (%)");
   checkNumber(site.indoor?.summer_t_c, "indoor.summer_t_c", 5, 35, "indoor summer temperature (°C)");
   checkNumber(site.indoor?.summer_rh, "indoor.summer_rh", 0, 100, "indoor summer RH (%)");
-  const indoorMethod = site.indoor?.method === undefined ? DEFAULT_INDOOR_METHOD : checkIndoorMethod(site.indoor.method);
+  const indoorMethod =
+    site.indoor?.method === undefined ? DEFAULT_INDOOR_METHOD : checkIndoorMethod(site.indoor.method);
   if (site.edition !== undefined && site.edition !== "IECC/IRC 2021" && site.edition !== "IECC/IRC 2018") {
     throw new SiteCheckInputError("edition", `code edition must be "IECC/IRC 2021" or "IECC/IRC 2018"`);
   }
@@ -264,7 +310,12 @@ export function resolveSite(input: SiteInput): ResolvedSite {
     summer: {
       t_c: summer_t_c,
       rh: pick(defaulted, site.summer?.rh, SUMMER_RH[regime ?? "none"], "summer.rh"),
-      cladding_t_c: pick(defaulted, site.summer?.cladding_t_c, summer_t_c + CLADDING_SOLAR_RISE_K, "summer.cladding_t_c"),
+      cladding_t_c: pick(
+        defaulted,
+        site.summer?.cladding_t_c,
+        summer_t_c + CLADDING_SOLAR_RISE_K,
+        "summer.cladding_t_c",
+      ),
     },
     ground_t_c: pick(defaulted, site.ground_t_c, GROUND_T_C[zn], "ground_t_c"),
     indoor: {
@@ -273,7 +324,11 @@ export function resolveSite(input: SiteInput): ResolvedSite {
       summer_t_c: pick(defaulted, site.indoor?.summer_t_c, DEFAULT_INDOOR.summer_t_c, "indoor.summer_t_c"),
       summer_rh: pick(defaulted, site.indoor?.summer_rh, DEFAULT_INDOOR.summer_rh, "indoor.summer_rh"),
       method: site.indoor?.rh !== undefined ? "given" : indoorMethod,
-      basis: indoorBasis(site.indoor?.rh !== undefined ? "given" : indoorMethod, { t_c: indoor_t_c, rh: indoorRh }, winter_t_c),
+      basis: indoorBasis(
+        site.indoor?.rh !== undefined ? "given" : indoorMethod,
+        { t_c: indoor_t_c, rh: indoorRh },
+        winter_t_c,
+      ),
     },
     edition,
     country: canada ? "CA" : "US",

@@ -40,19 +40,54 @@ export interface IndoorMethodInfo {
 const FROM_MEMORY = "breakpoints from memory, verify against the printed standard";
 
 export const INDOOR_METHOD_INFO: Readonly<Record<IndoorMethodId, IndoorMethodInfo>> = {
-  "ashrae-160-simplified": { id: "ashrae-160-simplified", label: "ASHRAE 160 simplified method (40 % at −10 °C → 70 % at 20 °C)", source: `ASHRAE Standard 160-2016 §4.3.1.1; ${FROM_MEMORY}` },
-  "en-15026-normal": { id: "en-15026-normal", label: "EN 15026 normal occupancy (30 % at −10 °C → 60 % at 20 °C)", source: `EN 15026:2007 Annex C; ${FROM_MEMORY}` },
-  "en-15026-high": { id: "en-15026-high", label: "EN 15026 high occupancy (40 % at −10 °C → 70 % at 20 °C)", source: `EN 15026:2007 Annex C; ${FROM_MEMORY}` },
-  "iso-13788-class-1": { id: "iso-13788-class-1", label: "ISO 13788 humidity class 1 (unoccupied, dry storage)", source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}` },
-  "iso-13788-class-2": { id: "iso-13788-class-2", label: "ISO 13788 humidity class 2 (offices, shops)", source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}` },
-  "iso-13788-class-3": { id: "iso-13788-class-3", label: "ISO 13788 humidity class 3 (dwellings with low occupancy)", source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}` },
-  "iso-13788-class-4": { id: "iso-13788-class-4", label: "ISO 13788 humidity class 4 (dwellings with high occupancy, sports halls, kitchens)", source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}` },
-  "iso-13788-class-5": { id: "iso-13788-class-5", label: "ISO 13788 humidity class 5 (special buildings: laundries, pools)", source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}` },
+  "ashrae-160-simplified": {
+    id: "ashrae-160-simplified",
+    label: "ASHRAE 160 simplified method (40 % at −10 °C → 70 % at 20 °C)",
+    source: `ASHRAE Standard 160-2016 §4.3.1.1; ${FROM_MEMORY}`,
+  },
+  "en-15026-normal": {
+    id: "en-15026-normal",
+    label: "EN 15026 normal occupancy (30 % at −10 °C → 60 % at 20 °C)",
+    source: `EN 15026:2007 Annex C; ${FROM_MEMORY}`,
+  },
+  "en-15026-high": {
+    id: "en-15026-high",
+    label: "EN 15026 high occupancy (40 % at −10 °C → 70 % at 20 °C)",
+    source: `EN 15026:2007 Annex C; ${FROM_MEMORY}`,
+  },
+  "iso-13788-class-1": {
+    id: "iso-13788-class-1",
+    label: "ISO 13788 humidity class 1 (unoccupied, dry storage)",
+    source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}`,
+  },
+  "iso-13788-class-2": {
+    id: "iso-13788-class-2",
+    label: "ISO 13788 humidity class 2 (offices, shops)",
+    source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}`,
+  },
+  "iso-13788-class-3": {
+    id: "iso-13788-class-3",
+    label: "ISO 13788 humidity class 3 (dwellings with low occupancy)",
+    source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}`,
+  },
+  "iso-13788-class-4": {
+    id: "iso-13788-class-4",
+    label: "ISO 13788 humidity class 4 (dwellings with high occupancy, sports halls, kitchens)",
+    source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}`,
+  },
+  "iso-13788-class-5": {
+    id: "iso-13788-class-5",
+    label: "ISO 13788 humidity class 5 (special buildings: laundries, pools)",
+    source: `ISO 13788:2012 Annex A; ${FROM_MEMORY}`,
+  },
 };
 
 /** The choices a form or the API can offer, default first. */
 export function indoorMethodChoices(): IndoorMethodInfo[] {
-  return [INDOOR_METHOD_INFO[DEFAULT_INDOOR_METHOD], ...INDOOR_METHODS.filter((m) => m !== DEFAULT_INDOOR_METHOD).map((m) => INDOOR_METHOD_INFO[m])];
+  return [
+    INDOOR_METHOD_INFO[DEFAULT_INDOOR_METHOD],
+    ...INDOOR_METHODS.filter((m) => m !== DEFAULT_INDOOR_METHOD).map((m) => INDOOR_METHOD_INFO[m]),
+  ];
 }
 
 export function isIndoorMethod(value: unknown): value is IndoorMethodId {
@@ -61,7 +96,10 @@ export function isIndoorMethod(value: unknown): value is IndoorMethodId {
 
 export function checkIndoorMethod(value: unknown, field = "indoor.method"): IndoorMethodId {
   if (!isIndoorMethod(value)) {
-    throw new SiteCheckInputError(field, `unknown indoor humidity method "${String(value)}"; use one of ${INDOOR_METHODS.join(", ")}`);
+    throw new SiteCheckInputError(
+      field,
+      `unknown indoor humidity method "${String(value)}"; use one of ${INDOOR_METHODS.join(", ")}`,
+    );
   }
   return value;
 }
@@ -77,7 +115,11 @@ const ISO_CLASS_DP_PA = [270, 540, 810, 1080, 1350] as const;
 /** ISO 13788 design safety factor on the class excess. */
 const ISO_SAFETY_FACTOR = 1.1;
 
-export interface IndoorState { t_c: number; rh: number; p_v_pa: number }
+export interface IndoorState {
+  t_c: number;
+  rh: number;
+  p_v_pa: number;
+}
 
 /** Indoor air temperature for a given outdoor temperature: heated to the heating set point, cooled
  * to the cooling set point, free-floating with outdoors between them. */
@@ -86,7 +128,11 @@ export function indoorTemperature(outdoorC: number, heating_t_c: number, cooling
 }
 
 /** Indoor design RH (percent) and vapour pressure by a method, at an outdoor state. */
-export function indoorHumidity(method: IndoorMethodId, outdoor: { t_c: number; rh: number }, indoor_t_c: number): IndoorState {
+export function indoorHumidity(
+  method: IndoorMethodId,
+  outdoor: { t_c: number; rh: number },
+  indoor_t_c: number,
+): IndoorState {
   const pSatIn = saturationPressure(indoor_t_c);
   let rh: number;
   switch (method) {
@@ -111,7 +157,11 @@ export function indoorHumidity(method: IndoorMethodId, outdoor: { t_c: number; r
 const fmt = (v: number): string => (Math.round(v * 10) / 10).toString().replace("-", "−");
 
 /** The sentence a page, the API and the PDF show for the indoor condition a case used (SI). */
-export function indoorBasis(method: IndoorMethodId | "given", indoor: { t_c: number; rh: number }, outdoorC: number): string {
+export function indoorBasis(
+  method: IndoorMethodId | "given",
+  indoor: { t_c: number; rh: number },
+  outdoorC: number,
+): string {
   const at = `indoor ${fmt(indoor.t_c)} °C / ${fmt(indoor.rh)} % RH`;
   if (method === "given") return `${at}, as entered`;
   const info = INDOOR_METHOD_INFO[method];

@@ -38,7 +38,10 @@ export function resolveAssembly(assembly: AssemblyInput, library: MaterialLibrar
     throw new SiteCheckInputError("assembly", "an assembly with a kind and layers is required");
   }
   if (!(ASSEMBLY_KINDS as readonly string[]).includes(assembly.kind)) {
-    throw new SiteCheckInputError("kind", `unknown assembly kind "${String(assembly.kind)}"; use one of ${ASSEMBLY_KINDS.join(", ")}`);
+    throw new SiteCheckInputError(
+      "kind",
+      `unknown assembly kind "${String(assembly.kind)}"; use one of ${ASSEMBLY_KINDS.join(", ")}`,
+    );
   }
   if (!Array.isArray(assembly.layers) || assembly.layers.length === 0) {
     throw new SiteCheckInputError("layers", "the assembly has no layers; add at least one");
@@ -54,7 +57,10 @@ export function resolveAssembly(assembly: AssemblyInput, library: MaterialLibrar
       throw new SiteCheckInputError(`${at}.thickness_mm`, `thickness must be a number above 0 mm (got ${String(t)})`);
     }
     if (t > MAX_THICKNESS_MM) {
-      throw new SiteCheckInputError(`${at}.thickness_mm`, `thickness ${t} mm is over ${MAX_THICKNESS_MM} mm; check the units (millimetres)`);
+      throw new SiteCheckInputError(
+        `${at}.thickness_mm`,
+        `thickness ${t} mm is over ${MAX_THICKNESS_MM} mm; check the units (millimetres)`,
+      );
     }
     if (input.joints !== undefined && !JOINTS.includes(input.joints)) {
       throw new SiteCheckInputError(`${at}.joints`, `joints must be one of ${JOINTS.join(", ")}`);
@@ -69,7 +75,10 @@ export function resolveAssembly(assembly: AssemblyInput, library: MaterialLibrar
     if (input.framing !== undefined) {
       const f = input.framing.fraction;
       if (typeof f !== "number" || !Number.isFinite(f) || f < 0 || f > 1) {
-        throw new SiteCheckInputError(`${at}.framing.fraction`, `framing fraction must be from 0 to 1 (e.g. 0.23 for 2×6 at 16 in), got ${String(f)}`);
+        throw new SiteCheckInputError(
+          `${at}.framing.fraction`,
+          `framing fraction must be from 0 to 1 (e.g. 0.23 for 2×6 at 16 in), got ${String(f)}`,
+        );
       }
       framing = { material: findMaterial(library, input.framing.material, `${at}.framing.material`), fraction: f };
     }
@@ -135,7 +144,10 @@ const lowerNames = new WeakMap<Material, string>();
 /** Material name in lower case for running text (cached: the library's materials are reused). */
 export function lowerName(m: Material): string {
   let name = lowerNames.get(m);
-  if (name === undefined) { name = m.name.toLowerCase(); lowerNames.set(m, name); }
+  if (name === undefined) {
+    name = m.name.toLowerCase();
+    lowerNames.set(m, name);
+  }
   return name;
 }
 

@@ -4,9 +4,24 @@
 import { z } from "zod";
 
 export const MATERIAL_FAMILIES = [
-  "cladding", "masonry", "concrete", "wood-panel", "lumber", "gypsum", "foam-board", "spray-foam",
-  "fibrous-insulation", "loose-fill", "membrane", "sheet-retarder", "coating", "air-space", "drainage",
-  "aggregate", "metal", "roofing",
+  "cladding",
+  "masonry",
+  "concrete",
+  "wood-panel",
+  "lumber",
+  "gypsum",
+  "foam-board",
+  "spray-foam",
+  "fibrous-insulation",
+  "loose-fill",
+  "membrane",
+  "sheet-retarder",
+  "coating",
+  "air-space",
+  "drainage",
+  "aggregate",
+  "metal",
+  "roofing",
 ] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 
@@ -97,5 +112,5 @@ export function buildMaterialLibrary(entries: readonly unknown[]): ReadonlyMap<s
 export function lookupMaterial(library: MaterialLibrary, slug: string): Material | undefined {
   if (library instanceof Map) return library.get(slug);
   const record = library as Readonly<Record<string, Material>>;
-  return  Object.hasOwn(record, slug) ? record[slug] : undefined;
+  return Object.hasOwn(record, slug) ? record[slug] : undefined;
 }

@@ -20,11 +20,23 @@
 import { indoorHumidity, indoorTemperature } from "./indoor-climate";
 import { MONTH_DAYS } from "./climate-year";
 import {
-  hasTemperatureDependentConductivity, lowerName, materialRsi, materialRsiAt, ventedCavityIndex, type ResolvedAssembly,
+  hasTemperatureDependentConductivity,
+  lowerName,
+  materialRsi,
+  materialRsiAt,
+  ventedCavityIndex,
+  type ResolvedAssembly,
 } from "./layers";
 import { dewPointFromVapourPressure, saturationPressure } from "./psychrometrics";
 import { filmsFor, isBelowGrade, stillAirFilm } from "./thermal";
-import type { ClimateYear, InterfaceWater, ResolvedSite, SeasonalMonth, SeasonalResult, SurfaceMouldCheck } from "./types";
+import type {
+  ClimateYear,
+  InterfaceWater,
+  ResolvedSite,
+  SeasonalMonth,
+  SeasonalResult,
+  SurfaceMouldCheck,
+} from "./types";
 import { isRhDependent, layerPermeance } from "./vapour";
 
 const NG_TO_KG = 1e-12;
@@ -85,7 +97,18 @@ function buildStack(a: ResolvedAssembly): Stack {
     if (hasTemperatureDependentConductivity(l.material)) tempDependent = true;
     z[i] = 1 / (layerPermeance(l) * NG_TO_KG);
   }
-  return { n, start, extFilm, intFilm: films.interior.rsi, fixedSurface: below, r, tempDependent, dependent, anyDependent: dependent.includes(true), z };
+  return {
+    n,
+    start,
+    extFilm,
+    intFilm: films.interior.rsi,
+    fixedSurface: below,
+    r,
+    tempDependent,
+    dependent,
+    anyDependent: dependent.includes(true),
+    z,
+  };
 }
 
 /** One solved month: temperatures, saturation, layer vapour resistances (settled), vapour pressure
@@ -103,8 +126,14 @@ interface Solved {
 
 function newSolved(n: number): Solved {
   return {
-    t: new Float64Array(n + 1), pSat: new Float64Array(n + 1), z: new Float64Array(n), zCum: new Float64Array(n + 1),
-    p: new Float64Array(n + 1), rate: new Float64Array(n + 1), pExt: 0, pInt: 0,
+    t: new Float64Array(n + 1),
+    pSat: new Float64Array(n + 1),
+    z: new Float64Array(n),
+    zCum: new Float64Array(n + 1),
+    p: new Float64Array(n + 1),
+    rate: new Float64Array(n + 1),
+    pExt: 0,
+    pInt: 0,
   };
 }
 
@@ -128,18 +157,28 @@ function scratchFor(n: number): Scratch {
   if (!pool) {
     pool = {
       months: Array.from({ length: 13 }, () => newSolved(n)),
-      held: new Float64Array(n + 1), heldBy: new Float64Array(12 * (n + 1)), rateBy: new Float64Array(12 * (n + 1)),
-      condensed: new Float64Array(12), evaporated: new Float64Array(12), total: new Float64Array(12),
-      wet: new Uint8Array(n + 1), dry: new Uint8Array(n + 1),
+      held: new Float64Array(n + 1),
+      heldBy: new Float64Array(12 * (n + 1)),
+      rateBy: new Float64Array(12 * (n + 1)),
+      condensed: new Float64Array(12),
+      evaporated: new Float64Array(12),
+      total: new Float64Array(12),
+      wet: new Uint8Array(n + 1),
+      dry: new Uint8Array(n + 1),
     };
     pools.set(n, pool);
   }
-  for (const a of [pool.held, pool.heldBy, pool.rateBy, pool.condensed, pool.evaporated, pool.total, pool.wet]) a.fill(0);
+  for (const a of [pool.held, pool.heldBy, pool.rateBy, pool.condensed, pool.evaporated, pool.total, pool.wet])
+    a.fill(0);
   return pool;
 }
 
 function copySolved(from: Solved, to: Solved): void {
-  to.t.set(from.t); to.pSat.set(from.pSat); to.z.set(from.z); to.pExt = from.pExt; to.pInt = from.pInt;
+  to.t.set(from.t);
+  to.pSat.set(from.pSat);
+  to.z.set(from.z);
+  to.pExt = from.pExt;
+  to.pInt = from.pInt;
 }
 
 /** Temperatures at the n + 1 interfaces (clear-cavity path); insulations whose conductivity
@@ -176,7 +215,9 @@ let nv = 0;
 
 function ensureVertices(n: number): void {
   if (vk.length >= n + 4) return;
-  vk = new Int32Array(2 * n + 4); vz = new Float64Array(2 * n + 4); vp = new Float64Array(2 * n + 4);
+  vk = new Int32Array(2 * n + 4);
+  vz = new Float64Array(2 * n + 4);
+  vp = new Float64Array(2 * n + 4);
 }
 
 /** Adds a point to the lower hull whose first vertex is at `base`. */
@@ -185,13 +226,26 @@ function hullPush(base: number, k: number, z: number, p: number): void {
     const ia = nv - 2;
     const ib = nv - 1;
     const cross = (vz[ib] - vz[ia]) * (p - vp[ia]) - (vp[ib] - vp[ia]) * (z - vz[ia]);
-    if (cross <= 0) nv--; else break;
+    if (cross <= 0) nv--;
+    else break;
   }
-  vk[nv] = k; vz[nv] = z; vp[nv] = p; nv++;
+  vk[nv] = k;
+  vz[nv] = z;
+  vp[nv] = p;
+  nv++;
 }
 
 /** Lower hull of the saturation points between two anchors, appended to the vertex lists. */
-function hullSegment(zCum: Float64Array, pSat: Float64Array, k0: number, z0: number, p0: number, k1: number, z1: number, p1: number): void {
+function hullSegment(
+  zCum: Float64Array,
+  pSat: Float64Array,
+  k0: number,
+  z0: number,
+  p0: number,
+  k1: number,
+  z1: number,
+  p1: number,
+): void {
   const base = nv;
   hullPush(base, k0, z0, p0);
   for (let k = Math.max(k0 + 1, 0); k < k1; k++) if (zCum[k] > z0 && zCum[k] < z1) hullPush(base, k, zCum[k], pSat[k]);
@@ -209,7 +263,10 @@ function prepareMonth(a: ResolvedAssembly, s: Stack, c: MonthConditions, out: So
   // interior surface (that is surface condensation, which the mould check covers).
   out.pExt = s.fixedSurface ? out.pSat[s.start] : Math.min(c.outdoor.p_v_pa, out.pSat[s.start]);
   out.pInt = Math.min(c.indoor.p_v_pa, out.pSat[n]);
-  if (previous && s.anyDependent) { out.z.set(previous.z); return; }
+  if (previous && s.anyDependent) {
+    out.z.set(previous.z);
+    return;
+  }
   out.z.set(s.z);
   if (s.anyDependent) {
     const rh0 = (c.indoor.rh + c.outdoor.rh) / 2;
@@ -229,12 +286,16 @@ function solveVapour(a: ResolvedAssembly, s: Stack, wet: Uint8Array, out: Solved
     const zTot = zCum[n];
     // Anchors: the two boundary air states and every interface holding water (at saturation).
     nv = 0;
-    let k0 = -1; let z0 = 0; let p0 = out.pExt;
+    let k0 = -1;
+    let z0 = 0;
+    let p0 = out.pExt;
     for (let k = s.start + 1; k < n; k++) {
       if (!wet[k]) continue;
       hullSegment(zCum, pSat, k0, z0, p0, k, zCum[k], pSat[k]);
       nv--;
-      k0 = k; z0 = zCum[k]; p0 = pSat[k];
+      k0 = k;
+      z0 = zCum[k];
+      p0 = pSat[k];
     }
     hullSegment(zCum, pSat, k0, z0, p0, n + 1, zTot, out.pInt);
     // Vapour pressure at every interface along the string.
@@ -268,7 +329,8 @@ function solveVapour(a: ResolvedAssembly, s: Stack, wet: Uint8Array, out: Solved
 
 function interfaceLabel(a: ResolvedAssembly, k: number): string {
   const n = a.layers.length;
-  if (k === 0) return `${isBelowGrade(a.kind) ? "soil-side face" : "exterior face"} of ${lowerName(a.layers[0].material)}`;
+  if (k === 0)
+    return `${isBelowGrade(a.kind) ? "soil-side face" : "exterior face"} of ${lowerName(a.layers[0].material)}`;
   if (k === n) return `interior face of ${lowerName(a.layers[n - 1].material)}`;
   return `${lowerName(a.layers[k - 1].material)} / ${lowerName(a.layers[k].material)}`;
 }
@@ -279,15 +341,22 @@ export function monthConditions(site: ResolvedSite, year: ClimateYear): MonthCon
     const outdoor = { t_c: m.t_c, rh: m.rh, p_v_pa: (saturationPressure(m.t_c) * m.rh) / 100 };
     const ti = indoorTemperature(m.t_c, site.indoor.t_c, site.indoor.summer_t_c);
     const method = site.indoor.method;
-    const indoor = method === "given"
-      ? { t_c: ti, rh: site.indoor.rh, p_v_pa: (saturationPressure(ti) * site.indoor.rh) / 100 }
-      : indoorHumidity(method, outdoor, ti);
+    const indoor =
+      method === "given"
+        ? { t_c: ti, rh: site.indoor.rh, p_v_pa: (saturationPressure(ti) * site.indoor.rh) / 100 }
+        : indoorHumidity(method, outdoor, ti);
     return { days: MONTH_DAYS[i], outdoor, indoor };
   });
 }
 
 /** Interior-surface temperature factor against the critical surface humidity, month by month. */
-function mouldCheck(a: ResolvedAssembly, s: Stack, months: readonly MonthConditions[], names: readonly string[], groundT: number | null): { check: SurfaceMouldCheck; byMonth: (number | null)[] } {
+function mouldCheck(
+  a: ResolvedAssembly,
+  s: Stack,
+  months: readonly MonthConditions[],
+  names: readonly string[],
+  groundT: number | null,
+): { check: SurfaceMouldCheck; byMonth: (number | null)[] } {
   // Coldest path: through the framing wherever it conducts more than the fill.
   let r = MOULD_RSI + (s.fixedSurface ? 0 : MOULD_RSE);
   for (let i = s.start; i < s.n; i++) {
@@ -307,17 +376,26 @@ function mouldCheck(a: ResolvedAssembly, s: Stack, months: readonly MonthConditi
   });
   let fRsiMax: number | null = null;
   let criticalMonth: number | null = null;
-  byMonth.forEach((f, i) => { if (f !== null && (fRsiMax === null || f > fRsiMax)) { fRsiMax = f; criticalMonth = i + 1; } });
+  byMonth.forEach((f, i) => {
+    if (f !== null && (fRsiMax === null || f > fRsiMax)) {
+      fRsiMax = f;
+      criticalMonth = i + 1;
+    }
+  });
   const pass = fRsiMax === null || fRsi > fRsiMax;
   const fmt = (v: number): string => v.toFixed(3);
   return {
     byMonth,
     check: {
       method: `ISO 13788:2012 §5 temperature factor, Rsi ${MOULD_RSI} and Rse ${s.fixedSurface ? 0 : MOULD_RSE} m²·K/W, critical surface humidity ${CRITICAL_SURFACE_RH * 100} %, coldest (framing) path; corners and other thermal bridges are not modelled`,
-      fRsi, fRsiMax, criticalMonth, pass,
-      explanation: fRsiMax === null
-        ? "No month has heat loss through the assembly: no surface mould risk from cold surfaces."
-        : `The inside surface on the coldest path has a temperature factor of ${fmt(fRsi)}; the month that asks most (${names[(criticalMonth ?? 1) - 1]}) needs more than ${fmt(fRsiMax)} to keep the surface below 80 % RH. ${pass ? "It passes." : "It fails: the inside surface is cold enough for mould."}`,
+      fRsi,
+      fRsiMax,
+      criticalMonth,
+      pass,
+      explanation:
+        fRsiMax === null
+          ? "No month has heat loss through the assembly: no surface mould risk from cold surfaces."
+          : `The inside surface on the coldest path has a temperature factor of ${fmt(fRsi)}; the month that asks most (${names[(criticalMonth ?? 1) - 1]}) needs more than ${fmt(fRsiMax)} to keep the surface below 80 % RH. ${pass ? "It passes." : "It fails: the inside surface is cold enough for mould."}`,
     },
   };
 }
@@ -337,7 +415,12 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
   const scratch = scratchFor(n);
   const { dry, held, heldBy, rateBy, condensed, evaporated, total, wet } = scratch;
   const pool = scratch.months;
-  const drySolved = months.map((m, i) => { const o = pool[i]; prepareMonth(a, s, m, o, i > 0 ? pool[i - 1] : null); solveVapour(a, s, dry, o); return o; });
+  const drySolved = months.map((m, i) => {
+    const o = pool[i];
+    prepareMonth(a, s, m, o, i > 0 ? pool[i - 1] : null);
+    solveVapour(a, s, dry, o);
+    return o;
+  });
   const condenses = drySolved.map((o, i) => {
     let g = 0;
     for (let k = 0; k <= n; k++) g += Math.max(0, o.rate[k]);
@@ -347,7 +430,11 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
   // Start: the first condensing month after a month without; if every month condenses, the month
   // after the warmest.
   let startIdx: number | null = null;
-  for (let i = 0; i < 12; i++) if (condenses[i] && !condenses[(i + 11) % 12]) { startIdx = i; break; }
+  for (let i = 0; i < 12; i++)
+    if (condenses[i] && !condenses[(i + 11) % 12]) {
+      startIdx = i;
+      break;
+    }
   if (startIdx === null && condenses.every(Boolean)) {
     let warm = 0;
     for (let i = 1; i < 12; i++) if (year.months[i].t_c > year.months[warm].t_c) warm = i;
@@ -359,9 +446,16 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     for (let step = 0; step < 12; step++) {
       const mi = (startIdx + step) % 12;
       let anyWet = false;
-      for (let k = 0; k <= n; k++) { wet[k] = held[k] > 0 ? 1 : 0; if (wet[k]) anyWet = true; }
+      for (let k = 0; k <= n; k++) {
+        wet[k] = held[k] > 0 ? 1 : 0;
+        if (wet[k]) anyWet = true;
+      }
       let o = drySolved[mi];
-      if (anyWet) { copySolved(o, work); solveVapour(a, s, wet, work); o = work; }
+      if (anyWet) {
+        copySolved(o, work);
+        solveVapour(a, s, wet, work);
+        o = work;
+      }
       const seconds = months[mi].days * SECONDS_PER_DAY;
       for (let k = 0; k <= n; k++) {
         const delta = o.rate[k] * seconds * KG_TO_G;
@@ -373,7 +467,10 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
           const out = Math.min(held[k], -delta);
           evaporated[mi] += out;
           held[k] -= out;
-          if (held[k] < TRACE_G_M2) { evaporated[mi] += held[k]; held[k] = 0; }
+          if (held[k] < TRACE_G_M2) {
+            evaporated[mi] += held[k];
+            held[k] = 0;
+          }
         }
         heldBy[mi * (n + 1) + k] = held[k];
         total[mi] += held[k];
@@ -389,11 +486,18 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     let peak = 0;
     for (let mi = 0; mi < 12; mi++) peak = Math.max(peak, heldBy[mi * (n + 1) + k]);
     if (peak > 0) everWet.push(k);
-    if (peak > criticalPeak) { criticalPeak = peak; critical = k; }
+    if (peak > criticalPeak) {
+      criticalPeak = peak;
+      critical = k;
+    }
   }
   let peak = 0;
   let peakIdx: number | null = null;
-  for (let mi = 0; mi < 12; mi++) if (total[mi] > peak) { peak = total[mi]; peakIdx = mi; }
+  for (let mi = 0; mi < 12; mi++)
+    if (total[mi] > peak) {
+      peak = total[mi];
+      peakIdx = mi;
+    }
   const endIdx = startIdx === null ? null : (startIdx + 11) % 12;
   const endOfYear = endIdx === null ? 0 : total[endIdx];
   let driesOut: number | null = null;
@@ -405,13 +509,23 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
       if (total[mi] === 0 && total[prev] > 0) driesOut = mi + 1;
     }
   }
-  const verdict: SeasonalResult["verdict"] = startIdx === null || peak === 0 ? "no-condensation" : endOfYear > 0 ? "accumulates" : "dries-within-year";
+  const verdict: SeasonalResult["verdict"] =
+    startIdx === null || peak === 0 ? "no-condensation" : endOfYear > 0 ? "accumulates" : "dries-within-year";
 
-  const mould = mouldCheck(a, s, months, year.months.map((m) => m.name), groundT);
+  const mould = mouldCheck(
+    a,
+    s,
+    months,
+    year.months.map((m) => m.name),
+    groundT,
+  );
   const labels = new Map<number, string>();
   const label = (k: number): string => {
     let l = labels.get(k);
-    if (l === undefined) { l = interfaceLabel(a, k); labels.set(k, l); }
+    if (l === undefined) {
+      l = interfaceLabel(a, k);
+      labels.set(k, l);
+    }
     return l;
   };
 
@@ -425,16 +539,27 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     for (let k = from; k <= n; k++) {
       const pLin = o.pExt + ((o.pInt - o.pExt) * o.zCum[k]) / zTot;
       const ratio = o.pSat[k] / Math.max(pLin, 1e-3);
-      if (ratio < worst) { worst = ratio; kMin = k; }
+      if (ratio < worst) {
+        worst = ratio;
+        kMin = k;
+      }
     }
     const pLinMin = o.pExt + ((o.pInt - o.pExt) * o.zCum[kMin]) / zTot;
     const interfaces: InterfaceWater[] = everWet.map((k) => ({
-      interfaceIndex: k, label: label(k), accumulated_g_m2: heldBy[mi * (n + 1) + k], rate_g_m2_day: rateBy[mi * (n + 1) + k],
+      interfaceIndex: k,
+      label: label(k),
+      accumulated_g_m2: heldBy[mi * (n + 1) + k],
+      rate_g_m2_day: rateBy[mi * (n + 1) + k],
     }));
     return {
-      month: mi + 1, name: year.months[mi].name, days: m.days,
-      outdoor: { ...m.outdoor }, indoor: { ...m.indoor },
-      condensed_g_m2: condensed[mi], evaporated_g_m2: evaporated[mi], accumulated_g_m2: total[mi],
+      month: mi + 1,
+      name: year.months[mi].name,
+      days: m.days,
+      outdoor: { ...m.outdoor },
+      indoor: { ...m.indoor },
+      condensed_g_m2: condensed[mi],
+      evaporated_g_m2: evaporated[mi],
+      accumulated_g_m2: total[mi],
       critical_g_m2: critical >= 0 ? heldBy[mi * (n + 1) + critical] : 0,
       margin_c: o.t[kMin] - dewPointFromVapourPressure(Math.max(pLinMin, 1e-3)),
       marginInterface: label(kMin),

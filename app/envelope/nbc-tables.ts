@@ -64,16 +64,38 @@ export type NbcComponent = "wall" | "attic-ceiling" | "cathedral-roof" | "floor-
 /** Minimum effective RSI by component and zone, without a heat-recovery ventilator (Table
  * 9.36.2.6.-A; the table with an HRV, 9.36.2.6.-B, permits less and is not used here: the stricter
  * one errs on the safe side). Foundation walls are Table 9.36.2.8.-A. */
-export const NBC_EFFECTIVE_RSI: Readonly<Record<NbcComponent, { table: string; status: string; byZone: Readonly<Record<NbcZone, number>> }>> = {
-  "wall": { table: "Table 9.36.2.6.-A", status: "C2", byZone: { "4": 2.78, "5": 3.08, "6": 3.08, "7A": 3.08, "7B": 3.85, "8": 3.85 } },
-  "attic-ceiling": { table: "Table 9.36.2.6.-A", status: "C2", byZone: { "4": 6.91, "5": 8.67, "6": 8.67, "7A": 10.43, "7B": 10.43, "8": 10.43 } },
-  "cathedral-roof": { table: "Table 9.36.2.6.-A", status: "C2", byZone: { "4": 4.67, "5": 4.67, "6": 4.67, "7A": 5.02, "7B": 5.02, "8": 5.02 } },
-  "floor-over-unheated": { table: "Table 9.36.2.6.-A", status: "C2", byZone: { "4": 4.67, "5": 4.67, "6": 4.67, "7A": 5.02, "7B": 5.02, "8": 5.02 } },
-  "foundation-wall": { table: "Table 9.36.2.8.-A", status: "M", byZone: { "4": 1.99, "5": 2.98, "6": 2.98, "7A": 3.46, "7B": 3.46, "8": 3.97 } },
+export const NBC_EFFECTIVE_RSI: Readonly<
+  Record<NbcComponent, { table: string; status: string; byZone: Readonly<Record<NbcZone, number>> }>
+> = {
+  wall: {
+    table: "Table 9.36.2.6.-A",
+    status: "C2",
+    byZone: { "4": 2.78, "5": 3.08, "6": 3.08, "7A": 3.08, "7B": 3.85, "8": 3.85 },
+  },
+  "attic-ceiling": {
+    table: "Table 9.36.2.6.-A",
+    status: "C2",
+    byZone: { "4": 6.91, "5": 8.67, "6": 8.67, "7A": 10.43, "7B": 10.43, "8": 10.43 },
+  },
+  "cathedral-roof": {
+    table: "Table 9.36.2.6.-A",
+    status: "C2",
+    byZone: { "4": 4.67, "5": 4.67, "6": 4.67, "7A": 5.02, "7B": 5.02, "8": 5.02 },
+  },
+  "floor-over-unheated": {
+    table: "Table 9.36.2.6.-A",
+    status: "C2",
+    byZone: { "4": 4.67, "5": 4.67, "6": 4.67, "7A": 5.02, "7B": 5.02, "8": 5.02 },
+  },
+  "foundation-wall": {
+    table: "Table 9.36.2.8.-A",
+    status: "M",
+    byZone: { "4": 1.99, "5": 2.98, "6": 2.98, "7A": 3.46, "7B": 3.46, "8": 3.97 },
+  },
 };
 
 export const NBC_COMPONENT_LABEL: Readonly<Record<NbcComponent, string>> = {
-  "wall": "above-grade wall",
+  wall: "above-grade wall",
   "attic-ceiling": "ceiling below an attic",
   "cathedral-roof": "cathedral ceiling or flat roof",
   "floor-over-unheated": "floor over unheated space",
@@ -83,5 +105,10 @@ export const NBC_COMPONENT_LABEL: Readonly<Record<NbcComponent, string>> = {
 /** Assembly kinds the vapour-barrier requirement of 9.25.4.1 reads (insulated walls, ceilings and
  * floors); slabs and crawl-space ground covers are ground moisture, 9.13, not compared here. */
 export const NBC_VAPOUR_BARRIER_KINDS: ReadonlySet<AssemblyKind> = new Set([
-  "above-grade-wall", "rim-joist", "roof", "floor", "basement-wall", "crawlspace-wall",
+  "above-grade-wall",
+  "rim-joist",
+  "roof",
+  "floor",
+  "basement-wall",
+  "crawlspace-wall",
 ]);

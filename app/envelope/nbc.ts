@@ -4,10 +4,23 @@
 //   resistance outboard of its inner face (Table 9.25.5.2 ratio by HDD), unless it is outboard of a
 //   ventilated cavity;
 // - 9.36.2.6 (9.36.2.8 for foundation walls): minimum effective thermal resistance by zone.
-import { isInsulation, lowerName, materialRsi, ventedCavityIndex, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import {
-  NBC_9_25_5_2, NBC_COMPONENT_LABEL, NBC_EFFECTIVE_RSI, NBC_VAPOUR_BARRIER_KINDS, NBC_VAPOUR_BARRIER_NG, NBC_ZONE_BANDS,
-  outboardRatioAt, type NbcComponent,
+  isInsulation,
+  lowerName,
+  materialRsi,
+  ventedCavityIndex,
+  type ResolvedAssembly,
+  type ResolvedLayer,
+} from "./layers";
+import {
+  NBC_9_25_5_2,
+  NBC_COMPONENT_LABEL,
+  NBC_EFFECTIVE_RSI,
+  NBC_VAPOUR_BARRIER_KINDS,
+  NBC_VAPOUR_BARRIER_NG,
+  NBC_ZONE_BANDS,
+  outboardRatioAt,
+  type NbcComponent,
 } from "./nbc-tables";
 import type { CanadianSite, CodeRow, ThermalResult } from "./types";
 import { layerPermeance, seriesPermeance } from "./vapour";
@@ -32,7 +45,10 @@ export function vapourBarrierRow(a: ResolvedAssembly): CodeRow | null {
     id: "nbc-9-25-4",
     label: "NBC 2020 9.25.4, vapour barrier on the warm side of the insulation",
     required: `≤ ${NBC_VAPOUR_BARRIER_NG} ng/(Pa·s·m²) inboard of the insulation (desiccant method)`,
-    provided: w === null ? "nothing inboard of the insulation" : `${w < 10 ? w.toFixed(1) : Math.round(w)} ng/(Pa·s·m²) (${inboard.map((l) => lowerName(l.material)).join(" + ")}, dry cup)`,
+    provided:
+      w === null
+        ? "nothing inboard of the insulation"
+        : `${w < 10 ? w.toFixed(1) : Math.round(w)} ng/(Pa·s·m²) (${inboard.map((l) => lowerName(l.material)).join(" + ")}, dry cup)`,
     pass,
     note: pass
       ? "The warm-side layers form a vapour barrier by the NBC definition."
@@ -56,10 +72,14 @@ function materialsRsi(layers: readonly ResolvedLayer[]): number {
 
 /** Required ratio: at the site's HDD, or, when only a zone is known, the strictest row of its band. */
 function requiredRatio(site: CanadianSite): { ratio: number; basis: string } {
-  if (site.hddSource !== "nbc-zone") return { ratio: outboardRatioAt(site.hdd18), basis: `${Math.round(site.hdd18)} HDD` };
+  if (site.hddSource !== "nbc-zone")
+    return { ratio: outboardRatioAt(site.hdd18), basis: `${Math.round(site.hdd18)} HDD` };
   const band = NBC_ZONE_BANDS[site.nbcZone];
   const ratio = band.to === null ? NBC_9_25_5_2[NBC_9_25_5_2.length - 1].ratio : outboardRatioAt(band.to);
-  return { ratio, basis: `NBC zone ${site.nbcZone}${band.to === null ? ", no HDD given: the strictest row applies; enter the HDD" : ""}` };
+  return {
+    ratio,
+    basis: `NBC zone ${site.nbcZone}${band.to === null ? ", no HDD given: the strictest row applies; enter the HDD" : ""}`,
+  };
 }
 
 /** 9.25.5.1–.2: every low-permeance layer outboard of the insulation and inboard of any ventilated
@@ -128,5 +148,7 @@ export function effectiveRsiRow(a: ResolvedAssembly, site: CanadianSite, thermal
 }
 
 export function nbcRows(a: ResolvedAssembly, site: CanadianSite, thermal: ThermalResult): CodeRow[] {
-  return [effectiveRsiRow(a, site, thermal), vapourBarrierRow(a), outboardRatioRow(a, site)].filter((r): r is CodeRow => r !== null);
+  return [effectiveRsiRow(a, site, thermal), vapourBarrierRow(a), outboardRatioRow(a, site)].filter(
+    (r): r is CodeRow => r !== null,
+  );
 }

@@ -3,7 +3,9 @@ import { dewPointFromVapourPressure } from "./psychrometrics";
 import type { ProfileCase } from "./types";
 
 /** Chart-ready series (position, temperature, dew point of the local vapour pressure, RH). */
-export function profileChartSeries(profile: ProfileCase): { position_mm: number; t_c: number; dew_point_c: number; p_v_pa: number; p_sat_pa: number; rh: number }[] {
+export function profileChartSeries(
+  profile: ProfileCase,
+): { position_mm: number; t_c: number; dew_point_c: number; p_v_pa: number; p_sat_pa: number; rh: number }[] {
   return profile.interfaces.map((i) => ({
     position_mm: i.position_mm,
     t_c: i.t_c,

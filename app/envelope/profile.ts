@@ -7,7 +7,14 @@
 // The profile runs along the clear-cavity path (framed layers conduct and pass vapour through
 // their fill only): in winter that is the coldest sheathing, the worst case. The stud path's
 // temperatures are reported beside it.
-import { hasTemperatureDependentConductivity, isInsulation, lowerName, materialRsi, materialRsiAt, type ResolvedAssembly } from "./layers";
+import {
+  hasTemperatureDependentConductivity,
+  isInsulation,
+  lowerName,
+  materialRsi,
+  materialRsiAt,
+  type ResolvedAssembly,
+} from "./layers";
 import { dewPointFromVapourPressure, saturationPressure } from "./psychrometrics";
 import { filmsFor, isBelowGrade, type HeatPath, type Season } from "./thermal";
 import type { CondensationPlane, LayerVapourClass, ProfileCase, ProfileInterface, VapourLayer } from "./types";
@@ -62,18 +69,27 @@ let hullK = new Int32Array(0);
 function ensureCapacity(points: number): void {
   if (points <= capacity) return;
   capacity = Math.max(points, 2 * capacity, 32);
-  candZ = new Float64Array(capacity); candP = new Float64Array(capacity); candK = new Int32Array(capacity);
-  hullZ = new Float64Array(capacity); hullP = new Float64Array(capacity); hullK = new Int32Array(capacity);
+  candZ = new Float64Array(capacity);
+  candP = new Float64Array(capacity);
+  candK = new Int32Array(capacity);
+  hullZ = new Float64Array(capacity);
+  hullP = new Float64Array(capacity);
+  hullK = new Int32Array(capacity);
 }
 
 /** Adds a point to the candidates sorted by z, keeping one point per z: the lowest pressure, the
  * boundary air state (k = −1) on a tie, so a surface exactly at saturation is not a plane. */
 function pushByZ(count: number, z: number, p: number, k: number): number {
   if (count > 0 && candZ[count - 1] === z) {
-    if (p < candP[count - 1] || (p === candP[count - 1] && k < candK[count - 1])) { candP[count - 1] = p; candK[count - 1] = k; }
+    if (p < candP[count - 1] || (p === candP[count - 1] && k < candK[count - 1])) {
+      candP[count - 1] = p;
+      candK[count - 1] = k;
+    }
     return count;
   }
-  candZ[count] = z; candP[count] = p; candK[count] = k;
+  candZ[count] = z;
+  candP[count] = p;
+  candK[count] = k;
   return count + 1;
 }
 
@@ -93,11 +109,14 @@ function glaserString(zCum: readonly number[], pSat: readonly number[], pExt: nu
     const p = candP[i];
     while (h >= 2) {
       // Keep the last point only if it lies strictly below the chord from the one before to this one.
-      const cross = (hullZ[h - 1] - hullZ[h - 2]) * (p - hullP[h - 2]) - (hullP[h - 1] - hullP[h - 2]) * (z - hullZ[h - 2]);
+      const cross =
+        (hullZ[h - 1] - hullZ[h - 2]) * (p - hullP[h - 2]) - (hullP[h - 1] - hullP[h - 2]) * (z - hullZ[h - 2]);
       if (cross <= 0) h--;
       else break;
     }
-    hullZ[h] = z; hullP[h] = p; hullK[h] = candK[i];
+    hullZ[h] = z;
+    hullP[h] = p;
+    hullK[h] = candK[i];
     h++;
   }
   return h;
@@ -139,10 +158,24 @@ function prepare(a: ResolvedAssembly): Prepared {
     dependent[i] = isRhDependent(l.material);
     anyDependent ||= dependent[i];
     cavityDry[i] = cavityPermeance(l);
-    if (isInsulation(l)) { innermost = i; if (outermost < 0) outermost = i; }
+    if (isInsulation(l)) {
+      innermost = i;
+      if (outermost < 0) outermost = i;
+    }
   }
   const dry = dryPermeances(a);
-  p = { labels: interfaceLabels(a), positions, dry, dryPermUs: dry.map(ngToPerm), dryClass: dry.map(retarderClass), dependent, anyDependent, cavityDry, innermostInsulation: innermost, outermostInsulation: outermost };
+  p = {
+    labels: interfaceLabels(a),
+    positions,
+    dry,
+    dryPermUs: dry.map(ngToPerm),
+    dryClass: dry.map(retarderClass),
+    dependent,
+    anyDependent,
+    cavityDry,
+    innermostInsulation: innermost,
+    outermostInsulation: outermost,
+  };
   preparedCache.set(a, p);
   return p;
 }
@@ -175,11 +208,22 @@ function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: numb
   return n - 1;
 }
 
-interface PathTemperatures { t: number[]; layerR: number[]; coldAdjusted: number[] }
+interface PathTemperatures {
+  t: number[];
+  layerR: number[];
+  coldAdjusted: number[];
+}
 
 /** Interface temperatures along one heat path. Insulations with a conductivity curve are taken at
  * their own mean temperature, which depends on the profile: iterate until their RSI settles. */
-function pathTemperatures(a: ResolvedAssembly, c: CaseConditions, path: HeatPath, extFilm: number, intFilm: number, thermalStart: number): PathTemperatures {
+function pathTemperatures(
+  a: ResolvedAssembly,
+  c: CaseConditions,
+  path: HeatPath,
+  extFilm: number,
+  intFilm: number,
+  thermalStart: number,
+): PathTemperatures {
   const n = a.layers.length;
   const layerR = new Array<number>(n);
   const curved: number[] = [];
@@ -219,7 +263,9 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const labels = prep.labels;
   const films = filmsFor(a.kind, c.name);
   const thermalStart = c.thermalStart ?? 0;
-  const extFilm = c.fixedSurface ? 0 : c.exteriorFilmRsi ?? (thermalStart > 0 ? films.interior.rsi : films.exterior?.rsi ?? 0);
+  const extFilm = c.fixedSurface
+    ? 0
+    : (c.exteriorFilmRsi ?? (thermalStart > 0 ? films.interior.rsi : (films.exterior?.rsi ?? 0)));
   const notes = c.notes ? c.notes.slice() : [];
 
   const { t, layerR, coldAdjusted } = pathTemperatures(a, c, "clear-cavity", extFilm, films.interior.rsi, thermalStart);
@@ -228,7 +274,9 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   for (const i of coldAdjusted) {
     const l = a.layers[i];
     const rated = materialRsi(l.material, l.thickness_mm);
-    notes.push(`The ${lowerName(l.material)} is taken at its mean temperature of ${((t[i] + t[i + 1]) / 2).toFixed(1)} °C: R-${rsiToRip(layerR[i]).toFixed(1)} instead of its rated R-${rsiToRip(rated).toFixed(1)}.`);
+    notes.push(
+      `The ${lowerName(l.material)} is taken at its mean temperature of ${((t[i] + t[i + 1]) / 2).toFixed(1)} °C: R-${rsiToRip(layerR[i]).toFixed(1)} instead of its rated R-${rsiToRip(rated).toFixed(1)}.`,
+    );
   }
 
   const pos = prep.positions;
@@ -277,10 +325,15 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     }
     // Stop when settled: the profile above was computed with the permeances reported.
     if (settled) break;
-    if (pass + 1 >= MAX_RH_ITERATIONS) { converged = false; break; }
-    for (let i = 0; i < n; i++) if (dependent[i]) perms[i] = pass < RH_DAMP_AFTER ? next[i] : Math.sqrt(next[i] * perms[i]);
+    if (pass + 1 >= MAX_RH_ITERATIONS) {
+      converged = false;
+      break;
+    }
+    for (let i = 0; i < n; i++)
+      if (dependent[i]) perms[i] = pass < RH_DAMP_AFTER ? next[i] : Math.sqrt(next[i] * perms[i]);
   }
-  if (!converged) notes.push("The humidity-dependent permeances did not settle within 0.5 %; the figures are from the last pass.");
+  if (!converged)
+    notes.push("The humidity-dependent permeances did not settle within 0.5 %; the figures are from the last pass.");
   // Condensation planes: hull vertices that are saturation points below the straight line.
   const planes: CondensationPlane[] = [];
   for (let h = 0; h < hullLength; h++) {
@@ -305,8 +358,15 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const interfaces: ProfileInterface[] = new Array(n + 1);
   for (let k = 0; k <= n; k++) {
     interfaces[k] = {
-      position_mm: pos[k], label: labels[k], t_c: t[k], t_f: cToF(t[k]), p_sat_pa: pSat[k], p_v_pa: pv[k],
-      rh: (100 * pv[k]) / pSat[k], p_v_linear_pa: pLinear[k], condensing: condensing[k],
+      position_mm: pos[k],
+      label: labels[k],
+      t_c: t[k],
+      t_f: cToF(t[k]),
+      p_sat_pa: pSat[k],
+      p_v_pa: pv[k],
+      rh: (100 * pv[k]) / pSat[k],
+      p_v_linear_pa: pLinear[k],
+      condensing: condensing[k],
     };
   }
 
@@ -317,7 +377,14 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const marginIndex = first ? first.interfaceIndex : candidateSurface(a, c.name, c.vapourStart, prep);
   const vapourLayers: VapourLayer[] = new Array(n);
   for (let i = 0; i < n; i++) {
-    vapourLayers[i] = { index: i, material: a.layers[i].material.slug, perm_ng: dry[i], perm_us: prep.dryPermUs[i], class: prep.dryClass[i], case_perm_ng: perms[i] };
+    vapourLayers[i] = {
+      index: i,
+      material: a.layers[i].material.slug,
+      perm_ng: dry[i],
+      perm_us: prep.dryPermUs[i],
+      class: prep.dryClass[i],
+      case_perm_ng: perms[i],
+    };
   }
 
   return {
@@ -329,7 +396,9 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     interior: { t_c: c.interior.t_c, rh: c.interior.rh, p_v_pa: pInt },
     interfaces,
     condensingPlanes: planes,
-    firstCondensingSurface: first ? { interfaceIndex: first.interfaceIndex, label: labels[first.interfaceIndex], t_c: first.t_c } : null,
+    firstCondensingSurface: first
+      ? { interfaceIndex: first.interfaceIndex, label: labels[first.interfaceIndex], t_c: first.t_c }
+      : null,
     margin_c: t[marginIndex] - sourceDew,
     marginSurface: labels[marginIndex],
     sourceDewPoint_c: sourceDew,

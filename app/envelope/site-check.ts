@@ -25,7 +25,11 @@ export const FROST_DEPTH_SOIL_T_C = 0;
 const BELOW_GRADE_WALLS = new Set(["basement-wall", "crawlspace-wall"]);
 
 function indoorWinter(site: ResolvedSite) {
-  return { t_c: site.indoor.t_c, rh: site.indoor.rh, p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100 };
+  return {
+    t_c: site.indoor.t_c,
+    rh: site.indoor.rh,
+    p_v_pa: (saturationPressure(site.indoor.t_c) * site.indoor.rh) / 100,
+  };
 }
 
 export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
@@ -33,9 +37,13 @@ export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   if (isBelowGrade(a.kind)) {
     // Soil air is saturated; its face sits at the ground temperature.
     return {
-      name: "winter", description: `Winter: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} % against soil at ${site.ground_t_c} °C, saturated`,
+      name: "winter",
+      description: `Winter: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} % against soil at ${site.ground_t_c} °C, saturated`,
       exterior: { t_c: site.ground_t_c, rh: 100, p_v_pa: saturationPressure(site.ground_t_c), label: "soil" },
-      interior: indoor, fixedSurface: true, vapourStart: 0, source: "interior",
+      interior: indoor,
+      fixedSurface: true,
+      vapourStart: 0,
+      source: "interior",
     };
   }
   const vent = ventedCavityIndex(a);
@@ -45,8 +53,17 @@ export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   return {
     name: "winter",
     description: `Winter design: indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %${sky ? `, roof surface under a clear night sky (${t_c.toFixed(1)} °C sol-air)` : ""}`,
-    exterior: { t_c, rh: (100 * p_v_pa) / saturationPressure(t_c), p_v_pa, label: sky ? "outdoor air under a clear night sky" : "outdoor air" },
-    interior: indoor, fixedSurface: false, vapourStart: vent + 1, thermalStart: vent + 1, source: "interior",
+    exterior: {
+      t_c,
+      rh: (100 * p_v_pa) / saturationPressure(t_c),
+      p_v_pa,
+      label: sky ? "outdoor air under a clear night sky" : "outdoor air",
+    },
+    interior: indoor,
+    fixedSurface: false,
+    vapourStart: vent + 1,
+    thermalStart: vent + 1,
+    source: "interior",
     notes: sky ? [NIGHT_SKY_NOTE] : [],
   };
 }
@@ -54,24 +71,48 @@ export function winterCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
 /** The top of a basement or crawl-space wall: the band above grade faces outdoor air (with the
  * outdoor film), and just below grade the soil is at frost depth (0 °C, saturated). Interior-
  * insulated walls fail there first, where the deep-ground case can never see it. */
-export function upperWallCases(a: ResolvedAssembly, site: ResolvedSite): { aboveGrade: CaseConditions; frostDepth: CaseConditions } | null {
+export function upperWallCases(
+  a: ResolvedAssembly,
+  site: ResolvedSite,
+): { aboveGrade: CaseConditions; frostDepth: CaseConditions } | null {
   if (!BELOW_GRADE_WALLS.has(a.kind)) return null;
   const indoor = indoorWinter(site);
   const indoorText = `indoor ${site.indoor.t_c} °C / ${site.indoor.rh} %`;
   const outdoorFilm = filmsFor("above-grade-wall", "winter").exterior;
   // Drainage mats and boards stop at grade: above it the next layer meets the outdoor air.
   let aboveGradeStart = 0;
-  while (aboveGradeStart < a.layers.length - 1 && a.layers[aboveGradeStart].input.role === "drainage-gap") aboveGradeStart++;
+  while (aboveGradeStart < a.layers.length - 1 && a.layers[aboveGradeStart].input.role === "drainage-gap")
+    aboveGradeStart++;
   return {
     aboveGrade: {
-      name: "winter", description: `Winter, wall above grade: ${indoorText}, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
-      exterior: { t_c: site.winter.t_c, rh: site.winter.rh, p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100, label: "outdoor air above grade" },
-      interior: indoor, fixedSurface: false, vapourStart: aboveGradeStart, thermalStart: aboveGradeStart, exteriorFilmRsi: outdoorFilm?.rsi ?? 0, source: "interior",
+      name: "winter",
+      description: `Winter, wall above grade: ${indoorText}, outdoor ${site.winter.t_c} °C / ${site.winter.rh} %`,
+      exterior: {
+        t_c: site.winter.t_c,
+        rh: site.winter.rh,
+        p_v_pa: (saturationPressure(site.winter.t_c) * site.winter.rh) / 100,
+        label: "outdoor air above grade",
+      },
+      interior: indoor,
+      fixedSurface: false,
+      vapourStart: aboveGradeStart,
+      thermalStart: aboveGradeStart,
+      exteriorFilmRsi: outdoorFilm?.rsi ?? 0,
+      source: "interior",
     },
     frostDepth: {
-      name: "winter", description: `Winter, wall just below grade: ${indoorText} against soil at frost depth (${FROST_DEPTH_SOIL_T_C} °C), saturated`,
-      exterior: { t_c: FROST_DEPTH_SOIL_T_C, rh: 100, p_v_pa: saturationPressure(FROST_DEPTH_SOIL_T_C), label: "soil at frost depth" },
-      interior: indoor, fixedSurface: true, vapourStart: 0, source: "interior",
+      name: "winter",
+      description: `Winter, wall just below grade: ${indoorText} against soil at frost depth (${FROST_DEPTH_SOIL_T_C} °C), saturated`,
+      exterior: {
+        t_c: FROST_DEPTH_SOIL_T_C,
+        rh: 100,
+        p_v_pa: saturationPressure(FROST_DEPTH_SOIL_T_C),
+        label: "soil at frost depth",
+      },
+      interior: indoor,
+      fixedSurface: true,
+      vapourStart: 0,
+      source: "interior",
     },
   };
 }
@@ -80,13 +121,21 @@ export function upperWallCases(a: ResolvedAssembly, site: ResolvedSite): { above
  * the wall (a vented gap behind it breaks the drive), otherwise humid outdoor air; below grade,
  * saturated soil. */
 export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditions {
-  const indoor = { t_c: site.indoor.summer_t_c, rh: site.indoor.summer_rh, p_v_pa: (saturationPressure(site.indoor.summer_t_c) * site.indoor.summer_rh) / 100 };
+  const indoor = {
+    t_c: site.indoor.summer_t_c,
+    rh: site.indoor.summer_rh,
+    p_v_pa: (saturationPressure(site.indoor.summer_t_c) * site.indoor.summer_rh) / 100,
+  };
   const indoorText = `indoor ${site.indoor.summer_t_c} °C / ${site.indoor.summer_rh} %`;
   if (isBelowGrade(a.kind)) {
     return {
-      name: "summer", description: `Summer: saturated soil at ${site.ground_t_c} °C against ${indoorText}`,
+      name: "summer",
+      description: `Summer: saturated soil at ${site.ground_t_c} °C against ${indoorText}`,
       exterior: { t_c: site.ground_t_c, rh: 100, p_v_pa: saturationPressure(site.ground_t_c), label: "soil" },
-      interior: indoor, fixedSurface: true, vapourStart: 0, source: "exterior",
+      interior: indoor,
+      fixedSurface: true,
+      vapourStart: 0,
+      source: "exterior",
     };
   }
   const cladIdx = a.layers.findIndex(isReservoirCladding);
@@ -96,15 +145,30 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   if (cladIdx >= 0 && cladIdx < a.layers.length - 1 && !ventedBehind && a.kind !== "floor") {
     const t = site.summer.cladding_t_c;
     return {
-      name: "summer", description: `Summer inward drive: rain-wet ${lowerName(a.layers[cladIdx].material)} warmed by sun to ${t} °C, ${indoorText}`,
+      name: "summer",
+      description: `Summer inward drive: rain-wet ${lowerName(a.layers[cladIdx].material)} warmed by sun to ${t} °C, ${indoorText}`,
       exterior: { t_c: t, rh: 100, p_v_pa: saturationPressure(t), label: "sun-warmed wet cladding" },
-      interior: indoor, fixedSurface: true, vapourStart: cladIdx + 1, saturatedSource: true, source: "exterior",
+      interior: indoor,
+      fixedSurface: true,
+      vapourStart: cladIdx + 1,
+      saturatedSource: true,
+      source: "exterior",
     };
   }
   return {
-    name: "summer", description: `Summer inward drive: outdoor ${site.summer.t_c} °C / ${site.summer.rh} %, ${indoorText}`,
-    exterior: { t_c: site.summer.t_c, rh: site.summer.rh, p_v_pa: (saturationPressure(site.summer.t_c) * site.summer.rh) / 100, label: "outdoor air" },
-    interior: indoor, fixedSurface: false, vapourStart: vent + 1, thermalStart: vent + 1, source: "exterior",
+    name: "summer",
+    description: `Summer inward drive: outdoor ${site.summer.t_c} °C / ${site.summer.rh} %, ${indoorText}`,
+    exterior: {
+      t_c: site.summer.t_c,
+      rh: site.summer.rh,
+      p_v_pa: (saturationPressure(site.summer.t_c) * site.summer.rh) / 100,
+      label: "outdoor air",
+    },
+    interior: indoor,
+    fixedSurface: false,
+    vapourStart: vent + 1,
+    thermalStart: vent + 1,
+    source: "exterior",
   };
 }
 
@@ -115,26 +179,47 @@ const SOIL_SCOPE_NOTE =
   "Against soil the monthly method is outside its scope: the soil face is held saturated at ground temperature all year, so these figures are shown for reference and raise no flag. The top of the wall (above grade and at frost depth) and the design-day cases judge this assembly.";
 
 /** seasonal: false skips the 12-month balance (bulk screening, the design-day benchmark). */
-export interface SiteCheckOptions { seasonal?: boolean }
+export interface SiteCheckOptions {
+  seasonal?: boolean;
+}
 
-export function runSiteCheck(assembly: AssemblyInput, site: SiteInput, materials: MaterialLibrary, options: SiteCheckOptions = {}): SiteCheckResult {
+export function runSiteCheck(
+  assembly: AssemblyInput,
+  site: SiteInput,
+  materials: MaterialLibrary,
+  options: SiteCheckOptions = {},
+): SiteCheckResult {
   const resolvedSite = resolveSite(site);
   const { assembly: a, thermal, vapour } = analyseAssembly(assembly, materials);
   const winter = computeProfile(a, winterCase(a, resolvedSite));
   const summer = computeProfile(a, summerCase(a, resolvedSite));
   const upper = upperWallCases(a, resolvedSite);
-  const upperWall = upper ? { aboveGrade: computeProfile(a, upper.aboveGrade), frostDepth: computeProfile(a, upper.frostDepth) } : null;
+  const upperWall = upper
+    ? { aboveGrade: computeProfile(a, upper.aboveGrade), frostDepth: computeProfile(a, upper.frostDepth) }
+    : null;
   const rows = codeRows(a, resolvedSite, vapour.interiorClass);
-  const balance = options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite));
+  const balance =
+    options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite));
   const seasonal = balance && winter.exterior.label === "soil" ? { ...balance, scopeNote: SOIL_SCOPE_NOTE } : balance;
-  const flags = evaluateRules({ assembly: a, site: resolvedSite, vapour, winter, summer, upperWall, codeRows: rows, seasonal });
+  const flags = evaluateRules({
+    assembly: a,
+    site: resolvedSite,
+    vapour,
+    winter,
+    summer,
+    upperWall,
+    codeRows: rows,
+    seasonal,
+  });
   return {
     site: resolvedSite,
     thermal,
     profiles: { winter, summer, upperWall },
     vapour,
     // Canadian sites are compared with the NBC; the IRC/IECC rows still feed the rules above.
-    code: resolvedSite.canada ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) } : { edition: resolvedSite.edition, rows },
+    code: resolvedSite.canada
+      ? { edition: resolvedSite.canada.edition, rows: nbcRows(a, resolvedSite.canada, thermal) }
+      : { edition: resolvedSite.edition, rows },
     flags,
     caution: LOCAL_CODE_CAUTION,
     seasonal,

@@ -3,29 +3,50 @@
 // applied inside the layer), then all layers and the air films in series (isothermal planes).
 // The whole-assembly parallel-path figure (paths running through every layer) is reported beside
 // it for comparison; with wood framing the truth lies between the two (docs/references.md §4.1).
-import { materialRsi, materialRsiAt, resolveAssembly, ventedCavityIndex, type ResolvedAssembly, type ResolvedLayer } from "./layers";
+import {
+  materialRsi,
+  materialRsiAt,
+  resolveAssembly,
+  ventedCavityIndex,
+  type ResolvedAssembly,
+  type ResolvedLayer,
+} from "./layers";
 import type { MaterialLibrary } from "./material-schema";
 import type { AirFilm, AssemblyInput, AssemblyKind, ThermalLayer, ThermalResult } from "./types";
 import { ripToRsi, rsiToRip, usiToUip } from "./units";
 
 export type Season = "winter" | "summer";
 
-const BELOW_GRADE: ReadonlySet<AssemblyKind> = new Set(["basement-wall", "crawlspace-wall", "slab", "crawlspace-floor"]);
+const BELOW_GRADE: ReadonlySet<AssemblyKind> = new Set([
+  "basement-wall",
+  "crawlspace-wall",
+  "slab",
+  "crawlspace-floor",
+]);
 export const isBelowGrade = (kind: AssemblyKind): boolean => BELOW_GRADE.has(kind);
 
-interface FilmSpec { rip: number; label: string; source: string }
+interface FilmSpec {
+  rip: number;
+  label: string;
+  source: string;
+}
 const WAC = "WAC 51-11-0526 (ASHRAE surface resistances), C";
 const FILM_WALL: FilmSpec = { rip: 0.68, label: "inside air film, vertical surface", source: WAC };
 const FILM_UP: FilmSpec = { rip: 0.61, label: "inside air film, heat flow up", source: WAC };
 const FILM_DOWN: FilmSpec = { rip: 0.92, label: "still-air film, heat flow down", source: WAC };
 const FILM_OUT_WINTER: FilmSpec = { rip: 0.17, label: "outside air film, 15 mph wind", source: WAC };
-const FILM_OUT_SUMMER: FilmSpec = { rip: 0.25, label: "outside air film, 7.5 mph wind", source: "ASHRAE HoF ch.26 surface resistances, M" };
+const FILM_OUT_SUMMER: FilmSpec = {
+  rip: 0.25,
+  label: "outside air film, 7.5 mph wind",
+  source: "ASHRAE HoF ch.26 surface resistances, M",
+};
 
 /** Interior film by kind and season: heat flows up through a roof in winter and down in summer;
  * floors and slabs lose heat downward in winter. */
 function interiorFilm(kind: AssemblyKind, season: Season): FilmSpec {
   if (kind === "roof") return season === "winter" ? FILM_UP : FILM_DOWN;
-  if (kind === "floor" || kind === "slab" || kind === "crawlspace-floor") return season === "winter" ? FILM_DOWN : FILM_UP;
+  if (kind === "floor" || kind === "slab" || kind === "crawlspace-floor")
+    return season === "winter" ? FILM_DOWN : FILM_UP;
   return FILM_WALL;
 }
 
@@ -63,16 +84,17 @@ export function layerRsi(layer: ResolvedLayer): number {
  * winter: framed layers conduct only through their fill) or through the framing. */
 export type HeatPath = "clear-cavity" | "stud";
 
-/** RSI of one layer along a heat path at a mean temperature (temperature-dependent insulations). */
-function pathLayerRsi(layer: ResolvedLayer, path: HeatPath, mean_t_c: number): number {
-  const m = layer.framing && path === "stud" ? layer.framing.material : layer.material;
-  return materialRsiAt(m, layer.thickness_mm, mean_t_c);
-}
-
 /** Series sum of all layers plus films (winter films), isothermal planes. Outboard of a ventilated
  * cavity nothing counts, and the cavity's still air takes the place of the outdoor film (the same
  * rule the profiles use; ASHRAE practice for well-ventilated spaces). */
-export function seriesRsi(a: ResolvedAssembly): { layers: number[]; counted: boolean[]; exterior: number; exteriorFilm: AirFilm | null; interior: number; total: number } {
+export function seriesRsi(a: ResolvedAssembly): {
+  layers: number[];
+  counted: boolean[];
+  exterior: number;
+  exteriorFilm: AirFilm | null;
+  interior: number;
+  total: number;
+} {
   const films = filmsFor(a.kind, "winter");
   const vent = ventedCavityIndex(a);
   const layers = a.layers.map(layerRsi);
@@ -88,7 +110,13 @@ export function seriesRsi(a: ResolvedAssembly): { layers: number[]; counted: boo
 /** Film on the inner face of a ventilated cavity: still air, the interior film of the same surface. */
 export function stillAirFilm(kind: AssemblyKind): AirFilm {
   const spec = interiorFilm(kind, "winter");
-  return { side: "exterior", rsi: ripToRsi(spec.rip), r_ip: spec.rip, label: `still-air film in the ventilated cavity (${spec.label.replace(/^inside air film, /, "")})`, source: `${spec.source}; ventilated cavity treated as still air (ASHRAE HoF ch.26 practice), M` };
+  return {
+    side: "exterior",
+    rsi: ripToRsi(spec.rip),
+    r_ip: spec.rip,
+    label: `still-air film in the ventilated cavity (${spec.label.replace(/^inside air film, /, "")})`,
+    source: `${spec.source}; ventilated cavity treated as still air (ASHRAE HoF ch.26 practice), M`,
+  };
 }
 
 /** Paths through the whole assembly; several framed layers are taken as independent (their
@@ -103,11 +131,17 @@ function parallelPathRsi(a: ResolvedAssembly, filmsRsi: number, counted: readonl
     for (const l of a.layers) {
       if (!counted[l.index]) continue;
       const k = framed.indexOf(l);
-      if (k < 0) { r += materialRsi(l.material, l.thickness_mm); continue; }
+      if (k < 0) {
+        r += materialRsi(l.material, l.thickness_mm);
+        continue;
+      }
       const onFraming = (mask >> k) & 1;
       const f = (l.framing as { fraction: number }).fraction;
       weight *= onFraming ? f : 1 - f;
-      r += materialRsi(onFraming ? (l.framing as { material: ResolvedLayer["material"] }).material : l.material, l.thickness_mm);
+      r += materialRsi(
+        onFraming ? (l.framing as { material: ResolvedLayer["material"] }).material : l.material,
+        l.thickness_mm,
+      );
     }
     if (weight > 0) u += weight / Math.max(r, 1e-9);
   }
@@ -120,13 +154,21 @@ export function analyseThermal(a: ResolvedAssembly): ThermalResult {
   const layers: ThermalLayer[] = a.layers.map((l, i) => {
     const rsi = series.layers[i];
     const out: ThermalLayer = {
-      index: l.index, role: l.input.role, material: l.material.slug, name: l.material.name,
-      thickness_mm: l.thickness_mm, rsi, r_ip: rsiToRip(rsi), counted: series.counted[i],
+      index: l.index,
+      role: l.input.role,
+      material: l.material.slug,
+      name: l.material.name,
+      thickness_mm: l.thickness_mm,
+      rsi,
+      r_ip: rsiToRip(rsi),
+      counted: series.counted[i],
     };
     if (l.framing) {
       out.framed = {
-        framing_material: l.framing.material.slug, fraction: l.framing.fraction,
-        cavity_rsi: materialRsi(l.material, l.thickness_mm), framing_rsi: materialRsi(l.framing.material, l.thickness_mm),
+        framing_material: l.framing.material.slug,
+        fraction: l.framing.fraction,
+        cavity_rsi: materialRsi(l.material, l.thickness_mm),
+        framing_rsi: materialRsi(l.framing.material, l.thickness_mm),
       };
     }
     return out;
@@ -137,18 +179,28 @@ export function analyseThermal(a: ResolvedAssembly): ThermalResult {
   const vented = series.counted.includes(false);
   const method =
     "Layers in series with air films (isothermal planes); framed layers combine cavity and framing by area-weighted conductance." +
-    (vented ? " Layers outboard of the ventilated cavity (and the cavity itself) do not count; a still-air film stands in for the outdoor film." : "") +
+    (vented
+      ? " Layers outboard of the ventilated cavity (and the cavity itself) do not count; a still-air film stands in for the outdoor film."
+      : "") +
     (films.exterior ? "" : " Below grade: no exterior film; the soil face is taken at the stated ground temperature.") +
     (pp !== null ? " The parallel-path figure (heat paths through every layer) is shown for comparison." : "");
   return {
-    layers, films: filmList, rsi, r_ip: rsiToRip(rsi), u_si: 1 / rsi, u_ip: usiToUip(1 / rsi),
+    layers,
+    films: filmList,
+    rsi,
+    r_ip: rsiToRip(rsi),
+    u_si: 1 / rsi,
+    u_ip: usiToUip(1 / rsi),
     parallelPath: pp === null ? null : { rsi: pp, r_ip: rsiToRip(pp), u_si: 1 / pp, u_ip: usiToUip(1 / pp) },
     method,
   };
 }
 
 /** Effective R and U of an assembly (winter films, isothermal planes). */
-export function assemblyRValue(assembly: AssemblyInput, materials: MaterialLibrary): { rsi: number; r_ip: number; u_si: number; u_ip: number } {
+export function assemblyRValue(
+  assembly: AssemblyInput,
+  materials: MaterialLibrary,
+): { rsi: number; r_ip: number; u_si: number; u_ip: number } {
   const t = analyseThermal(resolveAssembly(assembly, materials));
   return { rsi: t.rsi, r_ip: t.r_ip, u_si: t.u_si, u_ip: t.u_ip };
 }

@@ -4,15 +4,33 @@ import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
 import type { IndoorMethodId } from "./indoor-climate";
 
 export const ASSEMBLY_KINDS = [
-  "above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor", "basement-wall", "slab",
+  "above-grade-wall",
+  "roof",
+  "floor",
+  "crawlspace-wall",
+  "crawlspace-floor",
+  "basement-wall",
+  "slab",
   "rim-joist",
 ] as const;
 export type AssemblyKind = (typeof ASSEMBLY_KINDS)[number];
 
 export const LAYER_ROLES = [
-  "cladding", "drainage-gap", "water-resistive-barrier", "air-barrier", "sheathing", "insulation",
-  "vapour-retarder", "structure", "interior-finish", "thermal-barrier", "soil-side-protection",
-  "capillary-break", "roofing", "underlayment", "subfloor",
+  "cladding",
+  "drainage-gap",
+  "water-resistive-barrier",
+  "air-barrier",
+  "sheathing",
+  "insulation",
+  "vapour-retarder",
+  "structure",
+  "interior-finish",
+  "thermal-barrier",
+  "soil-side-protection",
+  "capillary-break",
+  "roofing",
+  "underlayment",
+  "subfloor",
 ] as const;
 export type LayerRole = (typeof LAYER_ROLES)[number];
 
@@ -97,7 +115,14 @@ export interface ResolvedSite {
   summer: { t_c: number; rh: number; cladding_t_c: number };
   ground_t_c: number;
   /** method and basis: how the winter indoor RH was set, and the sentence that says so. */
-  indoor: { t_c: number; rh: number; summer_t_c: number; summer_rh: number; method: IndoorMethodId | "given"; basis: string };
+  indoor: {
+    t_c: number;
+    rh: number;
+    summer_t_c: number;
+    summer_rh: number;
+    method: IndoorMethodId | "given";
+    basis: string;
+  };
   edition: CodeEdition;
   country: Country;
   /** Canadian sites: where the degree-days came from, the NBC zone and the code compared. */
@@ -213,7 +238,10 @@ export interface ProfileCase {
   notes: string[];
 }
 
-export interface UpperWallProfiles { aboveGrade: ProfileCase; frostDepth: ProfileCase }
+export interface UpperWallProfiles {
+  aboveGrade: ProfileCase;
+  frostDepth: ProfileCase;
+}
 
 export interface VapourResult {
   layers: VapourLayer[];
@@ -282,13 +310,21 @@ export interface CanadianSite {
   edition: NbcEdition;
 }
 
-export interface MonthInput { t_c: number; rh: number }
+export interface MonthInput {
+  t_c: number;
+  rh: number;
+}
 export interface ClimateYearInput {
   months?: readonly MonthInput[];
   csv?: string;
 }
 
-export interface MonthClimate { month: number; name: string; t_c: number; rh: number }
+export interface MonthClimate {
+  month: number;
+  name: string;
+  t_c: number;
+  rh: number;
+}
 export interface ClimateYear {
   source: "typed" | "csv" | "generated";
   months: MonthClimate[];

@@ -2,7 +2,7 @@
 // these helpers convert for display and for IP inputs.
 
 /** 1 h·ft²·°F/Btu in m²·K/W (from 1 ft = 0.3048 m, Btu_IT = 1055.05585 J; docs/references.md §2). */
-export const RSI_PER_RIP = 0.176110;
+export const RSI_PER_RIP = 0.17611;
 /** 1 US perm (grain/(h·ft²·inHg), inHg at 32 °F) in ng/(s·m²·Pa) (docs/references.md §2). */
 export const NG_PER_PERM = 57.2135;
 export const MM_PER_IN = 25.4;

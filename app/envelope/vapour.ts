@@ -25,7 +25,11 @@ export function isRhDependent(m: Material): boolean {
   return m.vapour.curve !== undefined || m.vapour.wet_cup_ng !== undefined;
 }
 
-interface RhCurve { rh: number[]; p: number[]; ln: number[] }
+interface RhCurve {
+  rh: number[];
+  p: number[];
+  ln: number[];
+}
 const curveCache = new WeakMap<Material, RhCurve | null>();
 /** The material's RH curve (or its dry/wet cup pair) with ln(permeance) at each point, built once. */
 function rhCurve(m: Material): RhCurve | null {
@@ -34,9 +38,14 @@ function rhCurve(m: Material): RhCurve | null {
     const points: readonly (readonly [number, number])[] | undefined =
       m.vapour.curve ??
       (m.vapour.wet_cup_ng !== undefined
-        ? [[DRY_CUP_MEAN_RH, m.vapour.permeance_ng], [WET_CUP_MEAN_RH, m.vapour.wet_cup_ng]]
+        ? [
+            [DRY_CUP_MEAN_RH, m.vapour.permeance_ng],
+            [WET_CUP_MEAN_RH, m.vapour.wet_cup_ng],
+          ]
         : undefined);
-    c = points ? { rh: points.map((q) => q[0]), p: points.map((q) => q[1]), ln: points.map((q) => Math.log(q[1])) } : null;
+    c = points
+      ? { rh: points.map((q) => q[0]), p: points.map((q) => q[1]), ln: points.map((q) => Math.log(q[1])) }
+      : null;
     curveCache.set(m, c);
   }
   return c;
@@ -78,7 +87,10 @@ const dryCache = new WeakMap<ResolvedAssembly, number[]>();
 /** Dry-cup permeance of every layer (area-weighted for framed layers), computed once per assembly. */
 export function dryPermeances(a: ResolvedAssembly): readonly number[] {
   let dry = dryCache.get(a);
-  if (!dry) { dry = a.layers.map((l) => layerPermeance(l)); dryCache.set(a, dry); }
+  if (!dry) {
+    dry = a.layers.map((l) => layerPermeance(l));
+    dryCache.set(a, dry);
+  }
   return dry;
 }
 
@@ -120,14 +132,18 @@ function isWaterSensitiveCore(layer: ResolvedLayer): boolean {
 const coreCache = new WeakMap<ResolvedAssembly, { first: number; last: number } | null>();
 export function coreRange(a: ResolvedAssembly): { first: number; last: number } | null {
   let core = coreCache.get(a);
-  if (core === undefined) { core = findCoreRange(a); coreCache.set(a, core); }
+  if (core === undefined) {
+    core = findCoreRange(a);
+    coreCache.set(a, core);
+  }
   return core;
 }
 
 function findCoreRange(a: ResolvedAssembly): { first: number; last: number } | null {
   // Layers outboard of a ventilated cavity (a vented attic, a rainscreen) are outdoors for drying.
   let vent = -1;
-  for (const l of a.layers) if (l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)) vent = l.index;
+  for (const l of a.layers)
+    if (l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)) vent = l.index;
   const inboard = vent < a.layers.length - 1 ? a.layers.slice(vent + 1) : a.layers;
   let idx = inboard.filter(isWaterSensitiveCore).map((l) => l.index);
   if (idx.length === 0) {
@@ -149,7 +165,10 @@ function interiorSide(a: ResolvedAssembly): ResolvedLayer[] {
   return innermost < 0 ? [] : a.layers.slice(innermost + 1);
 }
 
-function classOfStack(layers: readonly ResolvedLayer[], dry: readonly number[]): { cls: InteriorClass; perm_us: number | null } {
+function classOfStack(
+  layers: readonly ResolvedLayer[],
+  dry: readonly number[],
+): { cls: InteriorClass; perm_us: number | null } {
   if (layers.length === 0) return { cls: "none", perm_us: null };
   const w = seriesPermeance(layers.map((l) => dry[l.index]));
   const c = retarderClass(w);
@@ -181,7 +200,14 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
   const dry = dryPermeances(a);
   const layers: VapourLayer[] = a.layers.map((l) => {
     const w = dry[l.index];
-    return { index: l.index, material: l.material.slug, perm_ng: w, perm_us: ngToPerm(w), class: retarderClass(w), case_perm_ng: w };
+    return {
+      index: l.index,
+      material: l.material.slug,
+      perm_ng: w,
+      perm_us: ngToPerm(w),
+      class: retarderClass(w),
+      case_perm_ng: w,
+    };
   });
   const interior = classOfStack(interiorSide(a), dry);
   const core = coreRange(a);
@@ -191,7 +217,9 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
     const inside = a.layers.slice(core.last + 1);
     let outside = a.layers.slice(0, core.first);
     // A vented cavity connects to outdoor air: layers outboard of it do not hold drying back.
-    const gap = outside.map((l) => l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family)).lastIndexOf(true);
+    const gap = outside
+      .map((l) => l.input.role === "drainage-gap" && VENTED_GAP_FAMILIES.has(l.material.family))
+      .lastIndexOf(true);
     if (gap >= 0) outside = outside.slice(gap + 1);
     inwardPerm = wetCupPermOf(inside);
     outwardPerm = wetCupPermOf(outside);
@@ -213,4 +241,3 @@ export function analyseVapour(a: ResolvedAssembly): VapourResult {
     explanation,
   };
 }
-

@@ -22,7 +22,13 @@ function transport(): Transporter {
 }
 
 export async function sendMail(to: string, content: MailContent): Promise<void> {
-  await transport().sendMail({ from: env().MAIL_FROM, to, subject: content.subject, text: content.text, html: content.html });
+  await transport().sendMail({
+    from: env().MAIL_FROM,
+    to,
+    subject: content.subject,
+    text: content.text,
+    html: content.html,
+  });
 }
 
 /**

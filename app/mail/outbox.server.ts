@@ -19,6 +19,10 @@ export async function listCaughtMail(limit = 100, outboxDir = env().MAIL_OUTBOX_
     return []; // no catcher has run yet
   }
   names.sort().reverse();
-  const messages = await Promise.all(names.slice(0, limit).map(async (name) => JSON.parse(await readFile(join(outboxDir, name), "utf8")) as CaughtMessage));
+  const messages = await Promise.all(
+    names
+      .slice(0, limit)
+      .map(async (name) => JSON.parse(await readFile(join(outboxDir, name), "utf8")) as CaughtMessage),
+  );
   return messages;
 }

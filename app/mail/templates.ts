@@ -29,11 +29,23 @@ export function verifyEmailMail({ displayName, link }: { displayName: string; li
     "Confirm this address to finish setting up your Dryside account. The link works once and expires in 24 hours.",
     "If you did not sign up, ignore this message; no account becomes active without it.",
   ];
-  return { subject: "Confirm your e-mail for Dryside", text: text(lines, link), html: html(lines, { href: link, label: "Confirm my e-mail" }) };
+  return {
+    subject: "Confirm your e-mail for Dryside",
+    text: text(lines, link),
+    html: html(lines, { href: link, label: "Confirm my e-mail" }),
+  };
 }
 
 /** Sent when someone signs up with an address that already has an account, so sign-up never reveals it. */
-export function alreadyRegisteredMail({ displayName, signInLink, resetLink }: { displayName: string; signInLink: string; resetLink: string }): MailContent {
+export function alreadyRegisteredMail({
+  displayName,
+  signInLink,
+  resetLink,
+}: {
+  displayName: string;
+  signInLink: string;
+  resetLink: string;
+}): MailContent {
   const lines = [
     `Hello ${displayName},`,
     "Someone tried to create a Dryside account with this address, which already has one.",
@@ -48,20 +60,52 @@ export function resetPasswordMail({ displayName, link }: { displayName: string; 
     "Use this link to choose a new Dryside password. It works once and expires in one hour; choosing a new password signs out every other browser.",
     "If you did not ask for this, ignore this message; your password stays as it is.",
   ];
-  return { subject: "Choose a new Dryside password", text: text(lines, link), html: html(lines, { href: link, label: "Choose a new password" }) };
+  return {
+    subject: "Choose a new Dryside password",
+    text: text(lines, link),
+    html: html(lines, { href: link, label: "Choose a new password" }),
+  };
 }
 
-export function revisionAlertMail({ displayName, detailTitle, revision, changeNote, link }: { displayName: string; detailTitle: string; revision: number; changeNote: string; link: string }): MailContent {
+export function revisionAlertMail({
+  displayName,
+  detailTitle,
+  revision,
+  changeNote,
+  link,
+}: {
+  displayName: string;
+  detailTitle: string;
+  revision: number;
+  changeNote: string;
+  link: string;
+}): MailContent {
   const lines = [
     `Hello ${displayName},`,
     `A detail you saved was revised: “${detailTitle}”, revision ${revision}.`,
     `What changed: ${changeNote}`,
     "Check the revision against your drawings before you build from it, and confirm it with the code adopted where you build.",
   ];
-  return { subject: `Revised: ${detailTitle} (revision ${revision})`, text: text(lines, link), html: html(lines, { href: link, label: "Read the revision" }) };
+  return {
+    subject: `Revised: ${detailTitle} (revision ${revision})`,
+    text: text(lines, link),
+    html: html(lines, { href: link, label: "Read the revision" }),
+  };
 }
 
-export function receiptMail({ displayName, item, amount, date, reference }: { displayName: string; item: string; amount: string; date: string; reference: string }): MailContent {
+export function receiptMail({
+  displayName,
+  item,
+  amount,
+  date,
+  reference,
+}: {
+  displayName: string;
+  item: string;
+  amount: string;
+  date: string;
+  reference: string;
+}): MailContent {
   const lines = [
     `Hello ${displayName},`,
     `Thank you. This is your receipt for ${item}.`,

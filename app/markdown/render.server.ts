@@ -9,5 +9,9 @@ const purify = createDOMPurify(new JSDOM("").window);
 /** Markdown written by editors, rendered and sanitised on the server; safe to inject as HTML. */
 export function renderMarkdown(markdown: string): string {
   const html = marked.parse(markdown) as string;
-  return purify.sanitize(html, { USE_PROFILES: { html: true }, FORBID_TAGS: ["style", "form", "input"], FORBID_ATTR: ["style"] });
+  return purify.sanitize(html, {
+    USE_PROFILES: { html: true },
+    FORBID_TAGS: ["style", "form", "input"],
+    FORBID_ATTR: ["style"],
+  });
 }

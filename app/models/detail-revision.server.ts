@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+} from "sequelize";
 import type { DetailFrontMatter } from "~/content/detail-schema";
 import type { Detail } from "./detail.server";
 import type { ReviewComment } from "./review-comment.server";

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+} from "sequelize";
 import type { Detail } from "./detail.server";
 import type { Entitlement } from "./entitlement.server";
 import { sequelize } from "~/db/sequelize.server";

@@ -1,4 +1,12 @@
-import { Op, DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from "sequelize";
+import {
+  Op,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+} from "sequelize";
 import type { DetailRevision } from "./detail-revision.server";
 import type { DetailSet } from "./detail-set.server";
 import type { SavedDetail } from "./saved-detail.server";

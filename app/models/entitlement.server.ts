@@ -1,8 +1,20 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+} from "sequelize";
 import { sequelize } from "~/db/sequelize.server";
 import type { User } from "./user.server";
 import type { DetailSet } from "./detail-set.server";
-import { ENTITLEMENT_KINDS, ENTITLEMENT_STATUSES, type EntitlementKind, type EntitlementStatus } from "~/vocabulary/entitlements";
+import {
+  ENTITLEMENT_KINDS,
+  ENTITLEMENT_STATUSES,
+  type EntitlementKind,
+  type EntitlementStatus,
+} from "~/vocabulary/entitlements";
 
 /** A user's right to premium content: a plan (all premium sets) or one bought set. Written only by payment webhooks. */
 export class Entitlement extends Model<InferAttributes<Entitlement>, InferCreationAttributes<Entitlement>> {

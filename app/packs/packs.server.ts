@@ -48,7 +48,20 @@ async function packMembers(setId: number): Promise<PackMember[]> {
   return details.flatMap((detail) => {
     const revision = detail.publishedRevision;
     if (!revision) return [];
-    return [{ slug: detail.slug, revisionId: revision.id, revisionNumber: revision.number, contentHash: revision.contentHash, frontMatter: revision.frontMatter, body: revision.bodyMd, publishedAt: revision.publishedAt, authorName: revision.authorName, reviewerName: revision.reviewerName, changeNote: revision.changeNote }];
+    return [
+      {
+        slug: detail.slug,
+        revisionId: revision.id,
+        revisionNumber: revision.number,
+        contentHash: revision.contentHash,
+        frontMatter: revision.frontMatter,
+        body: revision.bodyMd,
+        publishedAt: revision.publishedAt,
+        authorName: revision.authorName,
+        reviewerName: revision.reviewerName,
+        changeNote: revision.changeNote,
+      },
+    ];
   });
 }
 
@@ -59,9 +72,23 @@ async function materialsVersion(): Promise<string> {
 }
 
 /** The cache key: readable prefix for people, hash of everything the content depends on. */
-export function packKey(setSlug: string, request: PackRequest, members: Pick<PackMember, "slug" | "revisionId" | "contentHash">[], materials: string): string {
+export function packKey(
+  setSlug: string,
+  request: PackRequest,
+  members: Pick<PackMember, "slug" | "revisionId" | "contentHash">[],
+  materials: string,
+): string {
   const fingerprint = createHash("sha256")
-    .update(JSON.stringify({ format: PACK_FORMAT, set: setSlug, units: request.units, zone: request.zone, materials, members: members.map((m) => [m.slug, m.revisionId, m.contentHash]) }))
+    .update(
+      JSON.stringify({
+        format: PACK_FORMAT,
+        set: setSlug,
+        units: request.units,
+        zone: request.zone,
+        materials,
+        members: members.map((m) => [m.slug, m.revisionId, m.contentHash]),
+      }),
+    )
     .digest("hex")
     .slice(0, 20);
   return `packs/${setSlug}/${request.units}-${request.zone.toLowerCase()}-${fingerprint}.zip`;
@@ -92,10 +119,15 @@ export function cautionsOf(body: string): string[] {
   return items.map((item) => plainText(item)).filter(Boolean);
 }
 
-async function sheetPdf(member: PackMember, request: PackRequest, library: ReadonlyMap<string, Material>): Promise<Buffer> {
+async function sheetPdf(
+  member: PackMember,
+  request: PackRequest,
+  library: ReadonlyMap<string, Material>,
+): Promise<Buffer> {
   const zone = request.zone === "own" ? member.frontMatter.zones[0] : request.zone;
   const check = await checkAssemblyForSite(member.frontMatter, { units: request.units, zone });
-  if (!check.ok) throw new Error(`site check for ${member.slug} at ${zone} failed: ${JSON.stringify(check.fieldErrors)}`);
+  if (!check.ok)
+    throw new Error(`site check for ${member.slug} at ${zone} failed: ${JSON.stringify(check.fieldErrors)}`);
   const front = member.frontMatter;
   return renderDetailSheet({
     title: front.title,
@@ -115,7 +147,13 @@ async function sheetPdf(member: PackMember, request: PackRequest, library: Reado
       materialName: library.get(layer.material)?.name ?? layer.material,
       thickness_mm: layer.thickness_mm,
       ...(layer.framing
-        ? { framing: { fraction: layer.framing.fraction, family: library.get(layer.framing.material)?.family ?? "lumber", materialName: library.get(layer.framing.material)?.name } }
+        ? {
+            framing: {
+              fraction: layer.framing.fraction,
+              family: library.get(layer.framing.material)?.family ?? "lumber",
+              materialName: library.get(layer.framing.material)?.name,
+            },
+          }
         : {}),
     })),
     units: request.units,
@@ -152,7 +190,10 @@ const building = new Map<string, Promise<void>>();
  * downloader while the same bytes are stored (so a first download starts at once instead of after
  * every sheet is rendered).
  */
-async function openPack(key: string, build: () => Readable): Promise<{ body: Readable; size: number | null; built: boolean }> {
+async function openPack(
+  key: string,
+  build: () => Readable,
+): Promise<{ body: Readable; size: number | null; built: boolean }> {
   const storage = blobStorage();
   const pending = building.get(key);
   if (pending) await pending;
@@ -169,7 +210,9 @@ async function openPack(key: string, build: () => Readable): Promise<{ body: Rea
   source.pipe(toStorage);
   const write = storage.put(key, toStorage).finally(() => building.delete(key));
   building.set(key, write);
-  write.catch((error: unknown) => console.error(`pack ${key} was not stored:`, error instanceof Error ? error.message : error));
+  write.catch((error: unknown) =>
+    console.error(`pack ${key} was not stored:`, error instanceof Error ? error.message : error),
+  );
   return { body: toClient, size: null, built: true };
 }
 

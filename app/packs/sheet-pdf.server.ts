@@ -7,16 +7,36 @@ import { dirname, join } from "node:path";
 import PDFDocument from "pdfkit";
 import { STANDING_CAUTION } from "~/vocabulary/caution";
 import { profileGeometry } from "~/drawing/profile-geometry";
-import { asSentence, seasonalFigures, seasonalGeometry, seasonalVerdictLabel, SEASONAL_CHART_WIDTHS } from "~/drawing/seasonal-geometry";
+import {
+  asSentence,
+  seasonalFigures,
+  seasonalGeometry,
+  seasonalVerdictLabel,
+  SEASONAL_CHART_WIDTHS,
+} from "~/drawing/seasonal-geometry";
 import { sectionGeometry, type SectionLayer } from "~/drawing/section-geometry";
 import { INK, type Shape } from "~/drawing/shapes";
 import type { AssemblyKind, Flag, ProfileCase, SeasonalResult, SiteCheckResult } from "~/envelope/types";
-import { formatPermeance, formatR, formatTemperature, formatTemperatureDifference, formatThickness, formatU, type UnitSystem } from "~/envelope/units";
+import {
+  formatPermeance,
+  formatR,
+  formatTemperature,
+  formatTemperatureDifference,
+  formatThickness,
+  formatU,
+  type UnitSystem,
+} from "~/envelope/units";
 
 export interface DetailSheetInput {
   title: string;
   slug: string;
-  revision: { number: number; publishedAt: Date | string; authorName: string; reviewerName: string; changeNote?: string | null };
+  revision: {
+    number: number;
+    publishedAt: Date | string;
+    authorName: string;
+    reviewerName: string;
+    changeNote?: string | null;
+  };
   summary: string;
   kind: AssemblyKind;
   /** Exterior → interior, as for the section drawing. */
@@ -39,15 +59,26 @@ const FONTS = { sans: "Inter", sansBold: "Inter-Bold", serif: "Merriweather", se
 const require = createRequire(import.meta.url);
 function fontFile(pkg: "inter" | "merriweather", weight: 400 | 700): string {
   // WOFF v1: pdfkit reads it; WOFF2 fails or draws blank (STACK.md).
-  return join(dirname(require.resolve(`@fontsource/${pkg}/package.json`)), "files", `${pkg}-latin-${weight}-normal.woff`);
+  return join(
+    dirname(require.resolve(`@fontsource/${pkg}/package.json`)),
+    "files",
+    `${pkg}-latin-${weight}-normal.woff`,
+  );
 }
 
 /** The embedded fonts are Latin subsets: map the few symbols outside them to plain text. */
 export function pdfText(text: string): string {
-  return text
-    .replace(/≥/g, ">=").replace(/≤/g, "<=").replace(/→/g, "->").replace(/←/g, "<-")
-    // biome-ignore lint/suspicious/noControlCharactersInRegex: the range keeps what the PDF font can draw, control characters included in the count
-    .replace(/≈/g, "~").replace(/[\u2070-\u209f]/g, "").replace(/[^\u0000-\u024f\u2000-\u206f\u20ac\u2122\u2212]/g, "?");
+  return (
+    text
+      .replace(/≥/g, ">=")
+      .replace(/≤/g, "<=")
+      .replace(/→/g, "->")
+      .replace(/←/g, "<-")
+      .replace(/≈/g, "~")
+      .replace(/[\u2070-\u209f]/g, "")
+      // biome-ignore lint/suspicious/noControlCharactersInRegex: the range keeps what the PDF font can draw, control characters included in the count
+      .replace(/[^\u0000-\u024f\u2000-\u206f\u20ac\u2122\u2212]/g, "?")
+  );
 }
 
 function isoDate(value: Date | string): string {
@@ -114,8 +145,19 @@ export function drawShapes(doc: Doc, shapes: readonly Shape[], x: number, y: num
 }
 
 /** Writes a block of text within [x, x + width], no lower than `limit`; returns the new y. */
-function block(doc: Doc, text: string, x: number, y: number, width: number, limit: number, style: { font: string; size: number; color?: string; gap?: number }): number {
-  doc.font(style.font).fontSize(style.size).fillColor(style.color ?? INK.graphite);
+function block(
+  doc: Doc,
+  text: string,
+  x: number,
+  y: number,
+  width: number,
+  limit: number,
+  style: { font: string; size: number; color?: string; gap?: number },
+): number {
+  doc
+    .font(style.font)
+    .fontSize(style.size)
+    .fillColor(style.color ?? INK.graphite);
   const value = pdfText(text);
   const room = limit - y;
   if (room < style.size) return y;
@@ -125,8 +167,16 @@ function block(doc: Doc, text: string, x: number, y: number, width: number, limi
 }
 
 function heading(doc: Doc, text: string, x: number, y: number, width: number): number {
-  doc.font(FONTS.sansBold).fontSize(7.5).fillColor(INK.ochre).text(pdfText(text), x, y, { characterSpacing: 0.2, lineBreak: false });
-  doc.moveTo(x, y + 10).lineTo(x + width, y + 10).lineWidth(0.5).stroke(INK.rule);
+  doc
+    .font(FONTS.sansBold)
+    .fontSize(7.5)
+    .fillColor(INK.ochre)
+    .text(pdfText(text), x, y, { characterSpacing: 0.2, lineBreak: false });
+  doc
+    .moveTo(x, y + 10)
+    .lineTo(x + width, y + 10)
+    .lineWidth(0.5)
+    .stroke(INK.rule);
   return y + 14;
 }
 
@@ -145,34 +195,69 @@ function layerTable(doc: Doc, input: DetailSheetInput, y: number): number {
     let cx = x;
     doc.font(font).fontSize(7.4).fillColor(color);
     cells.forEach((c, i) => {
-      doc.text(pdfText(c), cx, yy, { width: cols[i].w - 4, align: cols[i].align, lineBreak: false, ellipsis: "…", height: 9 });
+      doc.text(pdfText(c), cx, yy, {
+        width: cols[i].w - 4,
+        align: cols[i].align,
+        lineBreak: false,
+        ellipsis: "…",
+        height: 9,
+      });
       cx += cols[i].w;
     });
   };
-  row(cols.map((c) => c.label), y, FONTS.sansBold, INK.graphiteSoft);
+  row(
+    cols.map((c) => c.label),
+    y,
+    FONTS.sansBold,
+    INK.graphiteSoft,
+  );
   y += 10;
-  doc.moveTo(x, y - 1).lineTo(x + CONTENT_WIDTH, y - 1).lineWidth(0.5).stroke(INK.rule);
+  doc
+    .moveTo(x, y - 1)
+    .lineTo(x + CONTENT_WIDTH, y - 1)
+    .lineWidth(0.5)
+    .stroke(INK.rule);
   const geometryBands = sectionGeometry({ kind: input.kind, layers: input.layers }, { units }).bands;
   input.layers.forEach((layer, i) => {
     const thermal = siteCheck.thermal.layers[i];
     const vapour = siteCheck.vapour.layers[i];
-    const framed = layer.framing ? `, ${Math.round(layer.framing.fraction * 100)} % ${layer.framing.materialName?.toLowerCase() ?? "framing"}` : "";
+    const framed = layer.framing
+      ? `, ${Math.round(layer.framing.fraction * 100)} % ${layer.framing.materialName?.toLowerCase() ?? "framing"}`
+      : "";
     const star = geometryBands[i]?.drawnWiderThanScale ? " *" : "";
-    row([
-      String(i + 1),
-      `${layer.materialName} (${layer.role.replace(/-/g, " ")}${framed})`,
-      `${formatThickness(layer.thickness_mm, units)}${star}`,
-      thermal ? formatR(thermal.rsi, units) : "",
-      vapour ? formatPermeance(vapour.perm_ng, units) : "",
-      vapour ? (vapour.class === "permeable" ? "permeable" : `Class ${vapour.class}`) : "",
-    ], y, FONTS.sans);
+    row(
+      [
+        String(i + 1),
+        `${layer.materialName} (${layer.role.replace(/-/g, " ")}${framed})`,
+        `${formatThickness(layer.thickness_mm, units)}${star}`,
+        thermal ? formatR(thermal.rsi, units) : "",
+        vapour ? formatPermeance(vapour.perm_ng, units) : "",
+        vapour ? (vapour.class === "permeable" ? "permeable" : `Class ${vapour.class}`) : "",
+      ],
+      y,
+      FONTS.sans,
+    );
     y += 9.6;
   });
   const films = siteCheck.thermal.films.map((f) => `${f.label} ${formatR(f.rsi, units)}`).join("; ");
-  doc.moveTo(x, y).lineTo(x + CONTENT_WIDTH, y).lineWidth(0.5).stroke(INK.rule);
+  doc
+    .moveTo(x, y)
+    .lineTo(x + CONTENT_WIDTH, y)
+    .lineWidth(0.5)
+    .stroke(INK.rule);
   y += 3;
-  doc.font(FONTS.sans).fontSize(6.8).fillColor(INK.graphiteSoft)
-    .text(pdfText(`Air films: ${films}. * Thin layer drawn wider than scale. Framed layers: effective R by the isothermal-planes method.`), x, y, { width: CONTENT_WIDTH, lineBreak: false, ellipsis: "…", height: 9 });
+  doc
+    .font(FONTS.sans)
+    .fontSize(6.8)
+    .fillColor(INK.graphiteSoft)
+    .text(
+      pdfText(
+        `Air films: ${films}. * Thin layer drawn wider than scale. Framed layers: effective R by the isothermal-planes method.`,
+      ),
+      x,
+      y,
+      { width: CONTENT_WIDTH, lineBreak: false, ellipsis: "…", height: 9 },
+    );
   return y + 11;
 }
 
@@ -192,22 +277,66 @@ function siteCheckBlock(doc: Doc, input: DetailSheetInput, x: number, y: number,
   const where = site.canada
     ? `${site.canada.province ? `${site.canada.province}, ` : ""}NBC zone ${site.canada.nbcZone}, ${Math.round(site.canada.hdd18)} degree-days below 18 °C (design zone ${site.zone})`
     : `Climate zone ${site.zone}${site.zoneSource === "degree-days" ? " (from degree-days)" : ""}`;
-  y = block(doc, `${where}. Winter ${formatTemperature(site.winter.t_c, units)}, summer ${formatTemperature(site.summer.t_c, units)} at ${Math.round(site.summer.rh)} % RH. Checked at ${site.indoor.basis}.`, x, y, width, limit, small);
+  y = block(
+    doc,
+    `${where}. Winter ${formatTemperature(site.winter.t_c, units)}, summer ${formatTemperature(site.summer.t_c, units)} at ${Math.round(site.summer.rh)} % RH. Checked at ${site.indoor.basis}.`,
+    x,
+    y,
+    width,
+    limit,
+    small,
+  );
   doc.font(FONTS.sansBold).fontSize(9).fillColor(INK.graphite);
-  y = block(doc, `Effective ${formatR(r.thermal.rsi, units)}   ${formatU(r.thermal.u_si, units)}`, x, y + 1, width, limit, { font: FONTS.sansBold, size: 9, gap: 3 });
+  y = block(
+    doc,
+    `Effective ${formatR(r.thermal.rsi, units)}   ${formatU(r.thermal.u_si, units)}`,
+    x,
+    y + 1,
+    width,
+    limit,
+    { font: FONTS.sansBold, size: 9, gap: 3 },
+  );
   y = block(doc, caseLine(r.profiles.winter, units), x, y, width, limit, small);
   y = block(doc, caseLine(r.profiles.summer, units), x, y, width, limit, small);
-  y = block(doc, `Interior retarder: ${r.vapour.interiorClass === "none" ? "none" : `Class ${r.vapour.interiorClass}`}; dries ${r.vapour.dryingDirections.length ? r.vapour.dryingDirections.join(" and ") : "in neither direction"}.`, x, y, width, limit, { ...small, gap: 3 });
+  y = block(
+    doc,
+    `Interior retarder: ${r.vapour.interiorClass === "none" ? "none" : `Class ${r.vapour.interiorClass}`}; dries ${r.vapour.dryingDirections.length ? r.vapour.dryingDirections.join(" and ") : "in neither direction"}.`,
+    x,
+    y,
+    width,
+    limit,
+    { ...small, gap: 3 },
+  );
   if (r.seasonal) {
-    y = block(doc, `Through the year: ${seasonalVerdictLabel(r.seasonal)}.`, x, y, width, limit, { font: FONTS.sansBold, size: 7.4, color: r.seasonal.verdict === "accumulates" ? INK.stop : INK.graphite, gap: 1 });
-    y = block(doc, `${seasonalFigures(r.seasonal, units)}${r.seasonal.scopeNote ? ` ${r.seasonal.scopeNote}` : ""} Monthly chart overleaf.`, x, y, width, limit, { ...small, gap: 4 });
+    y = block(doc, `Through the year: ${seasonalVerdictLabel(r.seasonal)}.`, x, y, width, limit, {
+      font: FONTS.sansBold,
+      size: 7.4,
+      color: r.seasonal.verdict === "accumulates" ? INK.stop : INK.graphite,
+      gap: 1,
+    });
+    y = block(
+      doc,
+      `${seasonalFigures(r.seasonal, units)}${r.seasonal.scopeNote ? ` ${r.seasonal.scopeNote}` : ""} Monthly chart overleaf.`,
+      x,
+      y,
+      width,
+      limit,
+      { ...small, gap: 4 },
+    );
   }
   y = heading(doc, `Code rows compared, ${r.code.edition}`, x, y + 2, width);
   for (const row of r.code.rows) {
     if (y > limit - 9) break;
     const mark = row.pass ? "PASS" : "FAIL";
-    doc.font(FONTS.sansBold).fontSize(7).fillColor(row.pass ? INK.vapour : INK.stop).text(mark, x, y, { lineBreak: false });
-    y = block(doc, `${row.label}: required ${row.required}, provided ${row.provided}.`, x + 24, y, width - 24, limit, { font: FONTS.sans, size: 7.2 });
+    doc
+      .font(FONTS.sansBold)
+      .fontSize(7)
+      .fillColor(row.pass ? INK.vapour : INK.stop)
+      .text(mark, x, y, { lineBreak: false });
+    y = block(doc, `${row.label}: required ${row.required}, provided ${row.provided}.`, x + 24, y, width - 24, limit, {
+      font: FONTS.sans,
+      size: 7.2,
+    });
   }
   return block(doc, r.caution, x, y + 3, width, limit, { font: FONTS.sans, size: 6.8, color: INK.graphiteSoft });
 }
@@ -216,11 +345,20 @@ const SEVERITY_COLOUR: Record<Flag["severity"], string> = { stop: INK.stop, caut
 
 function notesColumn(doc: Doc, input: DetailSheetInput, x: number, y: number, width: number, limit: number): number {
   y = heading(doc, "Flags", x, y, width);
-  if (input.siteCheck.flags.length === 0) y = block(doc, "No flags for this site.", x, y, width, limit, { font: FONTS.sans, size: 7.4 });
+  if (input.siteCheck.flags.length === 0)
+    y = block(doc, "No flags for this site.", x, y, width, limit, { font: FONTS.sans, size: 7.4 });
   for (const flag of input.siteCheck.flags) {
     if (y > limit - 9) break;
-    doc.font(FONTS.sansBold).fontSize(6.8).fillColor(SEVERITY_COLOUR[flag.severity]).text(flag.severity.toUpperCase(), x, y + 0.4, { lineBreak: false, characterSpacing: 0.4 });
-    y = block(doc, `${flag.title}. ${flag.explanation} (${flag.source})`, x + 38, y, width - 38, limit, { font: FONTS.sans, size: 7, gap: 3 });
+    doc
+      .font(FONTS.sansBold)
+      .fontSize(6.8)
+      .fillColor(SEVERITY_COLOUR[flag.severity])
+      .text(flag.severity.toUpperCase(), x, y + 0.4, { lineBreak: false, characterSpacing: 0.4 });
+    y = block(doc, `${flag.title}. ${flag.explanation} (${flag.source})`, x + 38, y, width - 38, limit, {
+      font: FONTS.sans,
+      size: 7,
+      gap: 3,
+    });
   }
   if (input.cautions.length) {
     y = heading(doc, "Cautions", x, y + 3, width);
@@ -228,15 +366,23 @@ function notesColumn(doc: Doc, input: DetailSheetInput, x: number, y: number, wi
   }
   if (input.references.length) {
     y = heading(doc, "References", x, y + 3, width);
-    for (const ref of input.references) y = block(doc, ref, x, y, width, limit, { font: FONTS.sans, size: 7, color: INK.graphiteSoft, gap: 1 });
+    for (const ref of input.references)
+      y = block(doc, ref, x, y, width, limit, { font: FONTS.sans, size: 7, color: INK.graphiteSoft, gap: 1 });
   }
   return y;
 }
 
 function footer(doc: Doc, input: DetailSheetInput, generatedAt: Date): void {
   const x = PAGE.margin;
-  doc.moveTo(x, FOOTER_TOP - 4).lineTo(x + CONTENT_WIDTH, FOOTER_TOP - 4).lineWidth(0.6).stroke(INK.graphiteSoft);
-  doc.font(FONTS.sansBold).fontSize(7.4).fillColor(INK.graphite)
+  doc
+    .moveTo(x, FOOTER_TOP - 4)
+    .lineTo(x + CONTENT_WIDTH, FOOTER_TOP - 4)
+    .lineWidth(0.6)
+    .stroke(INK.graphiteSoft);
+  doc
+    .font(FONTS.sansBold)
+    .fontSize(7.4)
+    .fillColor(INK.graphite)
     .text(STANDING_CAUTION, x, FOOTER_TOP, { width: CONTENT_WIDTH, lineGap: 0.5 });
   doc.font(FONTS.sans).fontSize(6.6).fillColor(INK.graphiteSoft);
   const left = `${input.slug} · revision ${input.revision.number} · generated ${isoDate(generatedAt)}${input.generatedFor ? ` for ${pdfText(input.generatedFor)}` : ""}`;
@@ -251,13 +397,33 @@ function render(doc: Doc, input: DetailSheetInput): void {
 
   // Header.
   doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", x, y, { lineBreak: false });
-  doc.font(FONTS.sans).fontSize(7).fillColor(INK.graphiteSoft)
-    .text(pdfText(`Detail sheet · ${input.units === "ip" ? "inch-pound units" : "SI units"}`), x, y + 2, { width: CONTENT_WIDTH, align: "right", lineBreak: false });
+  doc
+    .font(FONTS.sans)
+    .fontSize(7)
+    .fillColor(INK.graphiteSoft)
+    .text(pdfText(`Detail sheet · ${input.units === "ip" ? "inch-pound units" : "SI units"}`), x, y + 2, {
+      width: CONTENT_WIDTH,
+      align: "right",
+      lineBreak: false,
+    });
   y += 16;
   y = block(doc, input.title, x, y, CONTENT_WIDTH, y + 44, { font: FONTS.serifBold, size: 14.5, gap: 3 });
-  y = block(doc, input.summary, x, y, CONTENT_WIDTH, y + 20, { font: FONTS.sans, size: 8, color: INK.graphiteSoft, gap: 3 });
+  y = block(doc, input.summary, x, y, CONTENT_WIDTH, y + 20, {
+    font: FONTS.sans,
+    size: 8,
+    color: INK.graphiteSoft,
+    gap: 3,
+  });
   const rev = input.revision;
-  y = block(doc, `Revision ${rev.number}, published ${isoDate(rev.publishedAt)} · written by ${rev.authorName} · reviewed by ${rev.reviewerName}${rev.changeNote ? ` · ${rev.changeNote}` : ""}`, x, y, CONTENT_WIDTH, y + 20, { font: FONTS.sans, size: 7.4, gap: 4 });
+  y = block(
+    doc,
+    `Revision ${rev.number}, published ${isoDate(rev.publishedAt)} · written by ${rev.authorName} · reviewed by ${rev.reviewerName}${rev.changeNote ? ` · ${rev.changeNote}` : ""}`,
+    x,
+    y,
+    CONTENT_WIDTH,
+    y + 20,
+    { font: FONTS.sans, size: 7.4, gap: 4 },
+  );
 
   // Section drawing: same primitives as the page, legend replaced by the layer table.
   const geometry = sectionGeometry({ kind: input.kind, layers: input.layers }, { units: input.units, legend: false });
@@ -290,7 +456,11 @@ function seasonalPage(doc: Doc, input: DetailSheetInput, seasonal: SeasonalResul
   let y: number = PAGE.margin;
   doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", x, y, { lineBreak: false });
   y += 16;
-  y = block(doc, `${input.title}: through the year`, x, y, CONTENT_WIDTH, y + 20, { font: FONTS.serifBold, size: 12, gap: 4 });
+  y = block(doc, `${input.title}: through the year`, x, y, CONTENT_WIDTH, y + 20, {
+    font: FONTS.serifBold,
+    size: 12,
+    gap: 4,
+  });
   y = heading(doc, "Seasonal balance, month by month", x, y, CONTENT_WIDTH);
   y = block(doc, seasonal.explanation, x, y, CONTENT_WIDTH, limit, { font: FONTS.sans, size: 7.6, gap: 6 });
   const chart = seasonalGeometry(seasonal, { units: input.units, width: SEASONAL_CHART_WIDTHS.wide });
@@ -299,11 +469,35 @@ function seasonalPage(doc: Doc, input: DetailSheetInput, seasonal: SeasonalResul
   y += chart.height * k + 8;
   const small = { font: FONTS.sans, size: 7.2, color: INK.graphiteSoft, gap: 3 };
   const year = seasonal.climate;
-  y = block(doc, `${year.source === "generated" ? "Site year GENERATED by Dryside, not measured: " : year.source === "csv" ? "Site year from an uploaded file. " : "Site year as typed. "}${year.note}`, x, y, CONTENT_WIDTH, limit, small);
-  y = block(doc, `Indoor: ${input.siteCheck.site.indoor.basis} on the design day; each month by the same method at its mean outdoor temperature.`, x, y, CONTENT_WIDTH, limit, small);
+  y = block(
+    doc,
+    `${year.source === "generated" ? "Site year GENERATED by Dryside, not measured: " : year.source === "csv" ? "Site year from an uploaded file. " : "Site year as typed. "}${year.note}`,
+    x,
+    y,
+    CONTENT_WIDTH,
+    limit,
+    small,
+  );
+  y = block(
+    doc,
+    `Indoor: ${input.siteCheck.site.indoor.basis} on the design day; each month by the same method at its mean outdoor temperature.`,
+    x,
+    y,
+    CONTENT_WIDTH,
+    limit,
+    small,
+  );
   y = block(doc, `Code compared: ${input.siteCheck.code.edition}.`, x, y, CONTENT_WIDTH, limit, small);
   y = block(doc, `Method: ${asSentence(seasonal.method)}`, x, y, CONTENT_WIDTH, limit, small);
-  block(doc, `Interior surface: ${asSentence(seasonal.surface.method)} ${seasonal.surface.explanation}`, x, y, CONTENT_WIDTH, limit, small);
+  block(
+    doc,
+    `Interior surface: ${asSentence(seasonal.surface.method)} ${seasonal.surface.explanation}`,
+    x,
+    y,
+    CONTENT_WIDTH,
+    limit,
+    small,
+  );
 }
 
 /** A Letter document with the sheet's fonts, drawn by `draw`, as bytes. */
@@ -336,7 +530,11 @@ function letterPdf(info: PDFKit.DocumentInfo, draw: (doc: Doc) => void): Promise
  * seasonal balance month by month on the second. */
 export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
   return letterPdf(
-    { Title: pdfText(input.title), Subject: `Dryside detail sheet ${input.slug}, revision ${input.revision.number}`, Creator: "Dryside" },
+    {
+      Title: pdfText(input.title),
+      Subject: `Dryside detail sheet ${input.slug}, revision ${input.revision.number}`,
+      Creator: "Dryside",
+    },
     (doc) => render(doc, input),
   );
 }
@@ -355,8 +553,16 @@ export function renderProfilePages(title: string, siteCheck: SiteCheckResult, un
   return letterPdf({ Title: pdfText(`${title}: profiles`), Creator: "Dryside" }, (doc) => {
     for (const profile of [siteCheck.profiles.winter, siteCheck.profiles.summer]) {
       if (profile.name === "summer") doc.addPage();
-      doc.font(FONTS.serifBold).fontSize(12).fillColor(INK.graphite)
-        .text(pdfText(`${title}: ${profile.name} profile`), PAGE.margin, PAGE.margin, { width: CONTENT_WIDTH, lineBreak: false, ellipsis: "…", height: 16 });
+      doc
+        .font(FONTS.serifBold)
+        .fontSize(12)
+        .fillColor(INK.graphite)
+        .text(pdfText(`${title}: ${profile.name} profile`), PAGE.margin, PAGE.margin, {
+          width: CONTENT_WIDTH,
+          lineBreak: false,
+          ellipsis: "…",
+          height: 16,
+        });
       drawProfileChart(doc, profile, units, PAGE.margin + 22);
     }
   });

@@ -30,9 +30,18 @@ export async function billingOverview(user: User): Promise<BillingOverview> {
   const now = new Date();
   const [plan, boughtSets, receipts, downloads] = await Promise.all([
     currentPlan(user.id),
-    Entitlement.findAll({ where: { userId: user.id, kind: "set" }, include: [{ model: DetailSet, as: "detailSet", attributes: ["slug", "title"] }], order: [["createdAt", "DESC"]] }),
+    Entitlement.findAll({
+      where: { userId: user.id, kind: "set" },
+      include: [{ model: DetailSet, as: "detailSet", attributes: ["slug", "title"] }],
+      order: [["createdAt", "DESC"]],
+    }),
     receiptsFor(user.id),
-    Download.findAll({ where: { userId: user.id }, include: [{ model: DetailSet, as: "detailSet", attributes: ["title"] }], order: [["createdAt", "DESC"]], limit: 20 }),
+    Download.findAll({
+      where: { userId: user.id },
+      include: [{ model: DetailSet, as: "detailSet", attributes: ["title"] }],
+      order: [["createdAt", "DESC"]],
+      limit: 20,
+    }),
   ]);
   const sets = boughtSets.filter((set) => isLive(set, now));
   return {
@@ -45,7 +54,11 @@ export async function billingOverview(user: User): Promise<BillingOverview> {
           cancelAtPeriodEnd: plan.cancelAtPeriodEnd,
         }
       : null,
-    sets: sets.map((e) => ({ slug: e.detailSet?.slug ?? "", title: e.detailSet?.title ?? "A set", boughtAt: e.createdAt.toISOString() })),
+    sets: sets.map((e) => ({
+      slug: e.detailSet?.slug ?? "",
+      title: e.detailSet?.title ?? "A set",
+      boughtAt: e.createdAt.toISOString(),
+    })),
     receipts,
     downloads: downloads.map((d) => ({ setTitle: d.detailSet?.title ?? "A set", at: d.createdAt.toISOString() })),
   };

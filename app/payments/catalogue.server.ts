@@ -37,7 +37,6 @@ export const PLANS: readonly Plan[] = [
   },
 ];
 
-
 export function findPlan(slug: string): Plan | undefined {
   return PLANS.find((plan) => plan.slug === slug);
 }
@@ -100,16 +99,37 @@ export interface PriceSpec {
 }
 
 export function planPriceSpec(plan: Plan): PriceSpec {
-  return { lookupKey: plan.lookupKey, productName: `Dryside ${plan.name}`, description: plan.blurb, amountCents: plan.amountCents, currency: plan.currency, interval: plan.interval, metadata: { kind: "plan", plan_slug: plan.slug } };
+  return {
+    lookupKey: plan.lookupKey,
+    productName: `Dryside ${plan.name}`,
+    description: plan.blurb,
+    amountCents: plan.amountCents,
+    currency: plan.currency,
+    interval: plan.interval,
+    metadata: { kind: "plan", plan_slug: plan.slug },
+  };
 }
 
 export function setPriceSpec(offer: SetOffer): PriceSpec {
-  return { lookupKey: offer.lookupKey, productName: `Dryside set: ${offer.title}`, description: offer.summary.slice(0, 300), amountCents: offer.amountCents, currency: offer.currency, interval: null, metadata: { kind: "set", set_slug: offer.slug } };
+  return {
+    lookupKey: offer.lookupKey,
+    productName: `Dryside set: ${offer.title}`,
+    description: offer.summary.slice(0, 300),
+    amountCents: offer.amountCents,
+    currency: offer.currency,
+    interval: null,
+    metadata: { kind: "set", set_slug: offer.slug },
+  };
 }
 
 function priceMatches(price: Stripe.Price, spec: PriceSpec): boolean {
   const interval = price.recurring?.interval ?? null;
-  return price.active && price.unit_amount === spec.amountCents && price.currency === spec.currency && interval === spec.interval;
+  return (
+    price.active &&
+    price.unit_amount === spec.amountCents &&
+    price.currency === spec.currency &&
+    interval === spec.interval
+  );
 }
 
 /**
@@ -122,8 +142,11 @@ export async function ensurePrice(spec: PriceSpec): Promise<{ price: Stripe.Pric
   const existing = found.data[0];
   if (existing && priceMatches(existing, spec)) return { price: existing, created: false };
   const productId = existing
-    ? typeof existing.product === "string" ? existing.product : existing.product.id
-    : (await client.products.create({ name: spec.productName, description: spec.description, metadata: spec.metadata })).id;
+    ? typeof existing.product === "string"
+      ? existing.product
+      : existing.product.id
+    : (await client.products.create({ name: spec.productName, description: spec.description, metadata: spec.metadata }))
+        .id;
   const price = await client.prices.create({
     product: productId,
     unit_amount: spec.amountCents,

@@ -44,7 +44,8 @@ export async function startCheckout(user: User, purchase: Purchase): Promise<Che
   if (purchase.kind === "plan") {
     const plan = findPlan(purchase.plan);
     if (!plan) return { ok: false, status: 404, message: `There is no plan called “${purchase.plan}”.` };
-    if (await hasLivePlan(viewer)) return { ok: false, status: 409, message: "You already have a plan. Change or stop it on your billing page." };
+    if (await hasLivePlan(viewer))
+      return { ok: false, status: 409, message: "You already have a plan. Change or stop it on your billing page." };
     const { price } = await ensurePrice(planPriceSpec(plan));
     const session = await stripe().checkout.sessions.create({
       ...common,
@@ -60,7 +61,8 @@ export async function startCheckout(user: User, purchase: Purchase): Promise<Che
   const offer = await findSetOffer(purchase.set);
   if (!offer) return { ok: false, status: 404, message: `There is no set called “${purchase.set}”.` };
   const owned = await downloadableSetIds(viewer);
-  if (owned === "all" || owned.has(offer.id)) return { ok: false, status: 409, message: `You already have “${offer.title}”.` };
+  if (owned === "all" || owned.has(offer.id))
+    return { ok: false, status: 409, message: `You already have “${offer.title}”.` };
   const { price } = await ensurePrice(setPriceSpec(offer));
   const session = await stripe().checkout.sessions.create({
     ...common,

@@ -1,6 +1,8 @@
 // Amounts travel as integer minor units (cents), as the payments service stores them; only display formats.
 export function formatMoney(amountCents: number, currency: string): string {
-  return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(amountCents / 100);
+  return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(
+    amountCents / 100,
+  );
 }
 
 export type BillingInterval = "month" | "year";

@@ -41,7 +41,11 @@ export async function offersFor(viewer: Viewer | null): Promise<Offers> {
   );
   return {
     plans: PLANS.map((plan) => ({ slug: plan.slug, name: plan.name, price: planPriceLabel(plan), blurb: plan.blurb })),
-    sets: sets.map((set) => ({ ...set, details: detailsBySet.get(set.id) ?? [], owned: owned === "all" || owned.has(set.id) })),
+    sets: sets.map((set) => ({
+      ...set,
+      details: detailsBySet.get(set.id) ?? [],
+      owned: owned === "all" || owned.has(set.id),
+    })),
     signedIn: viewer !== null,
     hasPlan,
   };

@@ -21,7 +21,9 @@ export interface PaymentRecord {
  * stays listed on the billing page and receipt_sent_at stays empty.
  */
 export async function recordPayment(record: PaymentRecord): Promise<boolean> {
-  const where = record.stripeInvoiceId ? { stripeInvoiceId: record.stripeInvoiceId } : { stripeCheckoutSessionId: record.stripeCheckoutSessionId };
+  const where = record.stripeInvoiceId
+    ? { stripeInvoiceId: record.stripeInvoiceId }
+    : { stripeCheckoutSessionId: record.stripeCheckoutSessionId };
   let payment: Payment;
   let created: boolean;
   try {
@@ -68,5 +70,11 @@ export interface ReceiptRow {
 
 export async function receiptsFor(userId: number): Promise<ReceiptRow[]> {
   const rows = await Payment.findAll({ where: { userId }, order: [["paidAt", "DESC"]], limit: 100 });
-  return rows.map((row) => ({ id: row.id, description: row.description, amount: formatMoney(row.amountCents, row.currency), paidAt: row.paidAt.toISOString(), emailed: row.receiptSentAt !== null }));
+  return rows.map((row) => ({
+    id: row.id,
+    description: row.description,
+    amount: formatMoney(row.amountCents, row.currency),
+    paidAt: row.paidAt.toISOString(),
+    emailed: row.receiptSentAt !== null,
+  }));
 }

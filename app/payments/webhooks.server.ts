@@ -35,11 +35,19 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   try {
     event = stripe().webhooks.constructEvent(rawBody, signature, env().STRIPE_WEBHOOK_SECRET);
   } catch (error) {
-    return { status: 400, body: { received: false, error: "bad_signature", message: error instanceof Error ? error.message : "signature check failed" } };
+    return {
+      status: 400,
+      body: {
+        received: false,
+        error: "bad_signature",
+        message: error instanceof Error ? error.message : "signature check failed",
+      },
+    };
   }
 
   const seen = await PaymentEvent.findByPk(event.id);
-  if (seen && seen.result !== "failed") return { status: 200, body: { received: true, duplicate: true, result: seen.result } };
+  if (seen && seen.result !== "failed")
+    return { status: 200, body: { received: true, duplicate: true, result: seen.result } };
 
   let outcome: Applied | { result: "failed"; message: string };
   try {
@@ -57,7 +65,10 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
     receivedAt: new Date(),
   });
   // A failure answers 500 so the service delivers the event again; the stored row is then retried.
-  return { status: outcome.result === "failed" ? 500 : 200, body: { received: true, result: outcome.result, message: outcome.message } };
+  return {
+    status: outcome.result === "failed" ? 500 : 200,
+    body: { received: true, result: outcome.result, message: outcome.message },
+  };
 }
 
 async function applyEvent(event: Stripe.Event): Promise<Applied> {
@@ -83,25 +94,42 @@ function idOf(value: string | { id: string } | null | undefined): string | null 
 }
 
 async function onCheckoutCompleted(session: Stripe.Checkout.Session, created: number): Promise<Applied> {
-  if (session.payment_status !== "paid") return { result: "ignored", message: `checkout ${session.id} is ${session.payment_status}, nothing to grant yet` };
+  if (session.payment_status !== "paid")
+    return { result: "ignored", message: `checkout ${session.id} is ${session.payment_status}, nothing to grant yet` };
   const user = await User.findByPk(Number(session.client_reference_id));
-  if (!user) return { result: "ignored", message: `checkout ${session.id} names no known user (${session.client_reference_id ?? "none"})` };
+  if (!user)
+    return {
+      result: "ignored",
+      message: `checkout ${session.id} names no known user (${session.client_reference_id ?? "none"})`,
+    };
   const customerId = idOf(session.customer);
   if (customerId && !user.stripeCustomerId) await user.update({ stripeCustomerId: customerId });
 
   if (session.mode === "subscription") {
     const subscriptionId = idOf(session.subscription);
-    if (!subscriptionId) return { result: "ignored", message: `subscription checkout ${session.id} has no subscription` };
+    if (!subscriptionId)
+      return { result: "ignored", message: `subscription checkout ${session.id} has no subscription` };
     return syncSubscription(subscriptionId, created, { userId: user.id, checkoutSessionId: session.id });
   }
 
   const setSlug = session.metadata?.set_slug;
   const set = setSlug ? await DetailSet.findOne({ where: { slug: setSlug } }) : null;
-  if (session.metadata?.kind !== "set" || !set) return { result: "ignored", message: `checkout ${session.id} buys nothing Dryside sells (${setSlug ?? "no set"})` };
+  if (session.metadata?.kind !== "set" || !set)
+    return { result: "ignored", message: `checkout ${session.id} buys nothing Dryside sells (${setSlug ?? "no set"})` };
   const [, grantedNow] = await findOrCreateOnce(() =>
     Entitlement.findOrCreate({
       where: { stripeCheckoutSessionId: session.id },
-      defaults: { userId: user.id, kind: "set", planSlug: null, setId: set.id, status: "active", currentPeriodEnd: null, stripeCheckoutSessionId: session.id, stripeSubscriptionId: null, lastEventCreated: created },
+      defaults: {
+        userId: user.id,
+        kind: "set",
+        planSlug: null,
+        setId: set.id,
+        status: "active",
+        currentPeriodEnd: null,
+        stripeCheckoutSessionId: session.id,
+        stripeSubscriptionId: null,
+        lastEventCreated: created,
+      },
     }),
   );
   await recordPayment({
@@ -114,7 +142,12 @@ async function onCheckoutCompleted(session: Stripe.Checkout.Session, created: nu
     stripeInvoiceId: null,
     paidAt: new Date(created * 1000),
   });
-  return { result: grantedNow ? "applied" : "ignored", message: grantedNow ? `granted set ${set.slug} to user ${user.id}` : `set ${set.slug} was already granted for ${session.id}` };
+  return {
+    result: grantedNow ? "applied" : "ignored",
+    message: grantedNow
+      ? `granted set ${set.slug} to user ${user.id}`
+      : `set ${set.slug} was already granted for ${session.id}`,
+  };
 }
 
 function subscriptionOfInvoice(invoice: Stripe.Invoice): string | null {
@@ -142,7 +175,10 @@ async function onInvoicePaid(invoice: Stripe.Invoice, created: number): Promise<
     stripeCheckoutSessionId: null,
     paidAt: new Date((invoice.status_transitions?.paid_at ?? created) * 1000),
   });
-  return { result: synced.result === "applied" || recorded ? "applied" : "ignored", message: `${synced.message}; payment ${recorded ? "recorded" : "already recorded"} for ${invoice.id}` };
+  return {
+    result: synced.result === "applied" || recorded ? "applied" : "ignored",
+    message: `${synced.message}; payment ${recorded ? "recorded" : "already recorded"} for ${invoice.id}`,
+  };
 }
 
 async function onInvoiceFailed(invoice: Stripe.Invoice, created: number): Promise<Applied> {
@@ -182,7 +218,9 @@ function statusFor(status: Stripe.Subscription.Status): EntitlementStatus | null
 
 function periodEndOf(subscription: Stripe.Subscription): number | null {
   // Newer API versions keep the period on the items; older ones on the subscription.
-  const fromItems = subscription.items.data.map((item) => item.current_period_end).filter((end): end is number => typeof end === "number");
+  const fromItems = subscription.items.data
+    .map((item) => item.current_period_end)
+    .filter((end): end is number => typeof end === "number");
   if (fromItems.length > 0) return Math.max(...fromItems);
   const legacy = (subscription as Stripe.Subscription & { current_period_end?: number }).current_period_end;
   return typeof legacy === "number" ? legacy : null;
@@ -210,7 +248,11 @@ async function findOrCreateOnce<T>(task: () => Promise<T>): Promise<T> {
  * Brings the plan entitlement of one subscription in line with the subscription's current state in the
  * payments service. `created` is the triggering event's time.
  */
-async function syncSubscription(subscriptionId: string, created: number, hints: { userId?: number; checkoutSessionId?: string }): Promise<Applied> {
+async function syncSubscription(
+  subscriptionId: string,
+  created: number,
+  hints: { userId?: number; checkoutSessionId?: string },
+): Promise<Applied> {
   const subscription = await stripe().subscriptions.retrieve(subscriptionId);
   const plan = planForLookupKey(subscription.items.data[0]?.price.lookup_key);
   if (!plan) return { result: "ignored", message: `subscription ${subscriptionId} is not for a Dryside plan` };
@@ -221,15 +263,23 @@ async function syncSubscription(subscriptionId: string, created: number, hints: 
 
   const attempt = async (): Promise<Applied> =>
     sequelize.transaction(async (transaction: Transaction) => {
-      const existing = await Entitlement.findOne({ where: { stripeSubscriptionId: subscriptionId }, transaction, lock: transaction.LOCK.UPDATE });
+      const existing = await Entitlement.findOne({
+        where: { stripeSubscriptionId: subscriptionId },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (existing) {
         if (existing.status === "canceled" && status !== "canceled") {
           return { result: "ignored", message: `subscription ${subscriptionId} was canceled; it is not brought back` };
         }
         if (existing.lastEventCreated !== null && created < existing.lastEventCreated) {
-          return { result: "ignored", message: `event from ${created} is older than the last applied (${existing.lastEventCreated})` };
+          return {
+            result: "ignored",
+            message: `event from ${created} is older than the last applied (${existing.lastEventCreated})`,
+          };
         }
-        const keepLaterEnd = status !== "canceled" && existing.currentPeriodEnd && periodEnd && periodEnd < existing.currentPeriodEnd;
+        const keepLaterEnd =
+          status !== "canceled" && existing.currentPeriodEnd && periodEnd && periodEnd < existing.currentPeriodEnd;
         const next = {
           status: status ?? existing.status,
           planSlug: plan.slug,
@@ -246,12 +296,24 @@ async function syncSubscription(subscriptionId: string, created: number, hints: 
           next.stripeCheckoutSessionId !== existing.stripeCheckoutSessionId;
         await existing.update(next, { transaction });
         return changed
-          ? { result: "applied", message: `plan ${plan.slug} for user ${existing.userId}: ${next.status} until ${next.currentPeriodEnd?.toISOString() ?? "open"}${next.cancelAtPeriodEnd ? ", ends then" : ""}` }
+          ? {
+              result: "applied",
+              message: `plan ${plan.slug} for user ${existing.userId}: ${next.status} until ${next.currentPeriodEnd?.toISOString() ?? "open"}${next.cancelAtPeriodEnd ? ", ends then" : ""}`,
+            }
           : { result: "ignored", message: `subscription ${subscriptionId} unchanged (${next.status})` };
       }
-      if (!status) return { result: "ignored", message: `subscription ${subscriptionId} is ${subscription.status}: nothing to grant yet` };
-      const user = hints.userId ? await User.findByPk(hints.userId, { transaction }) : customerId ? await userForCustomer(customerId) : null;
-      if (!user) throw new Error(`no Dryside user for subscription ${subscriptionId} (customer ${customerId ?? "none"})`);
+      if (!status)
+        return {
+          result: "ignored",
+          message: `subscription ${subscriptionId} is ${subscription.status}: nothing to grant yet`,
+        };
+      const user = hints.userId
+        ? await User.findByPk(hints.userId, { transaction })
+        : customerId
+          ? await userForCustomer(customerId)
+          : null;
+      if (!user)
+        throw new Error(`no Dryside user for subscription ${subscriptionId} (customer ${customerId ?? "none"})`);
       await Entitlement.create(
         {
           userId: user.id,
@@ -267,7 +329,10 @@ async function syncSubscription(subscriptionId: string, created: number, hints: 
         },
         { transaction },
       );
-      return { result: "applied", message: `plan ${plan.slug} granted to user ${user.id}: ${status} until ${periodEnd?.toISOString() ?? "open"}` };
+      return {
+        result: "applied",
+        message: `plan ${plan.slug} granted to user ${user.id}: ${status} until ${periodEnd?.toISOString() ?? "open"}`,
+      };
     });
   return findOrCreateOnce(attempt);
 }

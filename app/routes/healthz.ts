@@ -4,6 +4,10 @@ import { databaseIsUp } from "~/db/sequelize.server";
 export async function loader() {
   const started = performance.now();
   const database = await databaseIsUp();
-  const body = { status: database ? "ok" : "degraded", database: database ? "up" : "down", ms: Math.round(performance.now() - started) };
+  const body = {
+    status: database ? "ok" : "degraded",
+    database: database ? "up" : "down",
+    ms: Math.round(performance.now() - started),
+  };
   return Response.json(body, { status: database ? 200 : 503, headers: { "Cache-Control": "no-store" } });
 }

@@ -18,7 +18,8 @@ export interface BlobStorage {
 
 /** Keys are slash-separated, lower-case words: nothing that could climb out of the root. */
 export function assertSafeKey(key: string): void {
-  if (!/^[a-z0-9][a-z0-9._-]*(\/[a-z0-9][a-z0-9._-]*)*$/.test(key) || key.includes("..")) throw new Error(`unsafe storage key: ${key}`);
+  if (!/^[a-z0-9][a-z0-9._-]*(\/[a-z0-9][a-z0-9._-]*)*$/.test(key) || key.includes(".."))
+    throw new Error(`unsafe storage key: ${key}`);
 }
 
 export class LocalDiskStorage implements BlobStorage {

@@ -11,7 +11,6 @@ export const BODY_SECTION_HEADINGS = {
   cautions: "Cautions",
 } as const;
 
-
 /** The headings every detail body carries, in this order. */
 export const REQUIRED_BODY_SECTIONS = [
   BODY_SECTION_HEADINGS["why-it-works"],

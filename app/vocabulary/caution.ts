@@ -8,7 +8,6 @@ export const STANDING_CAUTION =
 
 /** What the site check is, said before the standing caution on every result. */
 export const SITE_CHECK_SCOPE =
-  
   "This check is a steady-state screening (design-day profiles and a monthly moisture balance) against the tables named; " +
   "it does not replace the local building official or a transient hygrothermal analysis.";
 

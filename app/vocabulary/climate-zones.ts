@@ -5,8 +5,25 @@
 
 /** Zone numbers 0–8 with their moisture-regime letter; zones 7 and 8 carry no letter in the IECC. */
 export const CLIMATE_ZONE_IDS = [
-  "0A", "0B", "1A", "1B", "2A", "2B", "3A", "3B", "3C",
-  "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8",
+  "0A",
+  "0B",
+  "1A",
+  "1B",
+  "2A",
+  "2B",
+  "3A",
+  "3B",
+  "3C",
+  "4A",
+  "4B",
+  "4C",
+  "5A",
+  "5B",
+  "5C",
+  "6A",
+  "6B",
+  "7",
+  "8",
 ] as const;
 
 export type ClimateZoneId = (typeof CLIMATE_ZONE_IDS)[number];

@@ -38,5 +38,7 @@ export interface EntitlementTerms {
  */
 export function isLive(entitlement: EntitlementTerms, now: Date): boolean {
   const liveStatus = (LIVE_ENTITLEMENT_STATUSES as readonly EntitlementStatus[]).includes(entitlement.status);
-  return liveStatus && (entitlement.currentPeriodEnd === null || entitlement.currentPeriodEnd.getTime() > now.getTime());
+  return (
+    liveStatus && (entitlement.currentPeriodEnd === null || entitlement.currentPeriodEnd.getTime() > now.getTime())
+  );
 }

@@ -3,7 +3,14 @@
 //
 // draft → in_review → (changes_requested → in_review)* → published → superseded | withdrawn
 
-export const REVISION_STATES = ["draft", "in_review", "changes_requested", "published", "superseded", "withdrawn"] as const;
+export const REVISION_STATES = [
+  "draft",
+  "in_review",
+  "changes_requested",
+  "published",
+  "superseded",
+  "withdrawn",
+] as const;
 
 export type RevisionState = (typeof REVISION_STATES)[number];
 
@@ -17,13 +24,21 @@ export const REVISION_STATE_LABELS: Record<RevisionState, string> = {
 };
 
 /** In progress: a detail has at most one open revision, so a second one is not started beside it. */
-export const OPEN_REVISION_STATES = ["draft", "in_review", "changes_requested"] as const satisfies readonly RevisionState[];
+export const OPEN_REVISION_STATES = [
+  "draft",
+  "in_review",
+  "changes_requested",
+] as const satisfies readonly RevisionState[];
 
 /** The author may still change it (a revision in review is frozen until the reviewer answers). */
 export const EDITABLE_REVISION_STATES = ["draft", "changes_requested"] as const satisfies readonly RevisionState[];
 
 /** Was the published text at some time: readers see these in a detail's history. */
-export const PUBLIC_REVISION_STATES = ["published", "superseded", "withdrawn"] as const satisfies readonly RevisionState[];
+export const PUBLIC_REVISION_STATES = [
+  "published",
+  "superseded",
+  "withdrawn",
+] as const satisfies readonly RevisionState[];
 
 export function isRevisionState(value: unknown): value is RevisionState {
   return typeof value === "string" && (REVISION_STATES as readonly string[]).includes(value);

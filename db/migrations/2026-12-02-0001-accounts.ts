@@ -21,7 +21,12 @@ export const accounts: Migration = {
     });
     await qi.createTable("sessions", {
       id: { type: DataTypes.CHAR(43), primaryKey: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
       expires_at: { type: DataTypes.DATE(3), allowNull: false },
       revoked_at: { type: DataTypes.DATE(3), allowNull: true },
       user_agent: { type: DataTypes.STRING(255), allowNull: true },
@@ -29,7 +34,12 @@ export const accounts: Migration = {
     });
     await qi.createTable("auth_tokens", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
       purpose: { type: DataTypes.ENUM("verify-email", "reset-password"), allowNull: false },
       token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
       expires_at: { type: DataTypes.DATE(3), allowNull: false },
@@ -45,7 +55,12 @@ export const accounts: Migration = {
     await qi.addIndex("sign_in_attempts", ["bucket", "created_at"]);
     await qi.createTable("audit_events", {
       id: { type: DataTypes.BIGINT.UNSIGNED, autoIncrement: true, primaryKey: true },
-      actor_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+      actor_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: true,
+        references: { model: "users", key: "id" },
+        onDelete: "SET NULL",
+      },
       action: { type: DataTypes.STRING(64), allowNull: false },
       subject_type: { type: DataTypes.STRING(32), allowNull: false },
       subject_id: { type: DataTypes.STRING(64), allowNull: false },

@@ -5,7 +5,12 @@ const timestamps = {
   created_at: { type: DataTypes.DATE(3), allowNull: false },
   updated_at: { type: DataTypes.DATE(3), allowNull: false },
 };
-const userRef = { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" } as const;
+const userRef = {
+  type: DataTypes.INTEGER.UNSIGNED,
+  allowNull: true,
+  references: { model: "users", key: "id" },
+  onDelete: "SET NULL",
+} as const;
 
 export const catalogue: Migration = {
   name: "2026-12-02-0002-catalogue",
@@ -40,12 +45,30 @@ export const catalogue: Migration = {
       withdrawn_at: { type: DataTypes.DATE(3), allowNull: true },
       ...timestamps,
     });
-    for (const column of ["assembly", "substrate", "below_grade", "strategy", "interior_class", "tier", "published_at"]) {
+    for (const column of [
+      "assembly",
+      "substrate",
+      "below_grade",
+      "strategy",
+      "interior_class",
+      "tier",
+      "published_at",
+    ]) {
       await qi.addIndex("details", [column]);
     }
-    await qi.addIndex("details", { fields: ["title", "summary", "search_text"], type: "FULLTEXT", name: "details_fulltext" });
+    await qi.addIndex("details", {
+      fields: ["title", "summary", "search_text"],
+      type: "FULLTEXT",
+      name: "details_fulltext",
+    });
     await qi.createTable("detail_zones", {
-      detail_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, primaryKey: true, references: { model: "details", key: "id" }, onDelete: "CASCADE" },
+      detail_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        primaryKey: true,
+        references: { model: "details", key: "id" },
+        onDelete: "CASCADE",
+      },
       zone: { type: DataTypes.STRING(3), allowNull: false, primaryKey: true },
       zone_number: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
       regime: { type: DataTypes.CHAR(1), allowNull: true },
@@ -54,9 +77,17 @@ export const catalogue: Migration = {
     await qi.addIndex("detail_zones", ["regime", "detail_id"]);
     await qi.createTable("detail_revisions", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      detail_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "details", key: "id" }, onDelete: "CASCADE" },
+      detail_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "details", key: "id" },
+        onDelete: "CASCADE",
+      },
       number: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-      state: { type: DataTypes.ENUM("draft", "in_review", "changes_requested", "published", "superseded", "withdrawn"), allowNull: false },
+      state: {
+        type: DataTypes.ENUM("draft", "in_review", "changes_requested", "published", "superseded", "withdrawn"),
+        allowNull: false,
+      },
       title: { type: DataTypes.STRING(200), allowNull: false },
       summary: { type: DataTypes.TEXT, allowNull: false },
       body_md: { type: DataTypes.TEXT("medium"), allowNull: false },
@@ -76,7 +107,12 @@ export const catalogue: Migration = {
     await qi.addIndex("detail_revisions", ["state"]);
     await qi.createTable("review_comments", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      revision_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "detail_revisions", key: "id" }, onDelete: "CASCADE" },
+      revision_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "detail_revisions", key: "id" },
+        onDelete: "CASCADE",
+      },
       author_id: userRef,
       section: { type: DataTypes.STRING(60), allowNull: false },
       body: { type: DataTypes.TEXT, allowNull: false },
@@ -92,12 +128,36 @@ export const catalogue: Migration = {
       ...timestamps,
     });
     await qi.createTable("detail_set_members", {
-      set_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, primaryKey: true, references: { model: "detail_sets", key: "id" }, onDelete: "CASCADE" },
-      detail_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, primaryKey: true, references: { model: "details", key: "id" }, onDelete: "CASCADE" },
+      set_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        primaryKey: true,
+        references: { model: "detail_sets", key: "id" },
+        onDelete: "CASCADE",
+      },
+      detail_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        primaryKey: true,
+        references: { model: "details", key: "id" },
+        onDelete: "CASCADE",
+      },
     });
     await qi.createTable("saved_details", {
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, primaryKey: true, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
-      detail_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, primaryKey: true, references: { model: "details", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        primaryKey: true,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
+      detail_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        primaryKey: true,
+        references: { model: "details", key: "id" },
+        onDelete: "CASCADE",
+      },
       created_at: { type: DataTypes.DATE(3), allowNull: false },
     });
     await qi.createTable("content_imports", {
@@ -108,7 +168,17 @@ export const catalogue: Migration = {
     });
   },
   async down({ queryInterface: qi }) {
-    for (const table of ["content_imports", "saved_details", "detail_set_members", "detail_sets", "review_comments", "detail_revisions", "detail_zones", "details", "materials"]) {
+    for (const table of [
+      "content_imports",
+      "saved_details",
+      "detail_set_members",
+      "detail_sets",
+      "review_comments",
+      "detail_revisions",
+      "detail_zones",
+      "details",
+      "materials",
+    ]) {
       await qi.dropTable(table);
     }
   },

@@ -7,10 +7,20 @@ export const entitlements: Migration = {
     // Granted, renewed and revoked only by verified payment webhooks.
     await qi.createTable("entitlements", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
       kind: { type: DataTypes.ENUM("plan", "set"), allowNull: false },
       plan_slug: { type: DataTypes.STRING(40), allowNull: true },
-      set_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: "detail_sets", key: "id" }, onDelete: "CASCADE" },
+      set_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: true,
+        references: { model: "detail_sets", key: "id" },
+        onDelete: "CASCADE",
+      },
       status: { type: DataTypes.ENUM("active", "past_due", "canceled", "expired"), allowNull: false },
       current_period_end: { type: DataTypes.DATE(3), allowNull: true },
       cancel_at_period_end: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
@@ -33,8 +43,18 @@ export const entitlements: Migration = {
     await qi.addIndex("payment_events", ["received_at"]);
     await qi.createTable("downloads", {
       id: { type: DataTypes.BIGINT.UNSIGNED, autoIncrement: true, primaryKey: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
-      set_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "detail_sets", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
+      set_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "detail_sets", key: "id" },
+        onDelete: "CASCADE",
+      },
       pack_key: { type: DataTypes.STRING(200), allowNull: false },
       created_at: { type: DataTypes.DATE(3), allowNull: false },
     });

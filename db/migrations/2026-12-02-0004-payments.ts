@@ -8,7 +8,12 @@ export const payments: Migration = {
     // Unique service ids make recording a payment idempotent when a webhook arrives twice.
     await qi.createTable("payments", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "users", key: "id" },
+        onDelete: "CASCADE",
+      },
       kind: { type: DataTypes.ENUM("plan", "set"), allowNull: false },
       description: { type: DataTypes.STRING(200), allowNull: false },
       amount_cents: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

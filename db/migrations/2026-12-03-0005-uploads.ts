@@ -8,8 +8,18 @@ export const uploads: Migration = {
     // what type the bytes really are, and where they are kept.
     await qi.createTable("uploads", {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-      revision_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: "detail_revisions", key: "id" }, onDelete: "CASCADE" },
-      uploader_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+      revision_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: "detail_revisions", key: "id" },
+        onDelete: "CASCADE",
+      },
+      uploader_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: true,
+        references: { model: "users", key: "id" },
+        onDelete: "SET NULL",
+      },
       original_name: { type: DataTypes.STRING(200), allowNull: false },
       content_type: { type: DataTypes.STRING(40), allowNull: false },
       byte_size: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

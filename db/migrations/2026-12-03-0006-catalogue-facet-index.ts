@@ -6,21 +6,57 @@ import type { Migration } from "../migrator.ts";
 // comparison costly), and one covering index starts with every facet column, so the counts are one
 // GROUP BY that walks the index in order: no temporary table, no wide rows (app/catalogue/search.server.ts).
 const FACET_COLUMNS = [
-  "tier", "assembly", "substrate", "below_grade", "strategy", "interior_class", "zone_mask", "regime_mask",
-  "published_revision_id", "withdrawn_at",
+  "tier",
+  "assembly",
+  "substrate",
+  "below_grade",
+  "strategy",
+  "interior_class",
+  "zone_mask",
+  "regime_mask",
+  "published_revision_id",
+  "withdrawn_at",
 ];
 const ASCII_COLUMNS: [string, string][] = [
-  ["assembly", "VARCHAR(40)"], ["substrate", "VARCHAR(40)"], ["below_grade", "VARCHAR(40)"], ["strategy", "VARCHAR(40)"],
-  ["interior_class", "VARCHAR(8)"], ["tier", "ENUM('free','premium')"],
+  ["assembly", "VARCHAR(40)"],
+  ["substrate", "VARCHAR(40)"],
+  ["below_grade", "VARCHAR(40)"],
+  ["strategy", "VARCHAR(40)"],
+  ["interior_class", "VARCHAR(8)"],
+  ["tier", "ENUM('free','premium')"],
 ];
 
 export const catalogueFacetIndex: Migration = {
   name: "2026-12-03-0006-catalogue-facet-index",
   async up({ queryInterface: qi, sequelize }) {
     await qi.addColumn("details", "zone_mask", { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 });
-    await qi.addColumn("details", "regime_mask", { type: DataTypes.TINYINT.UNSIGNED, allowNull: false, defaultValue: 0 });
+    await qi.addColumn("details", "regime_mask", {
+      type: DataTypes.TINYINT.UNSIGNED,
+      allowNull: false,
+      defaultValue: 0,
+    });
     // Backfill from detail_zones with the same bit order as app/catalogue/zone-mask.ts (CLIMATE_ZONE_IDS order).
-    const zones = ["0A", "0B", "1A", "1B", "2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
+    const zones = [
+      "0A",
+      "0B",
+      "1A",
+      "1B",
+      "2A",
+      "2B",
+      "3A",
+      "3B",
+      "3C",
+      "4A",
+      "4B",
+      "4C",
+      "5A",
+      "5B",
+      "5C",
+      "6A",
+      "6B",
+      "7",
+      "8",
+    ];
     const zoneBit = zones.map((zone, i) => `WHEN '${zone}' THEN ${2 ** i}`).join(" ");
     await sequelize.query(`UPDATE details d SET
       zone_mask = COALESCE((SELECT BIT_OR(CASE z.zone ${zoneBit} ELSE 0 END) FROM detail_zones z WHERE z.detail_id = d.id), 0),

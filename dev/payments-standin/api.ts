@@ -298,7 +298,10 @@ export function addApiRoutes(router: Router, { store, billing, publicUrl }: ApiD
     const customerId = body.string("customer");
     const customerEmail = body.string("customer_email") ?? null;
     if (customerId && customerEmail) {
-      throw ApiError.request("You may only specify one of these parameters: customer, customer_email.", "customer_email");
+      throw ApiError.request(
+        "You may only specify one of these parameters: customer, customer_email.",
+        "customer_email",
+      );
     }
     if (customerId) store.get("customer", customerId, "customer");
     const customerCreation = body.oneOf("customer_creation", ["always", "if_required"]) ?? null;

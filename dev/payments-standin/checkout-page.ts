@@ -37,7 +37,12 @@ export function addCheckoutPageRoutes(router: Router, { store, billing, webhookW
     if (!knownEmail && !/^[^@\s]+@[^@\s]+\.[^@\s]+$/.test(form.email)) {
       return html(page(store, session, { ...form, error: "Enter a valid email address." }), 400);
     }
-    const outcome = checkCard({ number: form.number, expiry: form.expiry, cvc: body.string("card_cvc") ?? "", name: form.name });
+    const outcome = checkCard({
+      number: form.number,
+      expiry: form.expiry,
+      cvc: body.string("card_cvc") ?? "",
+      name: form.name,
+    });
     // A decline shows the page again and sends nothing: the session stays open for another try.
     if (!outcome.ok) return html(page(store, session, { ...form, error: outcome.message }), 402);
 
@@ -67,7 +72,9 @@ function page(store: Store, session: CheckoutSession, form: FormState): string {
   const recurring = items[0]?.price.recurring ?? null;
   const rows = items
     .map(
-      (item) => `<tr><td>${escapeHtml(item.description)}${item.quantity > 1 ? ` <span class="muted">× ${item.quantity}</span>` : ""}</td>
+      (
+        item,
+      ) => `<tr><td>${escapeHtml(item.description)}${item.quantity > 1 ? ` <span class="muted">× ${item.quantity}</span>` : ""}</td>
         <td class="amount">${formatAmount(item.amount_total, item.currency)}</td></tr>`,
     )
     .join("\n");
@@ -85,10 +92,16 @@ function page(store: Store, session: CheckoutSession, form: FormState): string {
 
   const emailField = payerEmail(store, session)
     ? ""
-    : field("Email", `<input name="email" type="email" autocomplete="email" required value="${escapeHtml(form.email)}">`);
+    : field(
+        "Email",
+        `<input name="email" type="email" autocomplete="email" required value="${escapeHtml(form.email)}">`,
+      );
   const alert = form.error ? `<p class="alert" role="alert">${escapeHtml(form.error)}</p>` : "";
   const cards = Object.entries(TEST_CARDS)
-    .map(([number, outcome]) => `<li><code>${number}</code> ${outcome.ok ? `pays (${outcome.funding})` : `declines: ${escapeHtml(outcome.message)}`}</li>`)
+    .map(
+      ([number, outcome]) =>
+        `<li><code>${number}</code> ${outcome.ok ? `pays (${outcome.funding})` : `declines: ${escapeHtml(outcome.message)}`}</li>`,
+    )
     .join("");
   const action = session.mode === "subscription" ? "Subscribe" : "Pay";
   return layout(

@@ -4,8 +4,12 @@ import { startPaymentsStandin } from "./server";
 const webhookUrl = process.env.PAYMENTS_WEBHOOK_URL;
 const webhookSecret = process.env.PAYMENTS_WEBHOOK_SECRET;
 const missing = [
-  ...(webhookUrl ? [] : ["PAYMENTS_WEBHOOK_URL (where to POST events, e.g. http://127.0.0.1:3000/api/payments/webhook)"]),
-  ...(webhookSecret ? [] : ["PAYMENTS_WEBHOOK_SECRET (the signing secret the app verifies with, e.g. whsec_standin_local)"]),
+  ...(webhookUrl
+    ? []
+    : ["PAYMENTS_WEBHOOK_URL (where to POST events, e.g. http://127.0.0.1:3000/api/payments/webhook)"]),
+  ...(webhookSecret
+    ? []
+    : ["PAYMENTS_WEBHOOK_SECRET (the signing secret the app verifies with, e.g. whsec_standin_local)"]),
 ];
 const port = Number(process.env.PAYMENTS_STANDIN_PORT ?? 12111);
 if (!Number.isInteger(port) || port < 0 || port > 65535) missing.push("PAYMENTS_STANDIN_PORT must be a port number");

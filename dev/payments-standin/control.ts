@@ -43,7 +43,13 @@ export function addControlRoutes(router: Router, { store, billing, sender, webho
   });
 }
 
-function deliveryView(record: EventRecord): { id: string; type: string; created: number; delivered: boolean; deliveries: EventRecord["deliveries"] } {
+function deliveryView(record: EventRecord): {
+  id: string;
+  type: string;
+  created: number;
+  delivered: boolean;
+  deliveries: EventRecord["deliveries"];
+} {
   return {
     id: record.event.id,
     type: record.event.type,

@@ -245,4 +245,3 @@ export function addInterval(from: number, interval: Interval, count: number): nu
   date.setUTCDate(Math.min(day, lastDay));
   return Math.floor(date.getTime() / 1000);
 }
-

@@ -86,7 +86,9 @@ export async function startPaymentsStandin(options: PaymentsStandinOptions): Pro
       if (cached) {
         reply = cached;
       } else if (!found) {
-        throw isApi ? ApiError.unknownRoute(method, url.pathname) : new ApiError(404, { type: "invalid_request_error", message: "Not found" });
+        throw isApi
+          ? ApiError.unknownRoute(method, url.pathname)
+          : new ApiError(404, { type: "invalid_request_error", message: "Not found" });
       } else {
         reply = await found.handler({
           method,
@@ -154,7 +156,8 @@ async function readBody(request: IncomingMessage): Promise<string> {
   for await (const chunk of request) {
     const buffer = Buffer.isBuffer(chunk) ? chunk : Buffer.from(String(chunk));
     size += buffer.length;
-    if (size > MAX_BODY_BYTES) throw new ApiError(413, { type: "invalid_request_error", message: "Request body too large." });
+    if (size > MAX_BODY_BYTES)
+      throw new ApiError(413, { type: "invalid_request_error", message: "Request body too large." });
     chunks.push(buffer);
   }
   return Buffer.concat(chunks).toString("utf8");
@@ -163,7 +166,10 @@ async function readBody(request: IncomingMessage): Promise<string> {
 function errorReply(error: unknown): Reply {
   if (error instanceof ApiError) return json({ error: error.body }, error.status);
   console.error("[payments-standin]", error);
-  return json({ error: { type: "api_error", message: "The payments stand-in failed on this request; see its log." } }, 500);
+  return json(
+    { error: { type: "api_error", message: "The payments stand-in failed on this request; see its log." } },
+    500,
+  );
 }
 
 function send(response: ServerResponse, reply: Reply): void {

@@ -128,7 +128,11 @@ export function render<T extends ApiObject>(store: Store, object: T, expand: str
 }
 
 /** A list page rendered item by item; expansions are written `data.customer` as in the real API. */
-export function renderList<T extends ApiObject>(store: Store, list: ListObject<T>, expand: string[] = []): ListObject<T> {
+export function renderList<T extends ApiObject>(
+  store: Store,
+  list: ListObject<T>,
+  expand: string[] = [],
+): ListObject<T> {
   const itemExpand = expand.filter((path) => path.startsWith("data.")).map((path) => path.slice("data.".length));
   return { ...list, data: list.data.map((item) => render(store, item, itemExpand)) };
 }

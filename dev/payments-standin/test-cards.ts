@@ -10,7 +10,12 @@ export const TEST_CARDS: Record<string, CardOutcome> = {
   "4242424242424242": { ok: true, funding: "credit" },
   "4000056655665556": { ok: true, funding: "debit" },
   "5555555555554444": { ok: true, funding: "credit" },
-  "4000000000000002": { ok: false, code: "card_declined", declineCode: "generic_decline", message: "Your card was declined." },
+  "4000000000000002": {
+    ok: false,
+    code: "card_declined",
+    declineCode: "generic_decline",
+    message: "Your card was declined.",
+  },
   "4000000000009995": {
     ok: false,
     code: "card_declined",

@@ -56,7 +56,13 @@ const targets: [string, string | (() => string)][] = [
   ["API search, varied text + facets (misses)", varied(true)],
 ];
 
-interface Row { name: string; rps: number; p50: number; p95: number; errors: number }
+interface Row {
+  name: string;
+  rps: number;
+  p50: number;
+  p95: number;
+  errors: number;
+}
 const rows: Row[] = [];
 for (const [name, path] of targets) {
   const options: autocannon.Options =
@@ -66,18 +72,42 @@ for (const [name, path] of targets) {
   // Warm the route and the pool first.
   await autocannon({ ...options, connections: 4, duration: 1 });
   const result = await autocannon({ ...options, connections: 10, duration: DURATION });
-  rows.push({ name, rps: Math.round(result.requests.average), p50: result.latency.p50, p95: result.latency.p97_5 ?? result.latency.p99, errors: result.errors + result.non2xx });
+  rows.push({
+    name,
+    rps: Math.round(result.requests.average),
+    p50: result.latency.p50,
+    p95: result.latency.p97_5 ?? result.latency.p99,
+    errors: result.errors + result.non2xx,
+  });
 }
-const slug = ((await (await fetch(`${base}/api/details?tier=free`)).json()) as { cards: { slug: string }[] }).cards[0]?.slug;
+const slug = ((await (await fetch(`${base}/api/details?tier=free`)).json()) as { cards: { slug: string }[] }).cards[0]
+  ?.slug;
 const firstLoad = await measureFirstLoad(base, ["/", "/details", `/details/${slug}`]);
 server.kill("SIGTERM");
 
-console.log(`\nCatalogue over ${total} details, loopback, 10 connections, ${DURATION} s each (p95 column is autocannon's p97.5)`);
-console.log("route".padEnd(44), "req/s".padStart(7), "p50 ms".padStart(7), "p95 ms".padStart(7), "errors".padStart(7), "vs trivial".padStart(11));
+console.log(
+  `\nCatalogue over ${total} details, loopback, 10 connections, ${DURATION} s each (p95 column is autocannon's p97.5)`,
+);
+console.log(
+  "route".padEnd(44),
+  "req/s".padStart(7),
+  "p50 ms".padStart(7),
+  "p95 ms".padStart(7),
+  "errors".padStart(7),
+  "vs trivial".padStart(11),
+);
 const trivial = rows[0].rps;
 for (const row of rows) {
-  console.log(row.name.padEnd(44), String(row.rps).padStart(7), String(row.p50).padStart(7), String(row.p95).padStart(7), String(row.errors).padStart(7), `${Math.round((row.rps / trivial) * 100)} %`.padStart(11));
+  console.log(
+    row.name.padEnd(44),
+    String(row.rps).padStart(7),
+    String(row.p50).padStart(7),
+    String(row.p95).padStart(7),
+    String(row.errors).padStart(7),
+    `${Math.round((row.rps / trivial) * 100)} %`.padStart(11),
+  );
 }
 
 console.log("\nFirst page load, gzipped JavaScript (fresh browser profile per page)");
-for (const row of firstLoad) console.log(`  ${row.path.padEnd(60)} ${row.gzipKb.toFixed(1).padStart(7)} KB in ${row.files} files`);
+for (const row of firstLoad)
+  console.log(`  ${row.path.padEnd(60)} ${row.gzipKb.toFixed(1).padStart(7)} KB in ${row.files} files`);

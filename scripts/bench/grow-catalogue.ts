@@ -8,7 +8,9 @@ const VARIANTS = ["coastal", "upland", "prairie", "river", "lakeside", "ridge", 
 const ZONE_POOL = CLIMATE_ZONE_IDS.filter((zone) => zoneNumber(zone) >= 2);
 
 export async function growLargeCatalogue(sequelize: Sequelize, target: number): Promise<number> {
-  const [{ n }] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM details", { type: QueryTypes.SELECT });
+  const [{ n }] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM details", {
+    type: QueryTypes.SELECT,
+  });
   const base = Number(n);
   if (base === 0) throw new Error("import the demo content first: the benchmark multiplies it");
   const copies = Math.ceil((target - base) / base);
@@ -42,10 +44,14 @@ export async function growLargeCatalogue(sequelize: Sequelize, target: number): 
     }
   }
   // Auto-increment ids have gaps after INSERT … SELECT, so trim by count, newest generated rows first.
-  const [{ now }] = await sequelize.query<{ now: number }>("SELECT COUNT(*) AS now FROM details", { type: QueryTypes.SELECT });
+  const [{ now }] = await sequelize.query<{ now: number }>("SELECT COUNT(*) AS now FROM details", {
+    type: QueryTypes.SELECT,
+  });
   const excess = Number(now) - target;
   if (excess > 0) await sequelize.query(`DELETE FROM details WHERE slug LIKE '%--g%' ORDER BY id DESC LIMIT ${excess}`);
   await sequelize.query("ANALYZE TABLE details, detail_zones");
-  const [{ total }] = await sequelize.query<{ total: number }>("SELECT COUNT(*) AS total FROM details", { type: QueryTypes.SELECT });
+  const [{ total }] = await sequelize.query<{ total: number }>("SELECT COUNT(*) AS total FROM details", {
+    type: QueryTypes.SELECT,
+  });
   return Number(total);
 }

@@ -3,7 +3,10 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 
 const dir = process.argv[2];
-let passed = 0, failed = 0, skipped = 0, missing = [];
+let passed = 0,
+  failed = 0,
+  skipped = 0,
+  missing = [];
 for (const name of ["vitest.json", "e2e.json"]) {
   try {
     const report = JSON.parse(readFileSync(join(dir, name), "utf8"));
@@ -14,12 +17,16 @@ for (const name of ["vitest.json", "e2e.json"]) {
     missing.push(name.replace(".json", ""));
   }
 }
-const typecheck = readdirSync(dir).includes("typecheck.txt") ? readFileSync(join(dir, "typecheck.txt"), "utf8").trim() : "typecheck not run";
+const typecheck = readdirSync(dir).includes("typecheck.txt")
+  ? readFileSync(join(dir, "typecheck.txt"), "utf8").trim()
+  : "typecheck not run";
 if (typecheck !== "typecheck ok") failed += 1;
+const lint = readdirSync(dir).includes("lint.txt") ? readFileSync(join(dir, "lint.txt"), "utf8").trim() : "lint not run";
+if (lint !== "lint ok") failed += 1;
 if (missing.length) {
   console.log(`(no results from: ${missing.join(", ")})`);
   failed += missing.length;
 }
-console.log(`${typecheck}; suites: ${missing.length ? "incomplete" : "complete"}`);
+console.log(`${typecheck}; ${lint}; suites: ${missing.length ? "incomplete" : "complete"}`);
 console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ""}`);
 process.exit(failed ? 1 : 0);

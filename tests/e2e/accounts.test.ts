@@ -11,7 +11,6 @@ afterAll(async () => {
   await browser.close();
 });
 
-
 test("sign up, confirm the e-mail from the caught mail, sign in and see the account page", async () => {
   const page = await browser.newPage();
   const email = `e2e-${Date.now()}@example.test`;

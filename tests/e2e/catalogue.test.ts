@@ -44,7 +44,9 @@ test("a builder narrows the catalogue by facet and by text, and the URL keeps th
   await box.fill("crawlspace");
   await box.press("Enter");
   await page.waitForURL(/q=crawlspace/);
-  await page.waitForFunction(() => /matching/.test(document.querySelector('[data-testid="result-count"]')?.textContent ?? ""));
+  await page.waitForFunction(() =>
+    /matching/.test(document.querySelector('[data-testid="result-count"]')?.textContent ?? ""),
+  );
   const cards = await page.getByTestId("detail-card").count();
   expect(cards).toBeGreaterThan(0);
   expect(new URL(page.url()).searchParams.getAll("zone")).toEqual(["5A"]);
@@ -83,7 +85,9 @@ test("a free detail opens with its drawing, layer table and site check; the chec
   const before = await page.getByTestId("site-check-results").textContent();
   await page.getByTestId("site-check-panel").locator('select[name="zone"]').selectOption("7");
   await page.getByTestId("run-check").click();
-  await page.waitForFunction(() => document.querySelector('[data-testid="site-check-results"]')?.textContent?.includes("Zone 7"));
+  await page.waitForFunction(() =>
+    document.querySelector('[data-testid="site-check-results"]')?.textContent?.includes("Zone 7"),
+  );
   expect(page.url()).toBe(url);
   expect(await page.getByTestId("site-check-results").textContent()).not.toBe(before);
 
@@ -99,10 +103,14 @@ test("a free detail opens with its drawing, layer table and site check; the chec
   await page.locator('input[name="indoorRh"]').fill("35");
   // Degree-days give the zone number; the moisture regime must be said (IECC R301.3).
   await page.getByTestId("run-check").click();
-  await page.waitForFunction(() => /moisture/i.test(document.querySelector('[data-testid="site-errors"]')?.textContent ?? ""));
+  await page.waitForFunction(() =>
+    /moisture/i.test(document.querySelector('[data-testid="site-errors"]')?.textContent ?? ""),
+  );
   await page.locator('select[name="moisture"]').selectOption("A");
   await page.getByTestId("run-check").click();
-  await page.waitForFunction(() => document.querySelector('[data-testid="site-check-results"]')?.textContent?.includes("from degree-days"));
+  await page.waitForFunction(() =>
+    document.querySelector('[data-testid="site-check-results"]')?.textContent?.includes("from degree-days"),
+  );
 
   // Units: inch-pound → SI changes the R notation everywhere on the page.
   expect(await page.getByTestId("effective-r").textContent()).toMatch(/^R-/);
@@ -153,7 +161,9 @@ test("the profile charts show a winter, a summer and a below-grade case, wide an
   // Separate, titled figures: the section drawing, then one chart per case.
   expect(await winter.locator("figcaption").textContent()).toBe("Winter profile");
   expect(await summer.locator("figcaption").textContent()).toBe("Summer profile");
-  expect(await winter.locator('svg[data-layout="wide"] title').textContent()).toContain("temperature by thermal resistance");
+  expect(await winter.locator('svg[data-layout="wide"] title').textContent()).toContain(
+    "temperature by thermal resistance",
+  );
   expect(await winter.locator('svg[data-layout="narrow"]').isVisible()).toBe(false);
   await chartShot(winter, "profile-winter");
   await chartShot(summer, "profile-summer");

@@ -13,7 +13,6 @@ let appUrl = "";
 let mariadb: ChildProcess | undefined;
 let app: ChildProcess | undefined;
 
-
 function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env): Promise<void> {
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, { env, stdio: ["ignore", "ignore", "inherit"] });
@@ -31,13 +30,39 @@ function until(check: () => Promise<boolean>, what: string, timeoutMs = 30000): 
 }
 
 async function startDatabase(): Promise<void> {
-  mariadb = spawn("mariadbd", [
-    "--no-defaults", "--user=root", `--datadir=${datadir}`, `--port=${dbPort}`, "--bind-address=127.0.0.1",
-    `--socket=${join(scratch, "db.sock")}`, `--pid-file=${join(scratch, "db.pid")}`, `--log-error=${join(scratch, "db.err")}`,
-    "--skip-name-resolve", "--character-set-server=utf8mb4", "--collation-server=utf8mb4_unicode_ci",
-    "--innodb-buffer-pool-size=32M", "--innodb-log-file-size=8M", "--skip-log-bin",
-  ], { stdio: "ignore", env: { ...process.env, PATH: `${process.env.PATH}:/usr/sbin` } });
-  await until(() => run("mariadb-admin", ["--no-defaults", "--protocol=tcp", "-h127.0.0.1", `-P${dbPort}`, "-uroot", "--connect-timeout=1", "ping"]).then(() => true), "MariaDB");
+  mariadb = spawn(
+    "mariadbd",
+    [
+      "--no-defaults",
+      "--user=root",
+      `--datadir=${datadir}`,
+      `--port=${dbPort}`,
+      "--bind-address=127.0.0.1",
+      `--socket=${join(scratch, "db.sock")}`,
+      `--pid-file=${join(scratch, "db.pid")}`,
+      `--log-error=${join(scratch, "db.err")}`,
+      "--skip-name-resolve",
+      "--character-set-server=utf8mb4",
+      "--collation-server=utf8mb4_unicode_ci",
+      "--innodb-buffer-pool-size=32M",
+      "--innodb-log-file-size=8M",
+      "--skip-log-bin",
+    ],
+    { stdio: "ignore", env: { ...process.env, PATH: `${process.env.PATH}:/usr/sbin` } },
+  );
+  await until(
+    () =>
+      run("mariadb-admin", [
+        "--no-defaults",
+        "--protocol=tcp",
+        "-h127.0.0.1",
+        `-P${dbPort}`,
+        "-uroot",
+        "--connect-timeout=1",
+        "ping",
+      ]).then(() => true),
+    "MariaDB",
+  );
 }
 
 async function stopDatabase(): Promise<void> {
@@ -53,12 +78,30 @@ beforeAll(async () => {
   dbPort = await freePort();
   const appPort = await freePort();
   appUrl = `http://127.0.0.1:${appPort}`;
-  await run("mariadb-install-db", ["--no-defaults", "--user=root", `--datadir=${datadir}`, "--auth-root-authentication-method=normal", "--skip-test-db", "--skip-name-resolve"]);
+  await run("mariadb-install-db", [
+    "--no-defaults",
+    "--user=root",
+    `--datadir=${datadir}`,
+    "--auth-root-authentication-method=normal",
+    "--skip-test-db",
+    "--skip-name-resolve",
+  ]);
   await startDatabase();
-  await run("mariadb", ["--no-defaults", "--protocol=tcp", "-h127.0.0.1", `-P${dbPort}`, "-uroot", "-e", "CREATE DATABASE outage CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci"]);
+  await run("mariadb", [
+    "--no-defaults",
+    "--protocol=tcp",
+    "-h127.0.0.1",
+    `-P${dbPort}`,
+    "-uroot",
+    "-e",
+    "CREATE DATABASE outage CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci",
+  ]);
   const env = { ...process.env, DB_PORT: String(dbPort), DB_NAME: "outage", NODE_ENV: "production", APP_URL: appUrl };
   await run("npx", ["tsx", "db/migrate.ts", "up"], env);
-  app = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], { env: { ...env, HOST: "127.0.0.1", PORT: String(appPort) }, stdio: "ignore" });
+  app = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], {
+    env: { ...env, HOST: "127.0.0.1", PORT: String(appPort) },
+    stdio: "ignore",
+  });
   await until(async () => (await fetch(`${appUrl}/healthz`)).ok, "the app");
 }, 120000);
 

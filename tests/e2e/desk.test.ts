@@ -48,7 +48,10 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   const rBefore = await editor.getByTestId("effective-r").textContent();
   const thickness = editor.getByLabel("Layer 1 thickness in mm");
   await thickness.fill(String(Number(await thickness.inputValue()) + 20));
-  await editor.waitForFunction((before) => document.querySelector('[data-testid="effective-r"]')?.textContent !== before, rBefore);
+  await editor.waitForFunction(
+    (before) => document.querySelector('[data-testid="effective-r"]')?.textContent !== before,
+    rBefore,
+  );
 
   // The layers are a list: a row is added and removed again, and moving a row moves what was typed in it.
   const rows = editor.getByTestId("layer-editor").locator("tbody tr");
@@ -73,7 +76,9 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   await editor.getByTestId("error-change_note").waitFor({ state: "detached" });
 
   // A drawing, sent with upload progress; the server keeps only the sanitised drawing.
-  await editor.locator('input[type="file"]').setInputFiles({ name: "batt-supports.svg", mimeType: "image/svg+xml", buffer: Buffer.from(DRAWING) });
+  await editor
+    .locator('input[type="file"]')
+    .setInputFiles({ name: "batt-supports.svg", mimeType: "image/svg+xml", buffer: Buffer.from(DRAWING) });
   await editor.getByLabel("Caption").fill("Batt supports at 450 mm");
   await editor.getByRole("button", { name: "Attach" }).click();
   await editor.getByTestId("upload-list").getByText("batt-supports.svg").waitFor();
@@ -86,7 +91,10 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   await signIn(reviewer, "idris@dryside.invalid", "/desk");
   await reviewer.getByTestId("review-queue").getByRole("link").first().click();
   await reviewer.waitForURL(new RegExp(`/desk/review/${revisionId}$`));
-  await reviewer.getByTestId("body-diff").getByText("Staple the batt supports every 450 mm", { exact: false }).waitFor();
+  await reviewer
+    .getByTestId("body-diff")
+    .getByText("Staple the batt supports every 450 mm", { exact: false })
+    .waitFor();
   await reviewer.getByLabel("Install sequence", { exact: true }).fill("Say which side of the joist the supports go.");
   await reviewer.getByRole("button", { name: "Request changes" }).click();
   await reviewer.waitForURL(/\/desk\?sent-back=/);
@@ -111,11 +119,17 @@ test("draft with a drawing → changes requested → resubmitted → published, 
   expect(line).toContain("written by Wren Castellane");
   expect(line).toContain("reviewed by Idris Varrow");
   await page.getByTestId("detail-body").getByText("on the underside of the joists", { exact: false }).waitFor();
-  expect(await page.getByTestId("revision-history").textContent()).toContain("Install sequence now says when to staple the batt supports.");
+  expect(await page.getByTestId("revision-history").textContent()).toContain(
+    "Install sequence now says when to staple the batt supports.",
+  );
   // The drawing uploaded with the revision is shown with it, and loads.
   const drawing = page.getByTestId("attachments").locator("img").first();
   await drawing.waitFor({ state: "attached" });
   await drawing.scrollIntoViewIfNeeded();
-  await page.waitForFunction(() => [...document.querySelectorAll('[data-testid="attachments"] img')].every((img) => (img as HTMLImageElement).naturalWidth > 0));
+  await page.waitForFunction(() =>
+    [...document.querySelectorAll('[data-testid="attachments"] img')].every(
+      (img) => (img as HTMLImageElement).naturalWidth > 0,
+    ),
+  );
   await screenshot(page, "desk-published");
 }, 120_000); // three people's sessions in one journey: longer than the default on a busy machine

@@ -8,7 +8,6 @@ import { startMailCatcher, type MailCatcher } from "../../dev/mail-catcher/serve
 import { startPaymentsStandin, type PaymentsStandin } from "../../dev/payments-standin/server";
 import { freePort } from "../../scripts/lib/free-port.ts";
 
-
 async function waitFor(url: string, child: ChildProcess, timeoutMs = 30000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
@@ -27,7 +26,9 @@ async function waitFor(url: string, child: ChildProcess, timeoutMs = 30000): Pro
 function run(command: string, args: string[], env: NodeJS.ProcessEnv): Promise<void> {
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, { env, stdio: "inherit" });
-    child.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`${command} ${args.join(" ")} exited with ${code}`))));
+    child.on("exit", (code) =>
+      code === 0 ? resolve() : reject(new Error(`${command} ${args.join(" ")} exited with ${code}`)),
+    );
   });
 }
 
@@ -41,14 +42,36 @@ export async function setup(project: TestProject) {
   const appPort = await freePort();
   const appUrl = `http://127.0.0.1:${appPort}`;
   // The app mails through the local catcher; tests read what it caught from outboxDir.
-  mailCatcher = await startMailCatcher({ port: 0, outboxDir: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "e2e-outbox-")) });
+  mailCatcher = await startMailCatcher({
+    port: 0,
+    outboxDir: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "e2e-outbox-")),
+  });
   const mail = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(mailCatcher.port), MAIL_OUTBOX_DIR: mailCatcher.outboxDir };
   // The payments stand-in on a free port, sending its signed webhooks to the app under test.
   const webhookSecret = "whsec_e2e_standin";
-  payments = await startPaymentsStandin({ port: 0, host: "127.0.0.1", webhookUrl: `${appUrl}/api/payments/webhook`, webhookSecret });
-  const stripe = { STRIPE_SECRET_KEY: "sk_test_e2e", STRIPE_API_HOST: "127.0.0.1", STRIPE_API_PORT: String(payments.port), STRIPE_API_PROTOCOL: "http", STRIPE_WEBHOOK_SECRET: webhookSecret };
+  payments = await startPaymentsStandin({
+    port: 0,
+    host: "127.0.0.1",
+    webhookUrl: `${appUrl}/api/payments/webhook`,
+    webhookSecret,
+  });
+  const stripe = {
+    STRIPE_SECRET_KEY: "sk_test_e2e",
+    STRIPE_API_HOST: "127.0.0.1",
+    STRIPE_API_PORT: String(payments.port),
+    STRIPE_API_PROTOCOL: "http",
+    STRIPE_WEBHOOK_SECRET: webhookSecret,
+  };
   const storage = { STORAGE_DIR: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "e2e-storage-")) };
-  const env: NodeJS.ProcessEnv = { ...process.env, ...mail, ...stripe, ...storage, DB_NAME: database, NODE_ENV: "production", APP_URL: appUrl };
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    ...mail,
+    ...stripe,
+    ...storage,
+    DB_NAME: database,
+    NODE_ENV: "production",
+    APP_URL: appUrl,
+  };
 
   await run("npx", ["tsx", "db/migrate.ts", "up"], env);
   // Demo logins first, so the imported details link their authors and reviewers to real accounts.

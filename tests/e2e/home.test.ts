@@ -20,7 +20,9 @@ test("the home page loads with the shipped fonts, the palette and the standing c
   const response = await page.goto(baseUrl());
   expect(response?.status()).toBe(200);
   await page.evaluate(() => document.fonts.ready);
-  await page.waitForFunction(() => document.fonts.check('16px "Inter"') && document.fonts.check('700 16px "Merriweather"'));
+  await page.waitForFunction(
+    () => document.fonts.check('16px "Inter"') && document.fonts.check('700 16px "Merriweather"'),
+  );
 
   const styles = await page.evaluate(() => ({
     body: getComputedStyle(document.body).fontFamily,

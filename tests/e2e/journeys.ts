@@ -6,7 +6,10 @@ import { waitForMail } from "./caught-mail";
  * A new member as a step of a longer journey: sign up, confirm through the caught e-mail, sign in.
  * (tests/e2e/accounts.test.ts walks and checks the same steps one by one.)
  */
-export async function signUpConfirmedMember(page: Page, person: { name: string; email: string; password: string }): Promise<void> {
+export async function signUpConfirmedMember(
+  page: Page,
+  person: { name: string; email: string; password: string },
+): Promise<void> {
   await page.goto(`${baseUrl()}/sign-up`);
   await page.getByLabel("Your name").fill(person.name);
   await page.getByLabel("E-mail").fill(person.email);

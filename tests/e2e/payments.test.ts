@@ -25,7 +25,6 @@ afterAll(async () => {
   await browser.close();
 });
 
-
 /** What each sheet must say, from the content files and the engine itself (the page and API show the same). */
 function expectedSheets(): Map<string, { title: string; effectiveR: string }> {
   const content = loadContent("content");

@@ -16,7 +16,21 @@ afterAll(async () => {
 
 // A free wall of the demo library (content/details).
 const WALL = "wall-2x4-r13-plus-50mm-xps-zone-5";
-const ROWS = ["month,temperature_c,rh_percent", "1,-18,78", "2,-15,76", "3,-7,74", "4,3,65", "5,11,60", "6,17,65", "7,20,68", "8,19,70", "9,13,72", "10,5,76", "11,-4,82", "12,-14,80"];
+const ROWS = [
+  "month,temperature_c,rh_percent",
+  "1,-18,78",
+  "2,-15,76",
+  "3,-7,74",
+  "4,3,65",
+  "5,11,60",
+  "6,17,65",
+  "7,20,68",
+  "8,19,70",
+  "9,13,72",
+  "10,5,76",
+  "11,-4,82",
+  "12,-14,80",
+];
 
 test("a Canadian site shows the NBC 2020 rows, SI first, and the 12-month chart", async () => {
   const page = await browser.newPage();
@@ -27,7 +41,9 @@ test("a Canadian site shows the NBC 2020 rows, SI first, and the 12-month chart"
   expect(await panel.getByTestId("climate-year").getAttribute("data-source")).toBe("generated");
   expect(await panel.getByTestId("climate-year").textContent()).toMatch(/generated/i);
   // The "checked at" sentence is the engine's, naming the default method.
-  expect(await panel.getByTestId("indoor-basis").textContent()).toMatch(/^Checked at indoor 21 °C \/ [\d.]+ % RH, by the ASHRAE 160 simplified method/);
+  expect(await panel.getByTestId("indoor-basis").textContent()).toMatch(
+    /^Checked at indoor 21 °C \/ [\d.]+ % RH, by the ASHRAE 160 simplified method/,
+  );
 
   await panel.getByLabel("Canada (NBC 2020, SI)").check();
   await panel.getByTestId("canadian-site").waitFor();
@@ -37,7 +53,10 @@ test("a Canadian site shows the NBC 2020 rows, SI first, and the 12-month chart"
   const results = panel.getByTestId("site-check-results");
   expect(await results.getAttribute("data-units")).toBe("si");
   expect(await panel.getByTestId("effective-r").textContent()).toMatch(/^RSI /);
-  const rows = await panel.getByTestId("code-rows").locator("tbody tr").evaluateAll((trs) => trs.map((tr) => tr.getAttribute("data-row")));
+  const rows = await panel
+    .getByTestId("code-rows")
+    .locator("tbody tr")
+    .evaluateAll((trs) => trs.map((tr) => tr.getAttribute("data-row")));
   expect(rows).toEqual(expect.arrayContaining(["nbc-9-36-2-6", "nbc-9-25-4", "nbc-9-25-5-2"]));
   expect(await panel.getByTestId("site-line").textContent()).toMatch(/MB, NBC zone \w+/);
 
@@ -45,7 +64,9 @@ test("a Canadian site shows the NBC 2020 rows, SI first, and the 12-month chart"
   const wide = chart.locator('svg[data-layout="wide"]');
   await wide.waitFor();
   for (const month of ["Jan", "Jun", "Dec"]) expect(await wide.textContent()).toContain(month);
-  expect(await panel.getByTestId("seasonal-verdict").textContent()).toMatch(/^(Stays dry all year|Dries within the year|Accumulates year on year)$/);
+  expect(await panel.getByTestId("seasonal-verdict").textContent()).toMatch(
+    /^(Stays dry all year|Dries within the year|Accumulates year on year)$/,
+  );
   await screenshot(page, "site-check-canada");
   mkdirSync("test-results/screenshots", { recursive: true });
   await panel.getByTestId("seasonal").screenshot({ path: "test-results/screenshots/seasonal-canada.png" });
@@ -63,7 +84,9 @@ test("a bad CSV year is shown on its field with the line, and the pasted text is
   const box = panel.locator('textarea[name="yearCsv"]');
   await box.fill(bad.join("\n"));
   await panel.getByTestId("run-check").click();
-  await page.waitForFunction(() => /Line 6: Apr appears twice/.test(document.querySelector('[data-testid="csv-year"]')?.textContent ?? ""));
+  await page.waitForFunction(() =>
+    /Line 6: Apr appears twice/.test(document.querySelector('[data-testid="csv-year"]')?.textContent ?? ""),
+  );
   expect(await box.inputValue()).toBe(bad.join("\n"));
   expect(await box.getAttribute("aria-invalid")).toBe("true");
   mkdirSync("test-results/screenshots", { recursive: true });
@@ -72,7 +95,9 @@ test("a bad CSV year is shown on its field with the line, and the pasted text is
   // Fixed, the year is used as given.
   await box.fill(ROWS.join("\n"));
   await panel.getByTestId("run-check").click();
-  await page.waitForFunction(() => document.querySelector('[data-testid="climate-year"]')?.getAttribute("data-source") === "csv");
+  await page.waitForFunction(
+    () => document.querySelector('[data-testid="climate-year"]')?.getAttribute("data-source") === "csv",
+  );
   await page.close();
 });
 
@@ -100,7 +125,8 @@ test("a basement wall shows the top of the wall beside deep ground, and the wall
   await page.goto(`${baseUrl()}/details/basement-icf-wall?zone=6A`);
   const upper = page.getByTestId("upper-wall");
   await upper.waitFor();
-  for (const id of ["case-above-grade", "case-frost-depth", "case-deep-ground"]) expect(await upper.getByTestId(id).isVisible()).toBe(true);
+  for (const id of ["case-above-grade", "case-frost-depth", "case-deep-ground"])
+    expect(await upper.getByTestId(id).isVisible()).toBe(true);
   await page.goto(`${baseUrl()}/details/${WALL}?zone=5A`);
   const paths = page.getByTestId("paths-winter");
   await paths.waitFor();

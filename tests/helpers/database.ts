@@ -6,7 +6,12 @@ import { beforeAll, afterAll } from "vitest";
 export function testServer() {
   const port = Number(process.env.DB_PORT);
   if (!port) throw new Error("DB_PORT is not set: run the tests through `npm test`, which starts a throwaway MariaDB");
-  return { host: process.env.DB_HOST ?? "127.0.0.1", port, user: process.env.DB_USER ?? "root", password: process.env.DB_PASSWORD ?? "" };
+  return {
+    host: process.env.DB_HOST ?? "127.0.0.1",
+    port,
+    user: process.env.DB_USER ?? "root",
+    password: process.env.DB_PASSWORD ?? "",
+  };
 }
 
 export async function createEmptyDatabase(prefix = "t"): Promise<string> {
@@ -39,7 +44,8 @@ export async function dropDatabase(name: string): Promise<void> {
  */
 export function useMigratedDatabase(): { name: () => string } {
   const name = process.env.DB_NAME;
-  if (!name) throw new Error("DB_NAME is not set: vitest.config.ts must list tests/setup/database-name.ts in setupFiles");
+  if (!name)
+    throw new Error("DB_NAME is not set: vitest.config.ts must list tests/setup/database-name.ts in setupFiles");
   beforeAll(async () => {
     await createNamedDatabase(name);
     const { sequelize } = await import("~/db/sequelize.server");

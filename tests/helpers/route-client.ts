@@ -36,7 +36,8 @@ async function normalise(value: unknown, thrown: boolean): Promise<RouteResult> 
     }
     return { status: value.status, headers: value.headers, body, thrown };
   }
-  if (isDataLike(value)) return { status: value.init?.status ?? 200, headers: new Headers(value.init?.headers), body: value.data, thrown };
+  if (isDataLike(value))
+    return { status: value.init?.status ?? 200, headers: new Headers(value.init?.headers), body: value.data, thrown };
   if (isRouteErrorResponse(value)) return { status: value.status, headers: new Headers(), body: value.data, thrown };
   if (thrown) throw value;
   return { status: 200, headers: new Headers(), body: value, thrown };
@@ -60,7 +61,12 @@ interface MatchableRoute {
 }
 
 function matchable(entries: RouteConfigEntry[]): MatchableRoute[] {
-  return entries.map((entry) => ({ path: entry.path, index: entry.index, file: entry.file, children: entry.children ? matchable(entry.children) : undefined }));
+  return entries.map((entry) => ({
+    path: entry.path,
+    index: entry.index,
+    file: entry.file,
+    children: entry.children ? matchable(entry.children) : undefined,
+  }));
 }
 
 /** The middleware the server would run for this path: the root's, then each matching layout's and route's. */
@@ -68,12 +74,21 @@ async function middlewareFor(pathname: string): Promise<Middleware[]> {
   const { default: config } = await import("~/routes");
   const root = (await import("~/root")) as unknown as { middleware?: Middleware[] };
   const matches = (matchRoutes(matchable(config) as never, pathname) ?? []) as unknown as { route: MatchableRoute }[];
-  const modules = await Promise.all(matches.map((match) => import(/* @vite-ignore */ resolve("app", match.route.file)) as Promise<{ middleware?: Middleware[] }>));
+  const modules = await Promise.all(
+    matches.map(
+      (match) => import(/* @vite-ignore */ resolve("app", match.route.file)) as Promise<{ middleware?: Middleware[] }>,
+    ),
+  );
   return [...(root.middleware ?? []), ...modules.flatMap((module) => module.middleware ?? [])];
 }
 
-async function runMiddleware(middleware: Middleware[], args: RouteArgs, handler: () => Promise<unknown>): Promise<unknown> {
-  const dispatch = (i: number): Promise<unknown> => (i < middleware.length ? middleware[i](args, () => dispatch(i + 1)) : handler());
+async function runMiddleware(
+  middleware: Middleware[],
+  args: RouteArgs,
+  handler: () => Promise<unknown>,
+): Promise<unknown> {
+  const dispatch = (i: number): Promise<unknown> =>
+    i < middleware.length ? middleware[i](args, () => dispatch(i + 1)) : handler();
   return dispatch(0);
 }
 
@@ -91,18 +106,34 @@ export class RouteClient {
     return (await this.root()).csrfToken;
   }
 
-  request(path: string, init: { method?: string; form?: Record<string, string> | [string, string][]; headers?: Record<string, string> } = {}): Request {
+  request(
+    path: string,
+    init: {
+      method?: string;
+      form?: Record<string, string> | [string, string][];
+      headers?: Record<string, string>;
+    } = {},
+  ): Request {
     const headers = new Headers(init.headers);
     if (this.cookie) headers.set("Cookie", this.cookie);
     if (init.form) {
       if (!headers.has("Origin")) headers.set("Origin", APP_ORIGIN);
-      return new Request(new URL(path, APP_ORIGIN), { method: init.method ?? "POST", headers, body: new URLSearchParams(init.form) });
+      return new Request(new URL(path, APP_ORIGIN), {
+        method: init.method ?? "POST",
+        headers,
+        body: new URLSearchParams(init.form),
+      });
     }
     return new Request(new URL(path, APP_ORIGIN), { method: init.method ?? "GET", headers });
   }
 
   /** Runs a loader or action behind the middleware for its path, and keeps any cookie it sets. */
-  async call(fn: RouteFunction, path: string, params: Record<string, string>, init: Parameters<RouteClient["request"]>[1] = {}): Promise<RouteResult> {
+  async call(
+    fn: RouteFunction,
+    path: string,
+    params: Record<string, string>,
+    init: Parameters<RouteClient["request"]>[1] = {},
+  ): Promise<RouteResult> {
     return (await this.document([fn], path, params, init))[0];
   }
 
@@ -110,20 +141,35 @@ export class RouteClient {
    * Runs several loaders in one request, as a document request runs the root's and the page's: the
    * middleware runs once and they share its context. Answers one result per loader, in order.
    */
-  async document(fns: RouteFunction[], path: string, params: Record<string, string>, init: Parameters<RouteClient["request"]>[1] = {}): Promise<RouteResult[]> {
+  async document(
+    fns: RouteFunction[],
+    path: string,
+    params: Record<string, string>,
+    init: Parameters<RouteClient["request"]>[1] = {},
+  ): Promise<RouteResult[]> {
     const request = this.request(path, init);
-    const args: RouteArgs = { request, params, context: new RouterContextProvider(), url: new URL(request.url), pattern: path };
+    const args: RouteArgs = {
+      request,
+      params,
+      context: new RouterContextProvider(),
+      url: new URL(request.url),
+      pattern: path,
+    };
     // The route modules take the framework's generated argument types; these fields are the ones they read.
     const run = (fn: RouteFunction) => (fn as unknown as (a: RouteArgs) => unknown)(args);
     let results: RouteResult[];
     try {
-      const values = await runMiddleware(await middlewareFor(new URL(request.url).pathname), args, async () => Promise.all(fns.map(async (fn) => {
-        try {
-          return await normalise(await run(fn), false);
-        } catch (error) {
-          return normalise(error, true);
-        }
-      })));
+      const values = await runMiddleware(await middlewareFor(new URL(request.url).pathname), args, async () =>
+        Promise.all(
+          fns.map(async (fn) => {
+            try {
+              return await normalise(await run(fn), false);
+            } catch (error) {
+              return normalise(error, true);
+            }
+          }),
+        ),
+      );
       results = values as RouteResult[];
     } catch (error) {
       // Refused by a middleware (a guard): every loader of the request gets the same answer.
@@ -137,9 +183,17 @@ export class RouteClient {
   /** Runs a loader or action behind the middleware for its path and answers what it returned, untouched (a file's Response). */
   async respond(fn: RouteFunction, path: string | Request, params: Record<string, string>): Promise<unknown> {
     const request = typeof path === "string" ? this.request(path) : path;
-    const args: RouteArgs = { request, params, context: new RouterContextProvider(), url: new URL(request.url), pattern: new URL(request.url).pathname };
+    const args: RouteArgs = {
+      request,
+      params,
+      context: new RouterContextProvider(),
+      url: new URL(request.url),
+      pattern: new URL(request.url).pathname,
+    };
     try {
-      return await runMiddleware(await middlewareFor(new URL(request.url).pathname), args, async () => (fn as unknown as (a: RouteArgs) => unknown)(args));
+      return await runMiddleware(await middlewareFor(new URL(request.url).pathname), args, async () =>
+        (fn as unknown as (a: RouteArgs) => unknown)(args),
+      );
     } catch (error) {
       // A thrown Response is the answer, as the server sends it.
       if (error instanceof Response) return error;
@@ -148,12 +202,22 @@ export class RouteClient {
   }
 
   /** Posts a form with this browser's CSRF token added. */
-  async submit(fn: RouteFunction, path: string, form: Record<string, string>, params: Record<string, string> = {}): Promise<RouteResult> {
+  async submit(
+    fn: RouteFunction,
+    path: string,
+    form: Record<string, string>,
+    params: Record<string, string> = {},
+  ): Promise<RouteResult> {
     return this.call(fn, path, params, { form: { csrf: await this.csrfToken(), ...form } });
   }
 
   /** Posts a form whose fields repeat (checkbox groups, table rows), with this browser's CSRF token added. */
-  async submitPairs(fn: RouteFunction, path: string, pairs: [string, string][], params: Record<string, string> = {}): Promise<RouteResult> {
+  async submitPairs(
+    fn: RouteFunction,
+    path: string,
+    pairs: [string, string][],
+    params: Record<string, string> = {},
+  ): Promise<RouteResult> {
     return this.call(fn, path, params, { form: [["csrf", await this.csrfToken()], ...pairs] });
   }
 

@@ -31,9 +31,19 @@ test("a cross-site Origin is refused even with the right token", async () => {
   const signIn = await import("~/routes/auth/sign-in");
   const browser = new RouteClient();
   const csrf = await browser.csrfToken();
-  const result = await browser.call(signIn.action, "/sign-in", {}, { form: { ...form, csrf }, headers: { Origin: "https://elsewhere.test" } });
+  const result = await browser.call(
+    signIn.action,
+    "/sign-in",
+    {},
+    { form: { ...form, csrf }, headers: { Origin: "https://elsewhere.test" } },
+  );
   expect(result.status).toBe(403);
-  const metadata = await browser.call(signIn.action, "/sign-in", {}, { form: { ...form, csrf }, headers: { Origin: "null", "Sec-Fetch-Site": "cross-site" } });
+  const metadata = await browser.call(
+    signIn.action,
+    "/sign-in",
+    {},
+    { form: { ...form, csrf }, headers: { Origin: "null", "Sec-Fetch-Site": "cross-site" } },
+  );
   expect(metadata.status).toBe(403);
 });
 

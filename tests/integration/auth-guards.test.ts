@@ -13,7 +13,13 @@ async function signedIn(email: string, role: "member" | "editor" | "reviewer" | 
   const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
-  const user = await User.create({ email, displayName: `Guard ${role}`, passwordHash: await hashPassword(password), role, emailVerifiedAt: new Date() });
+  const user = await User.create({
+    email,
+    displayName: `Guard ${role}`,
+    passwordHash: await hashPassword(password),
+    role,
+    emailVerifiedAt: new Date(),
+  });
   const browser = new RouteClient();
   await browser.submit(signIn.action, "/sign-in", { email, password });
   return { user, browser };
@@ -23,7 +29,10 @@ async function signedIn(email: string, role: "member" | "editor" | "reviewer" | 
 async function contextFor(request: Request): Promise<RouterContextProvider> {
   const { loadUser } = await import("~/auth/guards.server");
   const context = new RouterContextProvider();
-  await loadUser({ request, params: {}, context, url: new URL(request.url), pattern: new URL(request.url).pathname }, async () => new Response(null));
+  await loadUser(
+    { request, params: {}, context, url: new URL(request.url), pattern: new URL(request.url).pathname },
+    async () => new Response(null),
+  );
   return context;
 }
 
@@ -88,7 +97,11 @@ test("an admin's role change is audited with who, from and to, and signs the per
   const { browser: member, user: memberUser } = await signedIn("promoted@example.test", "member");
   expect((await member.root()).user?.role).toBe("member");
 
-  const result = await admin.submit(users.action, "/admin/users", { intent: "change-role", userId: String(memberUser.id), role: "editor" });
+  const result = await admin.submit(users.action, "/admin/users", {
+    intent: "change-role",
+    userId: String(memberUser.id),
+    role: "editor",
+  });
   expect(result.status).toBe(200);
 
   const { AuditEvent } = await import("~/models/index.server");
@@ -106,9 +119,17 @@ test("an admin's role change is audited with who, from and to, and signs the per
 test("an admin cannot change their own role, and a bad change is a 400", async () => {
   const users = await import("~/routes/admin/users");
   const { browser: admin, user } = await signedIn("solo-admin@example.test", "admin");
-  const self = await admin.submit(users.action, "/admin/users", { intent: "change-role", userId: String(user.id), role: "member" });
+  const self = await admin.submit(users.action, "/admin/users", {
+    intent: "change-role",
+    userId: String(user.id),
+    role: "member",
+  });
   expect(self.status).toBe(400);
-  const nonsense = await admin.submit(users.action, "/admin/users", { intent: "change-role", userId: String(user.id), role: "overlord" });
+  const nonsense = await admin.submit(users.action, "/admin/users", {
+    intent: "change-role",
+    userId: String(user.id),
+    role: "overlord",
+  });
   expect(nonsense.status).toBe(400);
 });
 
@@ -116,7 +137,10 @@ test("an admin can sign a person out of every browser, and that is audited", asy
   const users = await import("~/routes/admin/users");
   const { browser: admin } = await signedIn("revoker@example.test", "admin");
   const { browser: member, user } = await signedIn("revoked@example.test", "member");
-  const result = await admin.submit(users.action, "/admin/users", { intent: "revoke-sessions", userId: String(user.id) });
+  const result = await admin.submit(users.action, "/admin/users", {
+    intent: "revoke-sessions",
+    userId: String(user.id),
+  });
   expect(result.body).toMatchObject({ message: "Signed out of 1 browser." });
   expect((await member.root()).user).toBeNull();
   const { AuditEvent } = await import("~/models/index.server");

@@ -10,7 +10,12 @@ const password = "the right passphrase"; // our own minimum is 12 characters
 async function member(email: string) {
   const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
-  return User.create({ email, displayName: "Limit Tester", passwordHash: await hashPassword(password), emailVerifiedAt: new Date() });
+  return User.create({
+    email,
+    displayName: "Limit Tester",
+    passwordHash: await hashPassword(password),
+    emailVerifiedAt: new Date(),
+  });
 }
 
 async function attempt(email: string, pass: string, address: string): Promise<string> {
@@ -26,7 +31,8 @@ async function attempt(email: string, pass: string, address: string): Promise<st
 test("five failures lock the account for 15 minutes, even for the right password and from another address", async () => {
   const { SIGN_IN_LIMITED, SIGN_IN_MISMATCH } = await import("~/auth/accounts.server");
   await member("locked@example.test");
-  for (let i = 0; i < 5; i++) expect(await attempt("locked@example.test", "wrong guess", `10.0.0.${i}`)).toBe(SIGN_IN_MISMATCH);
+  for (let i = 0; i < 5; i++)
+    expect(await attempt("locked@example.test", "wrong guess", `10.0.0.${i}`)).toBe(SIGN_IN_MISMATCH);
   expect(await attempt("locked@example.test", password, "10.0.1.1")).toBe(SIGN_IN_LIMITED);
 });
 
@@ -57,7 +63,8 @@ test("a correct sign-in clears the account's count", async () => {
   await member("forgetful@example.test");
   for (let i = 0; i < 4; i++) await attempt("forgetful@example.test", "wrong guess", "10.0.3.1");
   expect(await attempt("forgetful@example.test", password, "10.0.3.1")).toBe("ok");
-  for (let i = 0; i < 4; i++) expect(await attempt("forgetful@example.test", "wrong guess", "10.0.3.1")).toBe(SIGN_IN_MISMATCH);
+  for (let i = 0; i < 4; i++)
+    expect(await attempt("forgetful@example.test", "wrong guess", "10.0.3.1")).toBe(SIGN_IN_MISMATCH);
   expect(await attempt("forgetful@example.test", password, "10.0.3.1")).toBe("ok");
 });
 

@@ -11,7 +11,12 @@ const password = "a long enough passphrase"; // our own minimum is 12 characters
 async function member(email: string) {
   const { User } = await import("~/models/index.server");
   const { hashPassword } = await import("~/auth/password.server");
-  return User.create({ email, displayName: "Token Tester", passwordHash: await hashPassword(password), emailVerifiedAt: new Date() });
+  return User.create({
+    email,
+    displayName: "Token Tester",
+    passwordHash: await hashPassword(password),
+    emailVerifiedAt: new Date(),
+  });
 }
 
 test("a token works once", async () => {
@@ -81,12 +86,22 @@ test("forgot password → mailed link → new password signs out other browsers;
   expect(message.subject).toBe("Choose a new Dryside password");
   const token = linkIn(message, "/reset-password").split("/").at(-1)!;
   const newPassword = "an entirely new passphrase";
-  const done = await phone.submit(reset.action, `/reset-password/${token}`, { password: newPassword, confirmPassword: newPassword }, { token });
+  const done = await phone.submit(
+    reset.action,
+    `/reset-password/${token}`,
+    { password: newPassword, confirmPassword: newPassword },
+    { token },
+  );
   expect(done.status).toBe(302);
   expect(done.headers.get("Location")).toBe("/sign-in?notice=reset");
   expect((await laptop.root()).user).toBeNull();
 
-  const replay = await phone.submit(reset.action, `/reset-password/${token}`, { password: "yet another passphrase", confirmPassword: "yet another passphrase" }, { token });
+  const replay = await phone.submit(
+    reset.action,
+    `/reset-password/${token}`,
+    { password: "yet another passphrase", confirmPassword: "yet another passphrase" },
+    { token },
+  );
   expect(replay.status).toBe(410);
   const oldPassword = await phone.submit(signIn.action, "/sign-in", { email: "reset@example.test", password });
   expect(oldPassword.status).toBe(401);

@@ -31,11 +31,16 @@ async function api(path: string, init?: RequestInit) {
   const request = new Request(url, init);
   const visitor = new RouteClient();
   // API routes answer Responses; respond() runs them behind the root middleware, as the server does.
-  if (url.pathname === "/api/details") return (await visitor.respond((await import("~/routes/api/details")).loader, request, {})) as Response;
+  if (url.pathname === "/api/details")
+    return (await visitor.respond((await import("~/routes/api/details")).loader, request, {})) as Response;
   const check = /^\/api\/details\/([^/]+)\/check$/.exec(url.pathname);
-  if (check) return (await visitor.respond((await import("~/routes/api/detail-check")).action, request, { slug: check[1] })) as Response;
+  if (check)
+    return (await visitor.respond((await import("~/routes/api/detail-check")).action, request, {
+      slug: check[1],
+    })) as Response;
   const one = /^\/api\/details\/([^/]+)$/.exec(url.pathname);
-  if (one) return (await visitor.respond((await import("~/routes/api/detail")).loader, request, { slug: one[1] })) as Response;
+  if (one)
+    return (await visitor.respond((await import("~/routes/api/detail")).loader, request, { slug: one[1] })) as Response;
   throw new Error(`no route for ${path}`);
 }
 
@@ -70,10 +75,17 @@ test("filters combine across facets and values within a facet are alternatives",
   expect(body.cards.map((c: { slug: string }) => c.slug).sort()).toEqual(expected.map((f) => f.slug).sort());
 });
 
-interface Card { slug: string; title: string; summary: string }
+interface Card {
+  slug: string;
+  title: string;
+  summary: string;
+}
 
 test("full-text search finds details by trade words and their synonyms", async () => {
-  const titled = files.filter((f) => /crawlspace/i.test(f.title)).map((f) => f.slug).sort();
+  const titled = files
+    .filter((f) => /crawlspace/i.test(f.title))
+    .map((f) => f.slug)
+    .sort();
   expect(titled.length).toBeGreaterThan(0);
   // "crawl space" (two words) finds what is written "crawlspace", through the synonym table.
   const crawl = await (await api("/api/details?q=crawl+space")).json();
@@ -113,7 +125,11 @@ test("a premium detail is refused to a visitor with 403 and never carries its bo
   expect(refusal.preview.slug).toBe(premium.slug);
   expect(refusal.error).toBe("premium_required");
   expect(refusal.offers[0]).toEqual({ label: "See plans", href: "/pricing" });
-  const check = await api(`/api/details/${premium.slug}/check`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ zone: "5A" }) });
+  const check = await api(`/api/details/${premium.slug}/check`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ zone: "5A" }),
+  });
   expect(check.status).toBe(403);
   // The same refusal everywhere premium content is asked for (the pack and drawing refusals are in payments and desk tests).
   expect(await check.json()).toMatchObject({ error: "premium_required", offers: refusal.offers });
@@ -125,7 +141,11 @@ test("a free detail is served whole, and its site check answers with the engine'
   expect(response.status).toBe(200);
   const { detail } = await response.json();
   expect(detail.full.bodyHtml).toContain("<h2");
-  const check = await api(`/api/details/${free.slug}/check`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ zone: free.zones[0], units: "si" }) });
+  const check = await api(`/api/details/${free.slug}/check`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ zone: free.zones[0], units: "si" }),
+  });
   expect(check.status).toBe(200);
   const { result } = await check.json();
   expect(result.site.zone).toBe(free.zones[0]);
@@ -135,7 +155,11 @@ test("a free detail is served whole, and its site check answers with the engine'
 
 test("a site check with bad input answers 400 with field errors, and unknown slugs 404", async () => {
   const free = files.find((f) => f.tier === "free")!;
-  const bad = await api(`/api/details/${free.slug}/check`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ hdd: -5, indoorRh: 140 }) });
+  const bad = await api(`/api/details/${free.slug}/check`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ hdd: -5, indoorRh: 140 }),
+  });
   expect(bad.status).toBe(400);
   const body = await bad.json();
   expect(Object.keys(body.fieldErrors).sort()).toEqual(expect.arrayContaining(["hdd", "indoorRh"]));

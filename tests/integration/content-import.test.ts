@@ -62,7 +62,9 @@ test("raising a file's revision adds a revision and supersedes the published one
   const path = join(dir, "details", file);
   const text = readFileSync(path, "utf8");
   const revision = Number(/^revision: (\d+)$/m.exec(text)![1]);
-  let next = text.replace(/^revision: \d+$/m, `revision: ${revision + 1}`).replace(/^revised: .*$/m, "revised: 2026-11-30");
+  let next = text
+    .replace(/^revision: \d+$/m, `revision: ${revision + 1}`)
+    .replace(/^revised: .*$/m, "revised: 2026-11-30");
   if (!/^revised:/m.test(next)) next = next.replace(/^revision: .*$/m, (line) => `${line}\nrevised: 2026-11-30`);
   next = /^change_note:/m.test(next)
     ? next.replace(/^change_note: .*$/m, 'change_note: "Install sequence clarified for the crew."')

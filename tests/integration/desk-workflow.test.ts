@@ -47,7 +47,20 @@ beforeAll(async () => {
 /** The editor form's fields as the browser posts them: checkbox groups repeated, layer rows named `layers[i].field`. */
 function formPairs(values: DraftFormValues, intent: "save" | "submit"): [string, string][] {
   const pairs: [string, string][] = [["intent", intent]];
-  for (const key of ["slug", "title", "summary", "assembly", "substrate", "below_grade", "strategy", "tier", "references", "change_note", "body"] as const) pairs.push([key, values[key]]);
+  for (const key of [
+    "slug",
+    "title",
+    "summary",
+    "assembly",
+    "substrate",
+    "below_grade",
+    "strategy",
+    "tier",
+    "references",
+    "change_note",
+    "body",
+  ] as const)
+    pairs.push([key, values[key]]);
   for (const zone of values.zones) pairs.push(["zones", zone]);
   for (const set of values.sets) pairs.push(["sets", set]);
   values.layers.forEach((layer, i) => {
@@ -91,7 +104,12 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   const { getDetailView } = await import("~/catalogue/detail.server");
 
   // A member saves the detail, so the publication must reach them.
-  const saved = await browsers.member.submit(r.save.action, `/details/${FREE_SLUG}/save`, { intent: "save" }, { slug: FREE_SLUG });
+  const saved = await browsers.member.submit(
+    r.save.action,
+    `/details/${FREE_SLUG}/save`,
+    { intent: "save" },
+    { slug: FREE_SLUG },
+  );
   expect(saved.body).toEqual({ saved: true });
 
   const before = await Detail.findOne({ where: { slug: FREE_SLUG } });
@@ -104,39 +122,81 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   const edited: DraftFormValues = {
     ...values,
     change_note: "Inner foam face thickened for the colder zones.",
-    body: values.body.replace("## Install sequence", "## Install sequence\n\nSet the forms plumb before the pour; brace every corner."),
+    body: values.body.replace(
+      "## Install sequence",
+      "## Install sequence\n\nSet the forms plumb before the pour; brace every corner.",
+    ),
     layers: values.layers.map((layer, i) => (i === 2 ? { ...layer, thickness_mm: "100" } : layer)),
   };
-  const submitted = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs(edited, "submit"), { id: String(id) });
+  const submitted = await browsers.editor.submitPairs(
+    r.revision.action,
+    `/desk/revisions/${id}`,
+    formPairs(edited, "submit"),
+    { id: String(id) },
+  );
   expect(submitted.status).toBe(302);
   expect((await DetailRevision.findByPk(id))!.state).toBe("in_review");
 
   // An editor is not a reviewer: the review action refuses them on the server.
-  const byEditor = await browsers.editor.submit(r.review.action, `/desk/review/${id}`, { intent: "approve" }, { id: String(id) });
+  const byEditor = await browsers.editor.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    { intent: "approve" },
+    { id: String(id) },
+  );
   expect(byEditor.status).toBe(403);
 
   // The reviewer sees a readable diff against the published revision.
   const reviewPage = await browsers.reviewer.call(r.review.loader, `/desk/review/${id}`, { id: String(id) });
-  const review = reviewPage.body as { changes: string[]; bodyDiff: { kind: string; text?: string }[]; canDecide: boolean };
+  const review = reviewPage.body as {
+    changes: string[];
+    bodyDiff: { kind: string; text?: string }[];
+    canDecide: boolean;
+  };
   expect(review.canDecide).toBe(true);
   expect(review.changes).toContain("icf-eps-form: 63 mm → 100 mm.");
-  expect(review.bodyDiff).toContainEqual({ kind: "added", text: "Set the forms plumb before the pour; brace every corner." });
+  expect(review.bodyDiff).toContainEqual({
+    kind: "added",
+    text: "Set the forms plumb before the pour; brace every corner.",
+  });
 
-  const sentBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comments.layers": "Say which face is thickened.", "comments.cautions": "Add the termite caution." }, { id: String(id) });
+  const sentBack = await browsers.reviewer.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    {
+      intent: "request-changes",
+      "comments.layers": "Say which face is thickened.",
+      "comments.cautions": "Add the termite caution.",
+    },
+    { id: String(id) },
+  );
   expect(sentBack.status).toBe(302);
   expect((await DetailRevision.findByPk(id))!.state).toBe("changes_requested");
   const comments = await ReviewComment.findAll({ where: { revisionId: id }, order: [["id", "ASC"]] });
-  expect(comments.map((c) => [c.section, c.body])).toEqual([["layers", "Say which face is thickened."], ["cautions", "Add the termite caution."]]);
+  expect(comments.map((c) => [c.section, c.body])).toEqual([
+    ["layers", "Say which face is thickened."],
+    ["cautions", "Add the termite caution."],
+  ]);
 
   // The author sees the comments and resubmits.
   const again = await browsers.editor.call(r.revision.loader, `/desk/revisions/${id}`, { id: String(id) });
   expect((again.body as { comments: { section: string }[]; editable: boolean }).comments).toHaveLength(2);
   expect((again.body as { editable: boolean }).editable).toBe(true);
-  const resubmitted = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs({ ...edited, change_note: "Interior foam face thickened to 100 mm for the colder zones." }, "submit"), { id: String(id) });
+  const resubmitted = await browsers.editor.submitPairs(
+    r.revision.action,
+    `/desk/revisions/${id}`,
+    formPairs({ ...edited, change_note: "Interior foam face thickened to 100 mm for the colder zones." }, "submit"),
+    { id: String(id) },
+  );
   expect(resubmitted.status).toBe(302);
   expect((await DetailRevision.findByPk(id))!.state).toBe("in_review");
 
-  const approved = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "approve" }, { id: String(id) });
+  const approved = await browsers.reviewer.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    { intent: "approve" },
+    { id: String(id) },
+  );
   expect(approved.status).toBe(302);
   expect(approved.headers.get("Location")).toBe(`/details/${FREE_SLUG}?published=2`);
 
@@ -152,7 +212,11 @@ test("a draft goes to review, comes back with comments, is resubmitted, approved
   expect(published!.frontMatter.reviewer).toBe("Corvin Aldersey");
 
   const view = await getDetailView(FREE_SLUG, null);
-  expect(view!.revision).toMatchObject({ number: 2, reviewerName: "Corvin Aldersey", authorName: "Maelis Ortega-Finch" });
+  expect(view!.revision).toMatchObject({
+    number: 2,
+    reviewerName: "Corvin Aldersey",
+    authorName: "Maelis Ortega-Finch",
+  });
 
   const audit = await AuditEvent.findAll({ where: { subjectType: "detail", subjectId: String(after!.id) } });
   expect(audit.map((event) => event.action)).toEqual(expect.arrayContaining(["detail.published", "detail.superseded"]));
@@ -168,25 +232,49 @@ test("a reviewer can never approve their own revision, and nothing changes when 
   const r = await routes();
   const { Detail, DetailRevision, AuditEvent } = await import("~/models/index.server");
   const { id, values } = await startDraft("reviewer", PREMIUM_SLUG);
-  const submitted = await browsers.reviewer.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs({ ...values, change_note: "Cautions reordered for the crew." }, "submit"), { id: String(id) });
+  const submitted = await browsers.reviewer.submitPairs(
+    r.revision.action,
+    `/desk/revisions/${id}`,
+    formPairs({ ...values, change_note: "Cautions reordered for the crew." }, "submit"),
+    { id: String(id) },
+  );
   expect(submitted.status).toBe(302);
   const detailBefore = await Detail.findOne({ where: { slug: PREMIUM_SLUG } });
   const auditBefore = await AuditEvent.count();
 
-  const own = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "approve" }, { id: String(id) });
+  const own = await browsers.reviewer.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    { intent: "approve" },
+    { id: String(id) },
+  );
   expect(own.status).toBe(403);
-  expect((own.body as { result: { error: Record<string, string[]> } }).result.error[""].join(" ")).toMatch(/another reviewer/);
-  const ownSendBack = await browsers.reviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "request-changes", "comments.metadata": "self" }, { id: String(id) });
+  expect((own.body as { result: { error: Record<string, string[]> } }).result.error[""].join(" ")).toMatch(
+    /another reviewer/,
+  );
+  const ownSendBack = await browsers.reviewer.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    { intent: "request-changes", "comments.metadata": "self" },
+    { id: String(id) },
+  );
   expect(ownSendBack.status).toBe(403);
 
   expect((await DetailRevision.findByPk(id))!.state).toBe("in_review");
-  expect((await Detail.findOne({ where: { slug: PREMIUM_SLUG } }))!.publishedRevisionId).toBe(detailBefore!.publishedRevisionId);
+  expect((await Detail.findOne({ where: { slug: PREMIUM_SLUG } }))!.publishedRevisionId).toBe(
+    detailBefore!.publishedRevisionId,
+  );
   expect(await AuditEvent.count()).toBe(auditBefore);
   const page = await browsers.reviewer.call(r.review.loader, `/desk/review/${id}`, { id: String(id) });
   expect(page.body).toMatchObject({ own: true, canDecide: false });
 
   // Another reviewer may.
-  const other = await browsers.otherReviewer.submit(r.review.action, `/desk/review/${id}`, { intent: "approve" }, { id: String(id) });
+  const other = await browsers.otherReviewer.submit(
+    r.review.action,
+    `/desk/review/${id}`,
+    { intent: "approve" },
+    { id: String(id) },
+  );
   expect(other.status).toBe(302);
 });
 
@@ -201,23 +289,43 @@ test("an invalid form answers 400 with field errors, keeps what was typed, and s
     title: "Rim",
     change_note: "",
     zones: [],
-    layers: values.layers.map((layer, i) => (i === 0 ? { ...layer, thickness_mm: "-5" } : i === 1 ? { ...layer, material: "unobtainium-board" } : layer)),
+    layers: values.layers.map((layer, i) =>
+      i === 0 ? { ...layer, thickness_mm: "-5" } : i === 1 ? { ...layer, material: "unobtainium-board" } : layer,
+    ),
   };
-  const result = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs(typed, "save"), { id: String(id) });
+  const result = await browsers.editor.submitPairs(
+    r.revision.action,
+    `/desk/revisions/${id}`,
+    formPairs(typed, "save"),
+    { id: String(id) },
+  );
   expect(result.status).toBe(400);
   // conform's reply: what was typed comes back as the form's values, each error under its field's name.
-  const { result: reply } = result.body as { result: { initialValue: DraftFormValues; error: Record<string, string[]> } };
+  const { result: reply } = result.body as {
+    result: { initialValue: DraftFormValues; error: Record<string, string[]> };
+  };
   expect(reply.initialValue.title).toBe("Rim");
   expect(reply.initialValue.layers[0].thickness_mm).toBe("-5");
   expect(reply.initialValue.layers[1].material).toBe("unobtainium-board");
-  expect(Object.keys(reply.error).sort()).toEqual(["change_note", "layers[0].thickness_mm", "layers[1].material", "title", "zones"]);
+  expect(Object.keys(reply.error).sort()).toEqual([
+    "change_note",
+    "layers[0].thickness_mm",
+    "layers[1].material",
+    "title",
+    "zones",
+  ]);
   expect(reply.error["layers[1].material"].join(" ")).toMatch(/not in the material library/);
   const after = await DetailRevision.findByPk(id);
   expect(after!.contentHash).toBe(before!.contentHash);
   expect(after!.updatedAt.getTime()).toBe(before!.updatedAt.getTime());
 
   // Submitting needs the body's required sections as well.
-  const noSections = await browsers.editor.submitPairs(r.revision.action, `/desk/revisions/${id}`, formPairs({ ...values, change_note: "Body shortened for the crew sheet.", body: "Just a paragraph." }, "submit"), { id: String(id) });
+  const noSections = await browsers.editor.submitPairs(
+    r.revision.action,
+    `/desk/revisions/${id}`,
+    formPairs({ ...values, change_note: "Body shortened for the crew sheet.", body: "Just a paragraph." }, "submit"),
+    { id: String(id) },
+  );
   expect(noSections.status).toBe(400);
   expect(Object.keys((noSections.body as { result: { error: object } }).result.error)).toEqual(["body"]);
 });
@@ -231,15 +339,65 @@ test("a new detail starts as a draft that stays out of the catalogue", async () 
       slug: "test-wall-with-exterior-mineral-wool",
       title: "Test wall with exterior mineral wool",
       summary: "A wood-frame wall with mineral wool board outside the sheathing and a vented rainscreen.",
-      assembly: "above-grade-wall", substrate: "wood-frame", below_grade: "none", strategy: "cavity-plus-exterior", tier: "free",
-      zones: ["5A", "6A"], sets: [], references: "IRC 2021 R702.7 (vapour retarders)", change_note: "", body: "## Why it works\n\nDraft.",
+      assembly: "above-grade-wall",
+      substrate: "wood-frame",
+      below_grade: "none",
+      strategy: "cavity-plus-exterior",
+      tier: "free",
+      zones: ["5A", "6A"],
+      sets: [],
+      references: "IRC 2021 R702.7 (vapour retarders)",
+      change_note: "",
+      body: "## Why it works\n\nDraft.",
       layers: [
-        { role: "cladding", material: "fibre-cement-lap-siding", thickness_mm: "8", framing_material: "", framing_fraction: "", joints: "" },
-        { role: "drainage-gap", material: "vented-air-space", thickness_mm: "19", framing_material: "", framing_fraction: "", joints: "" },
-        { role: "insulation", material: "mineral-wool-board", thickness_mm: "50", framing_material: "", framing_fraction: "", joints: "" },
-        { role: "sheathing", material: "osb", thickness_mm: "11", framing_material: "", framing_fraction: "", joints: "" },
-        { role: "insulation", material: "fibreglass-batt", thickness_mm: "140", framing_material: "softwood-lumber", framing_fraction: "0.23", joints: "" },
-        { role: "interior-finish", material: "gypsum-board", thickness_mm: "12.7", framing_material: "", framing_fraction: "", joints: "" },
+        {
+          role: "cladding",
+          material: "fibre-cement-lap-siding",
+          thickness_mm: "8",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
+        {
+          role: "drainage-gap",
+          material: "vented-air-space",
+          thickness_mm: "19",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
+        {
+          role: "insulation",
+          material: "mineral-wool-board",
+          thickness_mm: "50",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
+        {
+          role: "sheathing",
+          material: "osb",
+          thickness_mm: "11",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
+        {
+          role: "insulation",
+          material: "fibreglass-batt",
+          thickness_mm: "140",
+          framing_material: "softwood-lumber",
+          framing_fraction: "0.23",
+          joints: "",
+        },
+        {
+          role: "interior-finish",
+          material: "gypsum-board",
+          thickness_mm: "12.7",
+          framing_material: "",
+          framing_fraction: "",
+          joints: "",
+        },
       ],
     },
     "save",
@@ -247,8 +405,10 @@ test("a new detail starts as a draft that stays out of the catalogue", async () 
   const created = await browsers.editor.submitPairs(r.newDetail.action, "/desk/new", pairs);
   expect(created.status).toBe(302);
   const id = revisionIdFrom(created.headers.get("Location"));
-  expect((await DetailRevision.findByPk(id))).toMatchObject({ number: 1, state: "draft", authorId: ids.editor });
-  expect((await Detail.findOne({ where: { slug: "test-wall-with-exterior-mineral-wool" } }))!.publishedRevisionId).toBeNull();
+  expect(await DetailRevision.findByPk(id)).toMatchObject({ number: 1, state: "draft", authorId: ids.editor });
+  expect(
+    (await Detail.findOne({ where: { slug: "test-wall-with-exterior-mineral-wool" } }))!.publishedRevisionId,
+  ).toBeNull();
   expect(await getDetailView("test-wall-with-exterior-mineral-wool", null)).toBeNull();
 
   const duplicate = await browsers.editor.submitPairs(r.newDetail.action, "/desk/new", pairs);
@@ -268,12 +428,21 @@ test("uploads are typed by their bytes: a PNG named .svg is refused, a script-be
   const editor = { id: ids.editor, displayName: people.editor.displayName, role: "editor" as const };
   const { revisionId } = await startRevision(editor, "floor-over-vented-crawl-fibreglass-batts");
 
-  const refused = await storeUpload(editor, revisionId, new File([PNG_BYTES], "section.svg"), "").catch((e: unknown) => e);
+  const refused = await storeUpload(editor, revisionId, new File([PNG_BYTES], "section.svg"), "").catch(
+    (e: unknown) => e,
+  );
   expect(refused).toBeInstanceOf(DeskError);
   expect((refused as Error).message).toMatch(/named \.svg but its content is PNG/);
-  const notAFile = await storeUpload(editor, revisionId, new File(["#!/bin/sh\necho hi\n"], "notes.txt"), "").catch((e: unknown) => e);
+  const notAFile = await storeUpload(editor, revisionId, new File(["#!/bin/sh\necho hi\n"], "notes.txt"), "").catch(
+    (e: unknown) => e,
+  );
   expect((notAFile as Error).message).toMatch(/Only SVG, PNG, JPEG and PDF/);
-  const tooBig = await storeUpload(editor, revisionId, new File([Buffer.concat([PNG_BYTES, Buffer.alloc(5 * 1024 * 1024)])], "big.png"), "").catch((e: unknown) => e);
+  const tooBig = await storeUpload(
+    editor,
+    revisionId,
+    new File([Buffer.concat([PNG_BYTES, Buffer.alloc(5 * 1024 * 1024)])], "big.png"),
+    "",
+  ).catch((e: unknown) => e);
   expect((tooBig as Error).message).toMatch(/larger than 5 MB/);
 
   const png = await storeUpload(editor, revisionId, new File([PNG_BYTES], "photo.png"), "site photo");
@@ -290,7 +459,9 @@ test("uploads are typed by their bytes: a PNG named .svg is refused, a script-be
 
   // Someone else's draft is not theirs to attach to.
   const reviewer = { id: ids.reviewer, displayName: people.reviewer.displayName, role: "reviewer" as const };
-  const notAuthor = await storeUpload(reviewer, revisionId, new File([PNG_BYTES], "photo.png"), "").catch((e: unknown) => e);
+  const notAuthor = await storeUpload(reviewer, revisionId, new File([PNG_BYTES], "photo.png"), "").catch(
+    (e: unknown) => e,
+  );
   expect((notAuthor as InstanceType<typeof DeskError>).status).toBe(403);
 });
 
@@ -323,13 +494,24 @@ test("a draft's files are for editors only; a published revision's files follow 
 
     const revision = await DetailRevision.findByPk(revisionId);
     const values = valuesFromFrontMatter(revision!.frontMatter, revision!.bodyMd);
-    const saved = await saveRevision(editor, revisionId, { ...values, change_note: "Site photo of the finished rim added." }, true);
+    const saved = await saveRevision(
+      editor,
+      revisionId,
+      { ...values, change_note: "Site photo of the finished rim added." },
+      true,
+    );
     expect(saved.ok).toBe(true);
     await approveAndPublish(reviewer, revisionId);
     const published = await visitor.call(r.file.loader, path, params);
     expect(published.status, `${c.slug} published, visitor`).toBe(c.visitorAfter);
-    if (c.visitorAfter === 403) expect(published.body).toMatchObject({ error: "premium_required", message: expect.stringMatching(/^This drawing is premium/) });
-    expect((await browsers.member.call(r.file.loader, path, params)).status, `${c.slug} published, member`).toBe(c.memberAfter);
+    if (c.visitorAfter === 403)
+      expect(published.body).toMatchObject({
+        error: "premium_required",
+        message: expect.stringMatching(/^This drawing is premium/),
+      });
+    expect((await browsers.member.call(r.file.loader, path, params)).status, `${c.slug} published, member`).toBe(
+      c.memberAfter,
+    );
   }
 });
 
@@ -340,12 +522,19 @@ test("a reviewer withdraws a published detail with a reason; an editor cannot", 
   const slug = "basement-exterior-mineral-wool-drainage-board";
   const path = `/desk/details/${slug}/withdraw`;
 
-  expect((await browsers.editor.submit(r.withdraw.action, path, { reason: "Editors may not withdraw." }, { slug })).status).toBe(403);
+  expect(
+    (await browsers.editor.submit(r.withdraw.action, path, { reason: "Editors may not withdraw." }, { slug })).status,
+  ).toBe(403);
   const short = await browsers.reviewer.submit(r.withdraw.action, path, { reason: "no" }, { slug });
   expect(short.status).toBe(400);
   expect(await getDetailView(slug, null)).not.toBeNull();
 
-  const done = await browsers.reviewer.submit(r.withdraw.action, path, { reason: "Drainage board product class discontinued; rewrite pending." }, { slug });
+  const done = await browsers.reviewer.submit(
+    r.withdraw.action,
+    path,
+    { reason: "Drainage board product class discontinued; rewrite pending." },
+    { slug },
+  );
   expect(done.status).toBe(302);
   const detail = await Detail.findOne({ where: { slug } });
   expect(detail!.withdrawnAt).not.toBeNull();
@@ -362,20 +551,36 @@ test("a material edit needs a source for every value, is audit-logged, and recom
   const { materialToForm } = await import("~/desk/material-form");
   const slug = "icf-eps-form";
   const values = materialToForm((await findMaterial(slug))!);
-  const toPairs = (v: typeof values): Record<string, string> => ({ ...Object.fromEntries(Object.entries(v).filter(([k]) => k !== "flags")), ...(v.flags[0] ? { flags: v.flags[0] } : {}) }) as Record<string, string>;
+  const toPairs = (v: typeof values): Record<string, string> =>
+    ({
+      ...Object.fromEntries(Object.entries(v).filter(([k]) => k !== "flags")),
+      ...(v.flags[0] ? { flags: v.flags[0] } : {}),
+    }) as Record<string, string>;
 
-  const missing = await browsers.editor.submit(r.material.action, `/desk/materials/${slug}`, toPairs({ ...values, thermal_source: "" }), { slug });
+  const missing = await browsers.editor.submit(
+    r.material.action,
+    `/desk/materials/${slug}`,
+    toPairs({ ...values, thermal_source: "" }),
+    { slug },
+  );
   expect(missing.status).toBe(400);
   expect(Object.keys((missing.body as { result: { error: object } }).result.error)).toContain("thermal_source");
 
   const before = await Detail.findOne({ where: { slug: "basement-icf-wall" } });
   const halved = String(Number(values.thermal_value) / 2);
-  const ok = await browsers.editor.submit(r.material.action, `/desk/materials/${slug}`, toPairs({ ...values, thermal_value: halved, thermal_source: "Desk test value for recomputation, D" }), { slug });
+  const ok = await browsers.editor.submit(
+    r.material.action,
+    `/desk/materials/${slug}`,
+    toPairs({ ...values, thermal_value: halved, thermal_source: "Desk test value for recomputation, D" }),
+    { slug },
+  );
   expect(ok.status).toBe(200);
   const after = await Detail.findOne({ where: { slug: "basement-icf-wall" } });
   // Halving the foam's conductivity doubles its R, so the wall's projection rises.
   expect(after!.rValueRsi!).toBeGreaterThan(before!.rValueRsi!);
-  expect(await AuditEvent.findOne({ where: { action: "material.updated", subjectId: slug, actorId: ids.editor } })).not.toBeNull();
+  expect(
+    await AuditEvent.findOne({ where: { action: "material.updated", subjectId: slug, actorId: ids.editor } }),
+  ).not.toBeNull();
   const { materialLibrary } = await import("~/catalogue/materials.server");
   expect((await materialLibrary()).get(slug)!.thermal.conductivity_w_mk).toBe(Number(halved));
 });

@@ -11,7 +11,13 @@ let sequelize: Sequelize;
 beforeAll(async () => {
   name = await createEmptyDatabase("migrations");
   const server = testServer();
-  sequelize = createSequelize({ host: server.host, port: server.port, database: name, username: server.user, password: server.password });
+  sequelize = createSequelize({
+    host: server.host,
+    port: server.port,
+    database: name,
+    username: server.user,
+    password: server.password,
+  });
 });
 
 afterAll(async () => {
@@ -20,14 +26,18 @@ afterAll(async () => {
 });
 
 async function tableNames(): Promise<string[]> {
-  const [rows] = await sequelize.query("SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE()");
+  const [rows] = await sequelize.query(
+    "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE()",
+  );
   return (rows as { name: string }[]).map((row) => row.name).sort();
 }
 
 test("every migration applies on an empty database, in the listed order", async () => {
   const applied = await createMigrator(sequelize).up();
   expect(applied.map((m) => m.name)).toEqual(migrations.map((m) => m.name));
-  expect(await tableNames()).toEqual(expect.arrayContaining(["users", "details", "detail_revisions", "materials", "schema_migrations"]));
+  expect(await tableNames()).toEqual(
+    expect.arrayContaining(["users", "details", "detail_revisions", "materials", "schema_migrations"]),
+  );
 });
 
 test("migrating twice changes nothing", async () => {

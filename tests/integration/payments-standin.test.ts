@@ -44,7 +44,11 @@ beforeAll(async () => {
       const rawBody = Buffer.concat(chunks).toString("utf8");
       try {
         // Verified exactly as the app's webhook route does: raw body, header, endpoint secret.
-        const event = stripe.webhooks.constructEvent(rawBody, String(request.headers["stripe-signature"]), WEBHOOK_SECRET);
+        const event = stripe.webhooks.constructEvent(
+          rawBody,
+          String(request.headers["stripe-signature"]),
+          WEBHOOK_SECRET,
+        );
         received.push({ event, rawBody });
         response.writeHead(200).end();
       } catch {
@@ -144,7 +148,9 @@ test("health check answers 200", async () => {
 });
 
 test("form bodies decode nested keys and indexed arrays the way the SDK encodes them", () => {
-  const fields = parseForm("line_items[0][price]=price_1&line_items[0][quantity]=2&expand[]=a&expand[]=b&metadata[0]=x");
+  const fields = parseForm(
+    "line_items[0][price]=price_1&line_items[0][quantity]=2&expand[]=a&expand[]=b&metadata[0]=x",
+  );
   expect(fields).toEqual({
     line_items: [{ price: "price_1", quantity: "2" }],
     expand: ["a", "b"],
@@ -182,7 +188,12 @@ test("products and prices are created, retrieved and listed with filters and cur
     lookup_key: "crawlspace_yearly",
   });
   const once = await stripe.prices.create({ product: second.id, currency: "usd", unit_amount: 4900, active: false });
-  expect(monthly).toMatchObject({ object: "price", type: "recurring", recurring: { interval: "month" }, unit_amount: 1500 });
+  expect(monthly).toMatchObject({
+    object: "price",
+    type: "recurring",
+    recurring: { interval: "month" },
+    unit_amount: 1500,
+  });
   expect(once).toMatchObject({ type: "one_time", recurring: null });
   expect((await stripe.prices.retrieve(yearly.id)).lookup_key).toBe("crawlspace_yearly");
 
@@ -202,12 +213,19 @@ test("products and prices are created, retrieved and listed with filters and cur
 });
 
 test("customers are created and found by email", async () => {
-  const customer = await stripe.customers.create({ email: "editor@example.test", name: "An Editor", metadata: { user: "7" } });
+  const customer = await stripe.customers.create({
+    email: "editor@example.test",
+    name: "An Editor",
+    metadata: { user: "7" },
+  });
   await stripe.customers.create({ email: "other@example.test" });
   expect(customer.id).toMatch(/^cus_/);
   const found = await stripe.customers.list({ email: "editor@example.test" });
   expect(found.data.map((item) => item.id)).toEqual([customer.id]);
-  expect((await stripe.customers.retrieve(customer.id)) as Stripe.Customer).toMatchObject({ name: "An Editor", metadata: { user: "7" } });
+  expect((await stripe.customers.retrieve(customer.id)) as Stripe.Customer).toMatchObject({
+    name: "An Editor",
+    metadata: { user: "7" },
+  });
 });
 
 test("a request without an API key gets 401 in the API's error shape", async () => {
@@ -272,13 +290,19 @@ test("subscription checkout: hosted page, good card, signed webhooks, then the s
   expect(completed.data.object).toMatchObject({ id: session.id, client_reference_id: "user_42", status: "complete" });
 
   const done = await stripe.checkout.sessions.retrieve(session.id, { expand: ["subscription", "line_items"] });
-  expect(done).toMatchObject({ status: "complete", payment_status: "paid", metadata: { set: "below-grade-essentials" } });
+  expect(done).toMatchObject({
+    status: "complete",
+    payment_status: "paid",
+    metadata: { set: "below-grade-essentials" },
+  });
   expect(done.customer).toMatch(/^cus_/);
   const subscription = done.subscription as Stripe.Subscription;
   expect(subscription.id).toMatch(/^sub_/);
   expect(subscription).toMatchObject({ status: "active", cancel_at_period_end: false, customer: done.customer });
   expect(subscription.items.data[0].price.id).toBe(price.id);
-  expect(subscription.items.data[0].current_period_end).toBeGreaterThan(subscription.items.data[0].current_period_start);
+  expect(subscription.items.data[0].current_period_end).toBeGreaterThan(
+    subscription.items.data[0].current_period_start,
+  );
   expect(done.line_items?.data.map((item) => item.price?.id)).toEqual([price.id]);
 
   const invoice = await stripe.invoices.retrieve(String(subscription.latest_invoice));
@@ -367,7 +391,9 @@ test("a renewal bills the next period: invoice.paid and the subscription's new p
   const day = expectedEnd.getUTCDate();
   expectedEnd.setUTCDate(1);
   expectedEnd.setUTCMonth(expectedEnd.getUTCMonth() + 1);
-  expectedEnd.setUTCDate(Math.min(day, new Date(Date.UTC(expectedEnd.getUTCFullYear(), expectedEnd.getUTCMonth() + 1, 0)).getUTCDate()));
+  expectedEnd.setUTCDate(
+    Math.min(day, new Date(Date.UTC(expectedEnd.getUTCFullYear(), expectedEnd.getUTCMonth() + 1, 0)).getUTCDate()),
+  );
   expect(renewed.items.data[0].current_period_end).toBe(expectedEnd.getTime() / 1000);
 });
 

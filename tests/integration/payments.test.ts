@@ -43,7 +43,11 @@ beforeAll(async () => {
         return;
       }
       const { action } = await import("~/routes/api/payments-webhook");
-      const request = new Request("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", headers: { "Content-Type": "application/json", "Stripe-Signature": String(req.headers["stripe-signature"]) }, body: raw });
+      const request = new Request("http://127.0.0.1:3000/api/payments/webhook", {
+        method: "POST",
+        headers: { "Content-Type": "application/json", "Stripe-Signature": String(req.headers["stripe-signature"]) },
+        body: raw,
+      });
       const response = await action({ request, params: {}, context: {} } as never);
       res.writeHead(response.status, { "Content-Type": "application/json" }).end(await response.text());
     });
@@ -64,7 +68,13 @@ beforeAll(async () => {
     STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
     STORAGE_DIR: mkdtempSync(join(process.env.TEST_SCRATCH_DIR ?? tmpdir(), "storage-")),
   });
-  sdk = new Stripe("sk_test_integration", { host: "127.0.0.1", port: standin.port, protocol: "http", maxNetworkRetries: 0, telemetry: false });
+  sdk = new Stripe("sk_test_integration", {
+    host: "127.0.0.1",
+    port: standin.port,
+    protocol: "http",
+    maxNetworkRetries: 0,
+    telemetry: false,
+  });
 });
 
 afterAll(async () => {
@@ -86,7 +96,9 @@ beforeAll(async () => {
   await importContent("content");
   const { Detail, DetailSet } = await import("~/models/index.server");
   const set = await DetailSet.findOne({ where: { slug: SET }, include: [{ model: Detail, as: "details" }] });
-  const inSet = ((set as unknown as { details: { slug: string; tier: string }[] }).details ?? []).filter((d) => d.tier === "premium").map((d) => d.slug);
+  const inSet = ((set as unknown as { details: { slug: string; tier: string }[] }).details ?? [])
+    .filter((d) => d.tier === "premium")
+    .map((d) => d.slug);
   premiumInSet = inSet[0];
   const outside = await Detail.findAll({ where: { tier: "premium" } });
   premiumOutsideSet = outside.map((d) => d.slug).find((slug) => !inSet.includes(slug))!;
@@ -98,7 +110,13 @@ async function member(name: string): Promise<{ browser: RouteClient; userId: num
   const { hashPassword } = await import("~/auth/password.server");
   const signIn = await import("~/routes/auth/sign-in");
   const email = `${name}@example.test`;
-  const user = await User.create({ email, displayName: name, passwordHash: await hashPassword(password), role: "member", emailVerifiedAt: new Date() });
+  const user = await User.create({
+    email,
+    displayName: name,
+    passwordHash: await hashPassword(password),
+    role: "member",
+    emailVerifiedAt: new Date(),
+  });
   const browser = new RouteClient();
   const result = await browser.submit(signIn.action, "/sign-in", { email, password });
   expect(result.status).toBe(302);
@@ -121,7 +139,13 @@ async function startCheckout(browser: RouteClient, form: Record<string, string>)
 
 /** Fills the hosted checkout page's form the way a browser posts it. */
 async function pay(checkoutUrl: string, card: string): Promise<Response> {
-  const body = new URLSearchParams({ email: "buyer@example.test", card_number: card, card_expiry: "12/40", card_cvc: "123", cardholder_name: "Test Buyer" });
+  const body = new URLSearchParams({
+    email: "buyer@example.test",
+    card_number: card,
+    card_expiry: "12/40",
+    card_cvc: "123",
+    cardholder_name: "Test Buyer",
+  });
   return fetch(`${checkoutUrl}/pay`, { method: "POST", body, redirect: "manual" });
 }
 
@@ -135,7 +159,9 @@ async function redeliver(eventId: string): Promise<number | null> {
   return ((await response.json()) as { delivery: { status: number | null } }).delivery.status;
 }
 
-test("buying a set: checkout → signed webhook → entitlement → the premium detail API answers 200", { timeout: 120_000 }, async () => {
+test("buying a set: checkout → signed webhook → entitlement → the premium detail API answers 200", {
+  timeout: 120_000,
+}, async () => {
   const { browser, userId } = await member("setbuyer");
   expect(await detailApi(browser, premiumInSet)).toBe(403);
 
@@ -147,7 +173,12 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   const sessionId = back.searchParams.get("session_id")!;
 
   const [entitlement] = await entitlementsOf(userId);
-  expect(entitlement).toMatchObject({ kind: "set", status: "active", currentPeriodEnd: null, stripeCheckoutSessionId: sessionId });
+  expect(entitlement).toMatchObject({
+    kind: "set",
+    status: "active",
+    currentPeriodEnd: null,
+    stripeCheckoutSessionId: sessionId,
+  });
 
   const ret = await import("~/routes/account/checkout-return");
   const state = await browser.call(ret.loader, `/account/checkout/return?session_id=${sessionId}`, {});
@@ -164,7 +195,10 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   const receipt = mail.outbox().find((m) => m.to.includes("setbuyer@example.test"));
   expect(receipt?.subject).toBe("Your Dryside receipt — Set: Below-grade essentials");
   expect(receipt?.text).toContain("$69.00");
-  const event = await PaymentEvent.findOne({ where: { type: "checkout.session.completed" }, order: [["receivedAt", "DESC"]] });
+  const event = await PaymentEvent.findOne({
+    where: { type: "checkout.session.completed" },
+    order: [["receivedAt", "DESC"]],
+  });
   expect(event?.result).toBe("applied");
 
   // The pack: access checked at download, built once, then served from storage.
@@ -199,7 +233,10 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   const other = await member("nosetyet");
   const refused = (await other.browser.respond(pack.loader, `/sets/${SET}/pack`, { slug: SET })) as Response;
   expect(refused.status).toBe(403);
-  expect(await refused.json()).toMatchObject({ error: "premium_required", offers: [{ href: "/pricing" }, { href: `/sets#${SET}` }] });
+  expect(await refused.json()).toMatchObject({
+    error: "premium_required",
+    offers: [{ href: "/pricing" }, { href: `/sets#${SET}` }],
+  });
   const visitor = await new RouteClient().call(pack.loader, `/sets/${SET}/pack`, { slug: SET });
   expect(visitor.status).toBe(302);
 });
@@ -213,7 +250,9 @@ test("a declined card grants nothing", async () => {
   expect(await detailApi(browser, premiumInSet)).toBe(403);
   const sessionId = new URL(checkoutUrl).pathname.split("/").at(-1)!;
   const ret = await import("~/routes/account/checkout-return");
-  expect((await browser.call(ret.loader, `/account/checkout/return?session_id=${sessionId}`, {})).body).toMatchObject({ state: "unpaid" });
+  expect((await browser.call(ret.loader, `/account/checkout/return?session_id=${sessionId}`, {})).body).toMatchObject({
+    state: "unpaid",
+  });
 });
 
 test("a plan opens every premium detail; stopping at period end keeps access until the period ends, then it ends", async () => {
@@ -235,7 +274,9 @@ test("a plan opens every premium detail; stopping at period end keeps access unt
   expect(overview.body).toMatchObject({ plan: { name: "Monthly plan", status: "active", cancelAtPeriodEnd: true } });
   expect(await detailApi(browser, premiumOutsideSet)).toBe(200);
 
-  const advanced = await fetch(`${standin.url}/_standin/subscriptions/${plan.stripeSubscriptionId}/advance`, { method: "POST" });
+  const advanced = await fetch(`${standin.url}/_standin/subscriptions/${plan.stripeSubscriptionId}/advance`, {
+    method: "POST",
+  });
   expect(advanced.status).toBe(200);
   const [ended] = await entitlementsOf(userId);
   expect(ended.status).toBe("canceled");
@@ -257,7 +298,10 @@ test("a renewal moves the period forward and a failed renewal marks the plan pas
   const { Payment } = await import("~/models/index.server");
   expect(await Payment.count({ where: { userId } })).toBe(2);
 
-  await fetch(`${standin.url}/_standin/subscriptions/${before.stripeSubscriptionId}/advance`, { method: "POST", body: new URLSearchParams({ fail_renewal: "true" }) });
+  await fetch(`${standin.url}/_standin/subscriptions/${before.stripeSubscriptionId}/advance`, {
+    method: "POST",
+    body: new URLSearchParams({ fail_renewal: "true" }),
+  });
   const [failed] = await entitlementsOf(userId);
   expect(failed.status).toBe("past_due");
 });
@@ -272,17 +316,42 @@ test("a forged signature is refused with 400 and changes nothing", async () => {
     object: "event",
     type: "checkout.session.completed",
     created: Math.floor(Date.now() / 1000),
-    data: { object: { id: "cs_test_forged", object: "checkout.session", mode: "payment", payment_status: "paid", client_reference_id: String(userId), metadata: { kind: "set", set_slug: SET }, amount_total: 0, currency: "usd" } },
+    data: {
+      object: {
+        id: "cs_test_forged",
+        object: "checkout.session",
+        mode: "payment",
+        payment_status: "paid",
+        client_reference_id: String(userId),
+        metadata: { kind: "set", set_slug: SET },
+        amount_total: 0,
+        currency: "usd",
+      },
+    },
   });
   const { action } = await import("~/routes/api/payments-webhook");
   const send = (signature: string | null) =>
-    action({ request: new Request("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", headers: signature ? { "Stripe-Signature": signature } : {}, body: forged }), params: {}, context: {} } as never);
+    action({
+      request: new Request("http://127.0.0.1:3000/api/payments/webhook", {
+        method: "POST",
+        headers: signature ? { "Stripe-Signature": signature } : {},
+        body: forged,
+      }),
+      params: {},
+      context: {},
+    } as never);
   // Signed correctly in form, but with a secret that is not ours.
-  const wrongSecret = sdk.webhooks.generateTestHeaderString({ payload: forged, secret: "whsec_not_the_endpoint_secret" });
+  const wrongSecret = sdk.webhooks.generateTestHeaderString({
+    payload: forged,
+    secret: "whsec_not_the_endpoint_secret",
+  });
   expect((await send(wrongSecret)).status).toBe(400);
   expect((await send(null)).status).toBe(400);
   // Our secret, but the body changed after signing.
-  const signedOther = sdk.webhooks.generateTestHeaderString({ payload: forged.replace("0,", "1,"), secret: WEBHOOK_SECRET });
+  const signedOther = sdk.webhooks.generateTestHeaderString({
+    payload: forged.replace("0,", "1,"),
+    secret: WEBHOOK_SECRET,
+  });
   expect((await send(signedOther)).status).toBe(400);
   expect(await PaymentEvent.count()).toBe(eventsBefore);
   expect(await Entitlement.count()).toBe(entitlementsBefore);
@@ -295,7 +364,9 @@ test("the same event delivered twice grants one entitlement and is logged once",
   const { PaymentEvent, Payment, User } = await import("~/models/index.server");
   const user = await User.findByPk(userId);
   const events = await sdk.events.list({ type: "checkout.session.completed", limit: 100 });
-  const completed = events.data.find((e) => (e.data.object as Stripe.Checkout.Session).customer === user?.stripeCustomerId)!;
+  const completed = events.data.find(
+    (e) => (e.data.object as Stripe.Checkout.Session).customer === user?.stripeCustomerId,
+  )!;
   expect(await redeliver(completed.id)).toBe(200);
   expect(await entitlementsOf(userId)).toHaveLength(1);
   expect(await PaymentEvent.count({ where: { id: completed.id } })).toBe(1);

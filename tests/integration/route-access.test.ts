@@ -17,7 +17,9 @@ useMigratedDatabase();
  * page with a members' form). entitlement: signed-in people may still be refused for lack of a plan or set,
  * which the payments tests check; here only the sign-in guard is checked.
  */
-type Access = "public" | { atLeast: StaffRole; params?: Record<string, string>; loaderPublic?: true; entitlement?: true };
+type Access =
+  | "public"
+  | { atLeast: StaffRole; params?: Record<string, string>; loaderPublic?: true; entitlement?: true };
 
 /** One decision per route path (as app/routes.ts spells it, "/" for the index). */
 const ACCESS: Record<string, Access> = {
@@ -100,7 +102,13 @@ beforeAll(async () => {
   const signIn = await import("~/routes/auth/sign-in");
   const passwordHash = await hashPassword(password);
   for (const role of STAFF_ROLES) {
-    await User.create({ email: `${role}@example.test`, displayName: `Table ${role}`, passwordHash, role, emailVerifiedAt: new Date() });
+    await User.create({
+      email: `${role}@example.test`,
+      displayName: `Table ${role}`,
+      passwordHash,
+      role,
+      emailVerifiedAt: new Date(),
+    });
     const browser = new RouteClient();
     const result = await browser.submit(signIn.action, "/sign-in", { email: `${role}@example.test`, password });
     if (result.status !== 302) throw new Error(`could not sign in as ${role}`);
@@ -133,30 +141,35 @@ function expectRefused(result: RouteResult, path: string, who: string) {
 
 const protectedRoutes = routes.filter((route) => ACCESS[route.path] && ACCESS[route.path] !== "public");
 
-test.each(protectedRoutes.map((route) => [route.path, route] as const))("%s: refused below its role, served at or above it", async (path, route) => {
-  const access = ACCESS[path] as Exclude<Access, "public">;
-  const module = (await import(/* @vite-ignore */ resolve("app", route.file))) as RouteModule;
-  expect(module.loader ?? module.action, `${path} has neither loader nor action`).toBeDefined();
-  const url = urlFor(path, access.params);
+test.each(protectedRoutes.map((route) => [route.path, route] as const))(
+  "%s: refused below its role, served at or above it",
+  async (path, route) => {
+    const access = ACCESS[path] as Exclude<Access, "public">;
+    const module = (await import(/* @vite-ignore */ resolve("app", route.file))) as RouteModule;
+    expect(module.loader ?? module.action, `${path} has neither loader nor action`).toBeDefined();
+    const url = urlFor(path, access.params);
 
-  const loader = access.loaderPublic ? undefined : module.loader;
-  const visitor = new RouteClient();
-  if (loader) expectRefused(await visitor.call(loader, url, access.params ?? {}), path, "visitor");
-  if (module.action) expectRefused(await visitor.submit(module.action, url, {}, access.params ?? {}), path, "visitor");
+    const loader = access.loaderPublic ? undefined : module.loader;
+    const visitor = new RouteClient();
+    if (loader) expectRefused(await visitor.call(loader, url, access.params ?? {}), path, "visitor");
+    if (module.action)
+      expectRefused(await visitor.submit(module.action, url, {}, access.params ?? {}), path, "visitor");
 
-  for (const role of STAFF_ROLES) {
-    const browser = browsers.get(role)!;
-    if (roleAtLeast(role, access.atLeast)) {
-      if (loader) {
-        // Past the guard: whatever the route answers next, it is not "sign in" or "not allowed".
-        const result = await browser.call(loader, url, access.params ?? {});
-        const refused = [401, 403].includes(result.status) || (result.headers.get("Location") ?? "").startsWith("/sign-in");
-        if (!access.entitlement) expect(refused, `${role} on ${path} (status ${result.status})`).toBe(false);
-        expect(result.status, `${role} on ${path}`).toBeLessThan(500);
+    for (const role of STAFF_ROLES) {
+      const browser = browsers.get(role)!;
+      if (roleAtLeast(role, access.atLeast)) {
+        if (loader) {
+          // Past the guard: whatever the route answers next, it is not "sign in" or "not allowed".
+          const result = await browser.call(loader, url, access.params ?? {});
+          const refused =
+            [401, 403].includes(result.status) || (result.headers.get("Location") ?? "").startsWith("/sign-in");
+          if (!access.entitlement) expect(refused, `${role} on ${path} (status ${result.status})`).toBe(false);
+          expect(result.status, `${role} on ${path}`).toBeLessThan(500);
+        }
+      } else {
+        if (loader) expectRefused(await browser.call(loader, url, access.params ?? {}), path, role);
+        if (module.action) expectRefused(await browser.submit(module.action, url, {}, access.params ?? {}), path, role);
       }
-    } else {
-      if (loader) expectRefused(await browser.call(loader, url, access.params ?? {}), path, role);
-      if (module.action) expectRefused(await browser.submit(module.action, url, {}, access.params ?? {}), path, role);
     }
-  }
-});
+  },
+);

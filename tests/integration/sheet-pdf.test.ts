@@ -7,7 +7,14 @@ import { join } from "node:path";
 import { expect, test } from "vitest";
 import { parse } from "yaml";
 import type { SectionLayer } from "~/drawing/section-geometry";
-import { buildMaterialLibrary, materialSchema, runSiteCheck, type AssemblyInput, type LayerInput, type SiteCheckResult } from "~/envelope";
+import {
+  buildMaterialLibrary,
+  materialSchema,
+  runSiteCheck,
+  type AssemblyInput,
+  type LayerInput,
+  type SiteCheckResult,
+} from "~/envelope";
 import { formatR, formatU } from "~/envelope/units";
 import { seasonalFigures, seasonalVerdictLabel } from "~/drawing/seasonal-geometry";
 import { pdfText, renderDetailSheet } from "~/packs/sheet-pdf.server";
@@ -49,18 +56,32 @@ function sectionLayers(layers: readonly LayerInput[]): SectionLayer[] {
       family: m.family,
       materialName: m.name,
       thickness_mm: l.thickness_mm,
-      framing: l.framing && framing ? { fraction: l.framing.fraction, family: framing.family, materialName: framing.name } : undefined,
+      framing:
+        l.framing && framing
+          ? { fraction: l.framing.fraction, family: framing.family, materialName: framing.name }
+          : undefined,
     };
   });
 }
 
-async function renderSample(slug: string, zone: string, units: "si" | "ip", file: string): Promise<{ text: string; pages: number; r: string; u: string; siteCheck: SiteCheckResult }> {
+async function renderSample(
+  slug: string,
+  zone: string,
+  units: "si" | "ip",
+  file: string,
+): Promise<{ text: string; pages: number; r: string; u: string; siteCheck: SiteCheckResult }> {
   const detail = loadDetail(slug);
   const siteCheck = runSiteCheck({ kind: detail.assembly, layers: detail.layers }, { zone }, materials);
   const pdf = await renderDetailSheet({
     title: detail.title,
     slug: detail.slug,
-    revision: { number: detail.revision, publishedAt: detail.revised, authorName: detail.author, reviewerName: detail.reviewer, changeNote: detail.change_note },
+    revision: {
+      number: detail.revision,
+      publishedAt: detail.revised,
+      authorName: detail.author,
+      reviewerName: detail.reviewer,
+      changeNote: detail.change_note,
+    },
     summary: detail.summary,
     kind: detail.assembly,
     layers: sectionLayers(detail.layers),
@@ -81,11 +102,22 @@ async function renderSample(slug: string, zone: string, units: "si" | "ip", file
   const pages = Number(/Pages:\s+(\d+)/.exec(info)?.[1]);
   const text = execFileSync("pdftotext", [path, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
   execFileSync("pdftoppm", ["-r", "60", "-png", path, path.replace(/\.pdf$/, "")]);
-  return { text, pages, r: formatR(siteCheck.thermal.rsi, units), u: formatU(siteCheck.thermal.u_si, units), siteCheck };
+  return {
+    text,
+    pages,
+    r: formatR(siteCheck.thermal.rsi, units),
+    u: formatU(siteCheck.thermal.u_si, units),
+    siteCheck,
+  };
 }
 
 test("a zone 6 wall sheet is the detail on one Letter page and the year on a second, with extractable text and the engine's figures", async () => {
-  const { text, pages, r, u, siteCheck } = await renderSample("wall-2x6-r21-plus-50mm-polyiso-zone-6", "6A", "ip", "sheet-sample.pdf");
+  const { text, pages, r, u, siteCheck } = await renderSample(
+    "wall-2x6-r21-plus-50mm-polyiso-zone-6",
+    "6A",
+    "ip",
+    "sheet-sample.pdf",
+  );
   expect(pages).toBe(2);
   expect(text).toContain("2x6 wall with 50 mm foil-faced polyiso, zone 6");
   const revision = loadDetail("wall-2x6-r21-plus-50mm-polyiso-zone-6").revision;
@@ -114,7 +146,12 @@ test("a zone 6 wall sheet is the detail on one Letter page and the year on a sec
 });
 
 test("a long roof stack in SI units still fits its first page", async () => {
-  const { text, pages, r } = await renderSample("roof-unvented-polyiso-above-deck-zones-5-6", "5A", "si", "sheet-sample-roof-si.pdf");
+  const { text, pages, r } = await renderSample(
+    "roof-unvented-polyiso-above-deck-zones-5-6",
+    "5A",
+    "si",
+    "sheet-sample-roof-si.pdf",
+  );
   expect(pages).toBe(2);
   expect(text).toContain(r);
   expect(text).toContain("ROOF TOP");

@@ -26,7 +26,21 @@ async function check(slug: string, body: unknown, type = "application/json"): Pr
   return (await new RouteClient().respond(action, request, { slug })) as Response;
 }
 
-const CSV_ROWS = ["month,temperature_c,rh_percent", "1,-18,78", "2,-15,76", "3,-7,74", "4,3,65", "5,11,60", "6,17,65", "7,20,68", "8,19,70", "9,13,72", "10,5,76", "11,-4,82", "12,-14,80"];
+const CSV_ROWS = [
+  "month,temperature_c,rh_percent",
+  "1,-18,78",
+  "2,-15,76",
+  "3,-7,74",
+  "4,3,65",
+  "5,11,60",
+  "6,17,65",
+  "7,20,68",
+  "8,19,70",
+  "9,13,72",
+  "10,5,76",
+  "11,-4,82",
+  "12,-14,80",
+];
 
 test("a Canadian site by province is compared with NBC 2020 rows and answered in SI first", async () => {
   const response = await check(WALL, { country: "CA", province: "MB", units: "ip" });
@@ -63,7 +77,9 @@ test("every result carries the seasonal balance, the indoor basis, the country, 
   expect(seasonal.climate.source).toBe("generated");
   expect(seasonal.climate.note).not.toBe("");
   // The default indoor method is named in the sentence the page prints.
-  expect(result.site.indoor.basis).toMatch(/^indoor 21 °C \/ [\d.]+ % RH, by the ASHRAE 160 simplified method at −?[\d.]+ °C outdoors$/);
+  expect(result.site.indoor.basis).toMatch(
+    /^indoor 21 °C \/ [\d.]+ % RH, by the ASHRAE 160 simplified method at −?[\d.]+ °C outdoors$/,
+  );
   expect(result.site.country).toBe("US");
   expect(result.code.edition).toMatch(/^IECC\/IRC/);
   expect(result.profiles.winter.path).toBe("clear-cavity");
@@ -81,7 +97,10 @@ test("another indoor method is used and said so; a typed year and a CSV year are
   expect(byClass.result.site.indoor.method).toBe("iso-13788-class-4");
   expect(byClass.result.site.indoor.basis).toMatch(/ISO 13788 humidity class 4/);
 
-  const months = CSV_ROWS.slice(1).map((row) => { const [, t, rh] = row.split(","); return { t: Number(t), rh: Number(rh) }; });
+  const months = CSV_ROWS.slice(1).map((row) => {
+    const [, t, rh] = row.split(",");
+    return { t: Number(t), rh: Number(rh) };
+  });
   const typed = await (await check(WALL, { zone: "6A", units: "si", yearSource: "typed", yearMonths: months })).json();
   expect(typed.result.seasonal.climate.source).toBe("typed");
   expect(typed.result.seasonal.months[0].outdoor.t_c).toBe(-18);

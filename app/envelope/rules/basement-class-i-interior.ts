@@ -8,7 +8,11 @@ export const basementClassIInterior: Rule = {
   applies: (ctx) => ctx.assembly.kind === "basement-wall",
   check(ctx) {
     if (ctx.vapour.interiorClass !== "I") return null;
-    return flagOf(this, "caution", "Class I vapour retarder on the inside of a basement wall",
-      "Basement walls are exempt from the interior vapour retarder rule because they take on moisture from the soil and must dry inward. A sheet on the inside traps it against the framing. Use foam against the concrete and leave the interior open.");
+    return flagOf(
+      this,
+      "caution",
+      "Class I vapour retarder on the inside of a basement wall",
+      "Basement walls are exempt from the interior vapour retarder rule because they take on moisture from the soil and must dry inward. A sheet on the inside traps it against the framing. Use foam against the concrete and leave the interior open.",
+    );
   },
 };

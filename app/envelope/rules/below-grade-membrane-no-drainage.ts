@@ -10,9 +10,21 @@ export const belowGradeMembraneNoDrainage: Rule = {
   check(ctx) {
     const layers = ctx.assembly.layers;
     const structure = structureIndex(ctx.assembly);
-    const membrane = layers.find((l) => l.index < structure && (l.material.family === "membrane" || l.material.family === "coating" || l.input.role === "soil-side-protection") && !isDrainageGap(l));
-    if (!membrane || layers.slice(0, membrane.index).some((l) => isDrainageGap(l) || l.material.family === "aggregate")) return null;
-    return flagOf(this, "caution", "Below-grade membrane without a drainage layer",
-      `Water held against the ${nameOf(membrane)} by the soil builds pressure at every flaw. Put a drainage mat, drainage board or free-draining backfill outboard of it, leading to a footing drain.`);
+    const membrane = layers.find(
+      (l) =>
+        l.index < structure &&
+        (l.material.family === "membrane" ||
+          l.material.family === "coating" ||
+          l.input.role === "soil-side-protection") &&
+        !isDrainageGap(l),
+    );
+    if (!membrane || layers.slice(0, membrane.index).some((l) => isDrainageGap(l) || l.material.family === "aggregate"))
+      return null;
+    return flagOf(
+      this,
+      "caution",
+      "Below-grade membrane without a drainage layer",
+      `Water held against the ${nameOf(membrane)} by the soil builds pressure at every flaw. Put a drainage mat, drainage board or free-draining backfill outboard of it, leading to a footing drain.`,
+    );
   },
 };

@@ -10,7 +10,11 @@ export const belowGradeSummerCondensation: Rule = {
   check(ctx) {
     const s = summerCondensation(ctx);
     if (s?.kind !== "below-grade-outward") return null;
-    return flagOf(this, "note", "Summer indoor humidity condenses toward the cool ground",
-      `${ctx.summer.description}: ${s.where}, below the dew point of the indoor air, so indoor vapour diffusing outward collects there (${s.rate} on the design basis). Keep the basement dehumidified in summer, or close the interior face of the insulation.`);
+    return flagOf(
+      this,
+      "note",
+      "Summer indoor humidity condenses toward the cool ground",
+      `${ctx.summer.description}: ${s.where}, below the dew point of the indoor air, so indoor vapour diffusing outward collects there (${s.rate} on the design basis). Keep the basement dehumidified in summer, or close the interior face of the insulation.`,
+    );
   },
 };

@@ -5,12 +5,14 @@ import { formatTemperature } from "../units";
 import { SCREENING_RATE_G_M2_DAY, structureIndex } from "./helpers";
 import { flagOf, type Rule } from "./types";
 
-const worst = (cases: readonly ProfileCase[]): ProfileCase => cases.reduce((w, c) => (c.rate_g_m2_day > w.rate_g_m2_day ? c : w));
+const worst = (cases: readonly ProfileCase[]): ProfileCase =>
+  cases.reduce((w, c) => (c.rate_g_m2_day > w.rate_g_m2_day ? c : w));
 
 export const belowGradeUpperWallCondensation: Rule = {
   id: "below-grade-upper-wall-condensation",
   severity: "caution",
-  source: "steady-state dew-point method (ASHRAE HoF ch.25/27), M; common practice (interior-insulated basements wet at the top of the wall)",
+  source:
+    "steady-state dew-point method (ASHRAE HoF ch.25/27), M; common practice (interior-insulated basements wet at the top of the wall)",
   applies: (ctx) => ctx.upperWall !== null,
   check(ctx) {
     const upper = ctx.upperWall;
@@ -26,8 +28,14 @@ export const belowGradeUpperWallCondensation: Rule = {
     // Wetting matters where it reaches wood or fibrous insulation; on the back of foam against
     // concrete, neither takes harm from a little water and it dries in spring (common practice).
     const layers = ctx.assembly.layers;
-    const sensitive = [layers[plane.interfaceIndex - 1], layers[plane.interfaceIndex]].some((l) => l !== undefined && (l.material.water_sensitive || (l.framing?.material.water_sensitive ?? false)));
-    return flagOf(this, sensitive && c.rate_g_m2_day >= SCREENING_RATE_G_M2_DAY ? "caution" : "note", "Indoor vapour condenses at the top of the foundation wall",
-      `${c.description}: the ${plane?.label} reaches ${formatTemperature(plane?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(c.sourceDewPoint_c, "si")}), collecting ${c.rate_g_m2_day.toFixed(1)} g/(m²·day) on the design day. The deep-ground case does not show this. ${sensitive ? "Put the insulation's vapour-resistant face (taped foam) against the concrete, or keep it warm with exterior insulation, and keep indoor winter humidity down." : "Neither face there is water-sensitive and the wetting dries in spring; keep the foam joints taped and indoor winter humidity moderate."}`);
+    const sensitive = [layers[plane.interfaceIndex - 1], layers[plane.interfaceIndex]].some(
+      (l) => l !== undefined && (l.material.water_sensitive || (l.framing?.material.water_sensitive ?? false)),
+    );
+    return flagOf(
+      this,
+      sensitive && c.rate_g_m2_day >= SCREENING_RATE_G_M2_DAY ? "caution" : "note",
+      "Indoor vapour condenses at the top of the foundation wall",
+      `${c.description}: the ${plane?.label} reaches ${formatTemperature(plane?.t_c ?? 0, "si")}, below the indoor dew point (${formatTemperature(c.sourceDewPoint_c, "si")}), collecting ${c.rate_g_m2_day.toFixed(1)} g/(m²·day) on the design day. The deep-ground case does not show this. ${sensitive ? "Put the insulation's vapour-resistant face (taped foam) against the concrete, or keep it warm with exterior insulation, and keep indoor winter humidity down." : "Neither face there is water-sensitive and the wetting dries in spring; keep the foam joints taped and indoor winter humidity moderate."}`,
+    );
   },
 };

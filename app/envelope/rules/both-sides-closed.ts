@@ -10,7 +10,11 @@ export const bothSidesClosed: Rule = {
   applies: (ctx) => ctx.vapour.bothSidesClosed && !isBelowGrade(ctx.assembly.kind),
   check(ctx) {
     if (doubleBarrierReported(ctx)) return null;
-    return flagOf(this, "caution", "Closed to drying on both sides",
-      `${ctx.vapour.explanation} Wood and fibrous layers caught between two closed sides cannot dry if they get wet during construction or from a leak. Open one side, or make sure nothing between them is moisture-sensitive.`);
+    return flagOf(
+      this,
+      "caution",
+      "Closed to drying on both sides",
+      `${ctx.vapour.explanation} Wood and fibrous layers caught between two closed sides cannot dry if they get wet during construction or from a leak. Open one side, or make sure nothing between them is moisture-sensitive.`,
+    );
   },
 };

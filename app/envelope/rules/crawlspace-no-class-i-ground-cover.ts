@@ -10,7 +10,11 @@ export const crawlspaceNoClassIGroundCover: Rule = {
   check(ctx) {
     const a = ctx.assembly;
     if (a.layers.some((l) => classOf(a, l) === "I")) return null;
-    return flagOf(this, "stop", "No Class I ground cover in the crawl space",
-      "A sealed (unvented) crawl space needs a continuous Class I vapour retarder over the earth, joints lapped 6 in and sealed, run 6 in up the stem walls and attached.");
+    return flagOf(
+      this,
+      "stop",
+      "No Class I ground cover in the crawl space",
+      "A sealed (unvented) crawl space needs a continuous Class I vapour retarder over the earth, joints lapped 6 in and sealed, run 6 in up the stem walls and attached.",
+    );
   },
 };

@@ -9,6 +9,12 @@ export const exteriorFoamTooThinForClassIII: Rule = {
   check(ctx) {
     const row = ctx.codeRows.find((r) => r.id === "irc-r702-7-3" && !r.pass);
     if (!row) return null;
-    return flagOf(this, "stop", "Exterior insulation too thin for a Class III interior", `${row.label}: requires ${row.required}; provided ${row.provided}. ${row.note}`, `${row.label}, C2/M`);
+    return flagOf(
+      this,
+      "stop",
+      "Exterior insulation too thin for a Class III interior",
+      `${row.label}: requires ${row.required}; provided ${row.provided}. ${row.note}`,
+      `${row.label}, C2/M`,
+    );
   },
 };

@@ -4,9 +4,13 @@ import { isFoam } from "./helpers";
 
 /** IRC R316.4: 1/2 in gypsum board, or masonry/concrete 1 in or more (C2). */
 export function thermalBarrierInboard(a: ResolvedAssembly, from: number): boolean {
-  return a.layers.slice(from + 1).some((l) =>
-    (l.material.family === "gypsum" && l.thickness_mm >= 12.7 - 0.3) ||
-    ((l.material.family === "concrete" || l.material.family === "masonry") && l.thickness_mm >= 25.4));
+  return a.layers
+    .slice(from + 1)
+    .some(
+      (l) =>
+        (l.material.family === "gypsum" && l.thickness_mm >= 12.7 - 0.3) ||
+        ((l.material.family === "concrete" || l.material.family === "masonry") && l.thickness_mm >= 25.4),
+    );
 }
 
 /** IRC R316.5.3/R316.5.4 ignition-barrier alternatives (docs/references.md §8): 3/8 in gypsum, 1/4 in wood
@@ -32,4 +36,7 @@ export function innermostFoam(a: ResolvedAssembly): ResolvedLayer | undefined {
 
 /** Exposed: the layer says so, or nothing lies inboard of it. */
 export const isExposed = (a: ResolvedAssembly, l: ResolvedLayer): boolean =>
-  l.input.exposed === true || l.input.exposure === "interior" || l.input.exposure === "service-space" || l.index === a.layers.length - 1;
+  l.input.exposed === true ||
+  l.input.exposure === "interior" ||
+  l.input.exposure === "service-space" ||
+  l.index === a.layers.length - 1;

@@ -19,14 +19,19 @@ export const foamAgainstWrbNoGap: Rule = {
   id: "foam-against-wrb-no-gap",
   severity: "caution",
   source: "common practice",
-  applies: (ctx) => ctx.assembly.layers.some((l) => l.input.role === "water-resistive-barrier") && ctx.assembly.layers.some(isFoam),
+  applies: (ctx) =>
+    ctx.assembly.layers.some((l) => l.input.role === "water-resistive-barrier") && ctx.assembly.layers.some(isFoam),
   check(ctx) {
     const a = ctx.assembly;
     if (stuccoOnFoamUndrained(a)) return null; // reported, by its name, by the stucco rule
     const hit = foamOnWrb(a.layers);
     if (!hit) return null;
     const reservoir = a.layers.find(isReservoirCladding);
-    return flagOf(this, reservoir ? "caution" : "note", "Rigid foam tight to the water-resistive barrier with no drainage gap",
-      `Water that gets past the cladding is held between the ${nameOf(hit.foam)} and the ${nameOf(hit.wrb)} with nowhere to drain${reservoir ? `, and the ${nameOf(reservoir)} stores rain that sun drives inward` : ""}. Add a drainage gap (furring, a drainage mat or a textured wrap) outboard of the foam.`);
+    return flagOf(
+      this,
+      reservoir ? "caution" : "note",
+      "Rigid foam tight to the water-resistive barrier with no drainage gap",
+      `Water that gets past the cladding is held between the ${nameOf(hit.foam)} and the ${nameOf(hit.wrb)} with nowhere to drain${reservoir ? `, and the ${nameOf(reservoir)} stores rain that sun drives inward` : ""}. Add a drainage gap (furring, a drainage mat or a textured wrap) outboard of the foam.`,
+    );
   },
 };

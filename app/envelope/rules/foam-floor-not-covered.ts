@@ -13,9 +13,15 @@ export const foamFloorNotCovered: Rule = {
     const foam = innermostFoam(a);
     if (!foam) return null;
     // A 1/2 in wood structural panel (the subfloor) stands in for the thermal barrier.
-    const covered = a.layers.slice(foam.index + 1).some((l) => (l.material.family === "wood-panel" && l.thickness_mm >= 11.9) || l.material.family === "gypsum");
+    const covered = a.layers
+      .slice(foam.index + 1)
+      .some((l) => (l.material.family === "wood-panel" && l.thickness_mm >= 11.9) || l.material.family === "gypsum");
     if (covered) return null;
-    return flagOf(this, "stop", "Foam in a floor without a covering panel",
-      `The ${nameOf(foam)} needs at least a 1/2 in wood structural panel (or a thermal barrier) between it and the room above.`);
+    return flagOf(
+      this,
+      "stop",
+      "Foam in a floor without a covering panel",
+      `The ${nameOf(foam)} needs at least a 1/2 in wood structural panel (or a thermal barrier) between it and the room above.`,
+    );
   },
 };

@@ -20,7 +20,11 @@ export const foamNoThermalBarrier: Rule = {
     const exposed = isExposed(a, foam);
     if (!exposed && thermalBarrierInboard(a, foam.index)) return null;
     if (a.kind === "rim-joist" && exposed && foam.thickness_mm <= RIM_EXPOSED_MAX_MM) return null;
-    return flagOf(this, "stop", "Foam plastic exposed to the interior",
-      `The ${nameOf(foam)} needs a thermal barrier between it and the living space: 1/2 in gypsum board or an approved equivalent.`);
+    return flagOf(
+      this,
+      "stop",
+      "Foam plastic exposed to the interior",
+      `The ${nameOf(foam)} needs a thermal barrier between it and the living space: 1/2 in gypsum board or an approved equivalent.`,
+    );
   },
 };

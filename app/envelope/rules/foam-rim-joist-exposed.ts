@@ -12,7 +12,11 @@ export const foamRimJoistExposed: Rule = {
   check(ctx) {
     const foam = innermostFoam(ctx.assembly);
     if (!foam || !isExposed(ctx.assembly, foam) || foam.thickness_mm > MAX_EXPOSED_MM) return null;
-    return flagOf(this, "note", "Exposed foam at the rim joist",
-      "Foam up to 3¼ in thick may stay exposed at rim joists when its density is 0.5–2.0 lb/ft³ and its flame spread is 25 or less; check the product's listing.");
+    return flagOf(
+      this,
+      "note",
+      "Exposed foam at the rim joist",
+      "Foam up to 3¼ in thick may stay exposed at rim joists when its density is 0.5–2.0 lb/ft³ and its flame spread is 25 or less; check the product's listing.",
+    );
   },
 };

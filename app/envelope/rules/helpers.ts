@@ -35,8 +35,10 @@ export const structureIndex = (a: ResolvedAssembly): number => a.layers.findInde
 
 /** Absorptive ("reservoir") cladding: stores rain and drives vapour inward in sun. */
 export function isReservoirCladding(l: ResolvedLayer): boolean {
-  return (l.input.role === "cladding" || l.input.role === "roofing") &&
-    (l.material.family === "masonry" || l.material.family === "concrete" || l.material.water_sensitive);
+  return (
+    (l.input.role === "cladding" || l.input.role === "roofing") &&
+    (l.material.family === "masonry" || l.material.family === "concrete" || l.material.water_sensitive)
+  );
 }
 
 export const isDrainageGap = (l: ResolvedLayer): boolean =>
@@ -44,11 +46,13 @@ export const isDrainageGap = (l: ResolvedLayer): boolean =>
 
 /** Humid (A) or marine (C) moisture regime, or a hot zone (1–3): summers where outdoor air carries
  * more vapour than air-conditioned indoor air, so vapour drives inward (common practice). */
-export const humidOrMarine = (s: ResolvedSite): boolean => s.zoneNumber <= 3 || s.moisture === "A" || s.moisture === "C";
+export const humidOrMarine = (s: ResolvedSite): boolean =>
+  s.zoneNumber <= 3 || s.moisture === "A" || s.moisture === "C";
 
 /** IRC 2021 Table R702.7(2) does not permit a Class I interior retarder in zones 1–3 and 4 except
  * marine 4 (C2); elsewhere the double barrier is a trade caution, not a code violation. */
-export const classIInteriorBarred = (s: ResolvedSite): boolean => s.zoneNumber <= 3 || (s.zoneNumber === 4 && s.moisture !== "C");
+export const classIInteriorBarred = (s: ResolvedSite): boolean =>
+  s.zoneNumber <= 3 || (s.zoneNumber === 4 && s.moisture !== "C");
 
 /** Summer inward drive: the outdoor (or wet-cladding) vapour pressure exceeds the indoor one. */
 export const inwardDrive = (ctx: RuleContext): boolean => ctx.summer.exterior.p_v_pa > ctx.summer.interior.p_v_pa;
@@ -61,9 +65,12 @@ export function doubleBarrier(a: ResolvedAssembly): { interior: ResolvedLayer; e
   const interior = a.layers.find((l) => l.index > inner && isSheetRetarder(a, l) && classOf(a, l) === "I");
   if (!interior) return null;
   const coreFirst = coreRange(a)?.first ?? outermostInsulation(a);
-  const exterior = a.layers.find((l) => l.index < coreFirst &&
-    (isFoam(l) || l.material.family === "membrane" || l.material.family === "sheet-retarder") &&
-    (classOf(a, l) === "I" || classOf(a, l) === "II"));
+  const exterior = a.layers.find(
+    (l) =>
+      l.index < coreFirst &&
+      (isFoam(l) || l.material.family === "membrane" || l.material.family === "sheet-retarder") &&
+      (classOf(a, l) === "I" || classOf(a, l) === "II"),
+  );
   return exterior ? { interior, exterior } : null;
 }
 
@@ -72,7 +79,8 @@ export const doubleBarrierReported = (ctx: RuleContext): boolean =>
   doubleBarrier(ctx.assembly) !== null && humidOrMarine(ctx.site) && inwardDrive(ctx);
 
 /** Exterior foam that is a vapour-closed, continuous skin (taped or sealed joints). */
-export const isTapedFoam = (l: ResolvedLayer): boolean => isFoam(l) && (l.input.joints === "taped" || l.input.joints === "sealed");
+export const isTapedFoam = (l: ResolvedLayer): boolean =>
+  isFoam(l) && (l.input.joints === "taped" || l.input.joints === "sealed");
 
 /** Stucco over foam on one WRB and no drainage space (the stucco rule owns that case). */
 export function stuccoOnFoamUndrained(a: ResolvedAssembly): { stucco: ResolvedLayer; foam: ResolvedLayer } | null {
@@ -81,7 +89,10 @@ export function stuccoOnFoamUndrained(a: ResolvedAssembly): { stucco: ResolvedLa
   // Foam directly behind the stucco: only barriers and gaps between them, no wall.
   let foam: ResolvedLayer | undefined;
   for (const l of a.layers.slice(stucco.index + 1)) {
-    if (isFoam(l) && l.material.family === "foam-board") { foam = l; break; }
+    if (isFoam(l) && l.material.family === "foam-board") {
+      foam = l;
+      break;
+    }
     if (isDrainageGap(l)) return null;
     if (l.input.role !== "water-resistive-barrier" && l.input.role !== "air-barrier") return null;
   }

@@ -7,7 +7,16 @@ const VAPOUR_ROWS = new Set(["irc-r702-7-3", "irc-r702-7-class"]);
 const isInsulationRow = (r: CodeRow): boolean => !VAPOUR_ROWS.has(r.id);
 
 function insufficientRFlag(rule: Pick<Rule, "id" | "source">, row: CodeRow): Flag {
-  return { ...flagOf(rule, "caution", "Less insulation than the code row", `${row.label}: requires ${row.required}; provided ${row.provided}. Use the performance path or add insulation.`, `${row.label}, C`), id: `${rule.id}-${row.id}` };
+  return {
+    ...flagOf(
+      rule,
+      "caution",
+      "Less insulation than the code row",
+      `${row.label}: requires ${row.required}; provided ${row.provided}. Use the performance path or add insulation.`,
+      `${row.label}, C`,
+    ),
+    id: `${rule.id}-${row.id}`,
+  };
 }
 
 export const insufficientR: Rule = {

@@ -9,6 +9,12 @@ export const interiorRetarderNotPermitted: Rule = {
   check(ctx) {
     const row = ctx.codeRows.find((r) => r.id === "irc-r702-7-class" && !r.pass);
     if (!row) return null;
-    return flagOf(this, "stop", "Interior vapour retarder class not permitted here", `${row.label}: ${row.required}; provided ${row.provided}. ${row.note}`, `${row.label}, C/M`);
+    return flagOf(
+      this,
+      "stop",
+      "Interior vapour retarder class not permitted here",
+      `${row.label}: ${row.required}; provided ${row.provided}. ${row.note}`,
+      `${row.label}, C/M`,
+    );
   },
 };

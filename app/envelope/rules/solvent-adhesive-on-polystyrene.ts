@@ -12,10 +12,16 @@ export const solventAdhesiveOnPolystyrene: Rule = {
     const layers = ctx.assembly.layers;
     for (const l of layers) {
       if (l.input.adhesive !== "solvent-based") continue;
-      const touched = [layers[l.index - 1], l, layers[l.index + 1]].find((x): x is ResolvedLayer => x?.material.solvent_sensitive);
+      const touched = [layers[l.index - 1], l, layers[l.index + 1]].find(
+        (x): x is ResolvedLayer => x?.material.solvent_sensitive,
+      );
       if (!touched) continue;
-      return flagOf(this, "stop", "Solvent-based adhesive on polystyrene foam",
-        `Solvents dissolve ${nameOf(touched)}. Use an adhesive the foam maker lists as compatible (usually water-based) or fasten mechanically.`);
+      return flagOf(
+        this,
+        "stop",
+        "Solvent-based adhesive on polystyrene foam",
+        `Solvents dissolve ${nameOf(touched)}. Use an adhesive the foam maker lists as compatible (usually water-based) or fasten mechanically.`,
+      );
     }
     return null;
   },

@@ -10,7 +10,11 @@ export const summerCondensationInteriorSheet: Rule = {
   check(ctx) {
     const s = summerCondensation(ctx);
     if (s?.kind !== "interior-sheet") return null;
-    return flagOf(this, "stop", "Summer condensation on the interior vapour barrier",
-      `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Remove the interior sheet or replace it with a variable-permeance retarder.`);
+    return flagOf(
+      this,
+      "stop",
+      "Summer condensation on the interior vapour barrier",
+      `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Remove the interior sheet or replace it with a variable-permeance retarder.`,
+    );
   },
 };

@@ -10,7 +10,11 @@ export const summerInwardCondensation: Rule = {
   check(ctx) {
     const s = summerCondensation(ctx);
     if (s?.kind !== "inward") return null;
-    return flagOf(this, "caution", "Summer inward vapour drive condenses inside",
-      `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Add a drainage/ventilation gap behind absorptive cladding or a vapour-resistant layer outboard.`);
+    return flagOf(
+      this,
+      "caution",
+      "Summer inward vapour drive condenses inside",
+      `${ctx.summer.description}: ${s.where}, below the dew point of the incoming vapour, collecting ${s.rate}. Add a drainage/ventilation gap behind absorptive cladding or a vapour-resistant layer outboard.`,
+    );
   },
 };

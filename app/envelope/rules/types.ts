@@ -1,6 +1,15 @@
 // The shape of a trade rule: a small named object, one per file, listed in ./index.ts.
 import type { ResolvedAssembly } from "../layers";
-import type { CodeRow, Flag, ProfileCase, ResolvedSite, SeasonalResult, Severity, UpperWallProfiles, VapourResult } from "../types";
+import type {
+  CodeRow,
+  Flag,
+  ProfileCase,
+  ResolvedSite,
+  SeasonalResult,
+  Severity,
+  UpperWallProfiles,
+  VapourResult,
+} from "../types";
 
 export interface RuleContext {
   assembly: ResolvedAssembly;
@@ -30,6 +39,12 @@ export interface Rule {
 }
 
 /** A flag carrying the rule's id and source unless it says otherwise. */
-export function flagOf(rule: Pick<Rule, "id" | "source">, severity: Severity, title: string, explanation: string, source = rule.source): Flag {
+export function flagOf(
+  rule: Pick<Rule, "id" | "source">,
+  severity: Severity,
+  title: string,
+  explanation: string,
+  source = rule.source,
+): Flag {
   return { id: rule.id, severity, title, explanation, source };
 }

@@ -23,10 +23,16 @@ export default function CheckoutReturn({ loaderData }: Route.ComponentProps) {
         <>
           <h1 className="text-3xl">Thank you — it is yours</h1>
           <p className="mt-4" data-testid="checkout-granted">
-            {state.kind === "plan" ? `Your ${state.label.toLowerCase()} is active: every premium detail and pack is open to you.` : `“${state.label}” is yours to keep.`}
+            {state.kind === "plan"
+              ? `Your ${state.label.toLowerCase()} is active: every premium detail and pack is open to you.`
+              : `“${state.label}” is yours to keep.`}
           </p>
           <p className="mt-4 flex gap-6">
-            {state.setSlug ? <Link to={`/sets#${state.setSlug}`}>Download the pack</Link> : <Link to="/sets">Browse the sets</Link>}
+            {state.setSlug ? (
+              <Link to={`/sets#${state.setSlug}`}>Download the pack</Link>
+            ) : (
+              <Link to="/sets">Browse the sets</Link>
+            )}
             <Link to="/account/billing">Billing and receipts</Link>
           </p>
           <p className="mt-6 text-sm text-graphite-soft">A receipt is on its way to your e-mail.</p>
@@ -35,19 +41,25 @@ export default function CheckoutReturn({ loaderData }: Route.ComponentProps) {
       {state.state === "pending" && (
         <>
           <h1 className="text-3xl">Payment received, opening your access…</h1>
-          <p className="mt-4 text-graphite-soft">The payments service is confirming it with us. This page checks again every two seconds.</p>
+          <p className="mt-4 text-graphite-soft">
+            The payments service is confirming it with us. This page checks again every two seconds.
+          </p>
         </>
       )}
       {state.state === "unpaid" && (
         <>
           <h1 className="text-3xl">The payment was not completed</h1>
-          <p className="mt-4 text-graphite-soft">Nothing was charged. <Link to="/pricing">Back to pricing</Link>.</p>
+          <p className="mt-4 text-graphite-soft">
+            Nothing was charged. <Link to="/pricing">Back to pricing</Link>.
+          </p>
         </>
       )}
       {state.state === "unknown" && (
         <>
           <h1 className="text-3xl">We could not find that checkout</h1>
-          <p className="mt-4 text-graphite-soft">Your plan and sets are listed on <Link to="/account/billing">the billing page</Link>.</p>
+          <p className="mt-4 text-graphite-soft">
+            Your plan and sets are listed on <Link to="/account/billing">the billing page</Link>.
+          </p>
         </>
       )}
     </section>

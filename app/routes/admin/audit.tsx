@@ -14,7 +14,13 @@ export default function AdminAudit({ loaderData }: Route.ComponentProps) {
       <p className="mt-2 text-sm text-graphite-soft">The latest 200 events, newest first.</p>
       <table className="mt-6 w-full text-left text-sm">
         <thead>
-          <tr className="border-b border-rule"><th className="py-2">When (UTC)</th><th>Who</th><th>What</th><th>Subject</th><th>Details</th></tr>
+          <tr className="border-b border-rule">
+            <th className="py-2">When (UTC)</th>
+            <th>Who</th>
+            <th>What</th>
+            <th>Subject</th>
+            <th>Details</th>
+          </tr>
         </thead>
         <tbody>
           {loaderData.events.map((event) => (

@@ -13,7 +13,15 @@ export default function AdminIndex({ loaderData }: Route.ComponentProps) {
     { to: "/admin/users", label: "Users and roles", text: "Find people, change roles, sign them out everywhere." },
     { to: "/admin/payments", label: "Payments", text: "Checkout sessions, entitlements and the webhook event log." },
     { to: "/admin/audit", label: "Audit log", text: "Role changes, sign-ins, publications: who did what and when." },
-    ...(loaderData.outbox ? [{ to: "/admin/outbox", label: "Mail outbox", text: "Mail caught by the local mail catcher (development only)." }] : []),
+    ...(loaderData.outbox
+      ? [
+          {
+            to: "/admin/outbox",
+            label: "Mail outbox",
+            text: "Mail caught by the local mail catcher (development only).",
+          },
+        ]
+      : []),
   ];
   return (
     <section>
@@ -21,7 +29,9 @@ export default function AdminIndex({ loaderData }: Route.ComponentProps) {
       <ul className="mt-6 grid gap-4 sm:grid-cols-2">
         {links.map((link) => (
           <li key={link.to} className="rounded border border-rule bg-sheet p-4">
-            <Link to={link.to} className="font-semibold">{link.label}</Link>
+            <Link to={link.to} className="font-semibold">
+              {link.label}
+            </Link>
             <p className="mt-1 text-sm text-graphite-soft">{link.text}</p>
           </li>
         ))}

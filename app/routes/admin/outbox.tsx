@@ -13,14 +13,19 @@ export default function AdminOutbox({ loaderData }: Route.ComponentProps) {
   return (
     <section>
       <h1 className="text-3xl">Mail outbox</h1>
-      <p className="mt-2 text-sm text-graphite-soft">Mail caught by the local mail catcher, newest first. Nothing here left this machine.</p>
+      <p className="mt-2 text-sm text-graphite-soft">
+        Mail caught by the local mail catcher, newest first. Nothing here left this machine.
+      </p>
       {loaderData.messages.length === 0 && <p className="mt-6">No mail yet.</p>}
       <ul className="mt-6 flex flex-col gap-3">
         {loaderData.messages.map((message) => (
           <li key={message.id} className="rounded border border-rule bg-sheet p-4">
             <details>
               <summary className="cursor-pointer">
-                <strong>{message.subject}</strong> <span className="text-sm text-graphite-soft">to {message.to.join(", ")} · {message.date.replace("T", " ").slice(0, 19)}</span>
+                <strong>{message.subject}</strong>{" "}
+                <span className="text-sm text-graphite-soft">
+                  to {message.to.join(", ")} · {message.date.replace("T", " ").slice(0, 19)}
+                </span>
               </summary>
               <pre className="mt-3 whitespace-pre-wrap text-sm">{message.text}</pre>
             </details>

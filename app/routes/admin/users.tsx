@@ -54,15 +54,36 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
     <section>
       <h1 className="text-3xl">Users and roles</h1>
       <Form method="get" role="search" className="mt-4 flex max-w-md gap-2">
-        <label htmlFor="user-q" className="sr-only">Search by name or e-mail</label>
-        <input id="user-q" name="q" defaultValue={searchParams.get("q") ?? ""} placeholder="Name or e-mail" className="flex-1 rounded border border-rule bg-sheet px-3 py-2" />
-        <button type="submit" className="rounded border border-rule px-3 py-2">Search</button>
+        <label htmlFor="user-q" className="sr-only">
+          Search by name or e-mail
+        </label>
+        <input
+          id="user-q"
+          name="q"
+          defaultValue={searchParams.get("q") ?? ""}
+          placeholder="Name or e-mail"
+          className="flex-1 rounded border border-rule bg-sheet px-3 py-2"
+        />
+        <button type="submit" className="rounded border border-rule px-3 py-2">
+          Search
+        </button>
       </Form>
-      {actionData?.message && <p role="status" className="mt-4 text-sm">{actionData.message}</p>}
+      {actionData?.message && (
+        <p role="status" className="mt-4 text-sm">
+          {actionData.message}
+        </p>
+      )}
       <table className="mt-6 w-full text-left text-sm">
         <thead>
           <tr className="border-b border-rule">
-            <th className="py-2">Name</th><th>E-mail</th><th>Confirmed</th><th>Browsers</th><th>Role</th><th><span className="sr-only">Sessions</span></th>
+            <th className="py-2">Name</th>
+            <th>E-mail</th>
+            <th>Confirmed</th>
+            <th>Browsers</th>
+            <th>Role</th>
+            <th>
+              <span className="sr-only">Sessions</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -79,11 +100,24 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                   <UserAdminForm className="flex gap-2">
                     <input type="hidden" name="intent" value="change-role" />
                     <input type="hidden" name="userId" value={user.id} />
-                    <label className="sr-only" htmlFor={`role-${user.id}`}>Role of {user.displayName}</label>
-                    <select id={`role-${user.id}`} name="role" defaultValue={user.role} className="rounded border border-rule bg-sheet px-2 py-1">
-                      {STAFF_ROLES.map((role) => <option key={role} value={role}>{STAFF_ROLE_LABELS[role]}</option>)}
+                    <label className="sr-only" htmlFor={`role-${user.id}`}>
+                      Role of {user.displayName}
+                    </label>
+                    <select
+                      id={`role-${user.id}`}
+                      name="role"
+                      defaultValue={user.role}
+                      className="rounded border border-rule bg-sheet px-2 py-1"
+                    >
+                      {STAFF_ROLES.map((role) => (
+                        <option key={role} value={role}>
+                          {STAFF_ROLE_LABELS[role]}
+                        </option>
+                      ))}
                     </select>
-                    <button type="submit" className="rounded border border-rule px-2 py-1">Change</button>
+                    <button type="submit" className="rounded border border-rule px-2 py-1">
+                      Change
+                    </button>
                   </UserAdminForm>
                 )}
               </td>
@@ -91,7 +125,13 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                 <UserAdminForm>
                   <input type="hidden" name="intent" value="revoke-sessions" />
                   <input type="hidden" name="userId" value={user.id} />
-                  <button type="submit" className="text-stop underline-offset-2 hover:underline" disabled={user.liveSessions === 0}>Sign out everywhere</button>
+                  <button
+                    type="submit"
+                    className="text-stop underline-offset-2 hover:underline"
+                    disabled={user.liveSessions === 0}
+                  >
+                    Sign out everywhere
+                  </button>
                 </UserAdminForm>
               </td>
             </tr>

@@ -13,7 +13,15 @@ export async function loader({ params, context }: Route.LoaderArgs) {
     const { error, message, offers } = detail.refusal;
     return jsonError(403, error, message, {
       offers,
-      preview: { slug: detail.slug, title: detail.title, summary: detail.summary, tier: detail.tier, zones: detail.zones, excerpt: detail.preview?.excerpt, sets: detail.sets },
+      preview: {
+        slug: detail.slug,
+        title: detail.title,
+        summary: detail.summary,
+        tier: detail.tier,
+        zones: detail.zones,
+        excerpt: detail.preview?.excerpt,
+        sets: detail.sets,
+      },
     });
   }
   return Response.json({ detail, caution: STANDING_CAUTION });

@@ -30,7 +30,9 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
       <h1 className="text-3xl">Choose a new password</h1>
       {actionData?.sent ? (
         // The same words whether or not the address has an account.
-        <p role="status" className="mt-4" data-testid="reset-sent">If an account uses that address, a link to choose a new password is on its way. It works for one hour.</p>
+        <p role="status" className="mt-4" data-testid="reset-sent">
+          If an account uses that address, a link to choose a new password is on its way. It works for one hour.
+        </p>
       ) : (
         <Form method="post" {...getFormProps(form)} className="mt-6 flex flex-col gap-4">
           <CsrfField />

@@ -20,10 +20,16 @@ export async function action({ request, params }: Route.ActionArgs) {
   const formData = await requireCsrf(request);
   const submission = parseWithZod(formData, { schema: resetPasswordSchema });
   if (submission.status !== "success") {
-    return data({ result: submission.reply({ hideFields: ["password", "confirmPassword"] }), expired: false }, { status: 400 });
+    return data(
+      { result: submission.reply({ hideFields: ["password", "confirmPassword"] }), expired: false },
+      { status: 400 },
+    );
   }
   if (await resetPassword(params.token, submission.value.password)) return redirect("/sign-in?notice=reset");
-  return data({ result: submission.reply({ hideFields: ["password", "confirmPassword"] }), expired: true }, { status: 410 });
+  return data(
+    { result: submission.reply({ hideFields: ["password", "confirmPassword"] }), expired: true },
+    { status: 410 },
+  );
 }
 
 export default function ResetPassword({ loaderData, actionData }: Route.ComponentProps) {
@@ -37,7 +43,9 @@ export default function ResetPassword({ loaderData, actionData }: Route.Componen
     return (
       <section className="mx-auto max-w-md">
         <h1 className="text-3xl">This link no longer works</h1>
-        <p className="mt-4">Password links work once and expire after one hour. <Link to="/forgot-password">Ask for a new one</Link>.</p>
+        <p className="mt-4">
+          Password links work once and expire after one hour. <Link to="/forgot-password">Ask for a new one</Link>.
+        </p>
       </section>
     );
   }
@@ -47,8 +55,19 @@ export default function ResetPassword({ loaderData, actionData }: Route.Componen
       <Form method="post" {...getFormProps(form)} className="mt-6 flex flex-col gap-4">
         <CsrfField />
         <FormErrors id={form.errorId} errors={form.errors} />
-        <TextField label="New password" meta={fields.password} type="password" autoComplete="new-password" hint="At least 12 characters." />
-        <TextField label="New password again" meta={fields.confirmPassword} type="password" autoComplete="new-password" />
+        <TextField
+          label="New password"
+          meta={fields.password}
+          type="password"
+          autoComplete="new-password"
+          hint="At least 12 characters."
+        />
+        <TextField
+          label="New password again"
+          meta={fields.confirmPassword}
+          type="password"
+          autoComplete="new-password"
+        />
         <SubmitButton>Save the new password</SubmitButton>
       </Form>
     </section>

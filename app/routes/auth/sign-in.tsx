@@ -22,7 +22,8 @@ export async function loader({ request, context }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const formData = await requireCsrf(request);
   const submission = parseWithZod(formData, { schema: signInSchema });
-  if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password"] }) }, { status: 400 });
+  if (submission.status !== "success")
+    return data({ result: submission.reply({ hideFields: ["password"] }) }, { status: 400 });
   try {
     const user = await authenticator.authenticate("password", request);
     const setCookie = await startSession(request, user.id);
@@ -51,7 +52,11 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
   return (
     <section className="mx-auto max-w-md">
       <h1 className="text-3xl">Sign in</h1>
-      {notice && <p role="status" className="mt-4 rounded border border-vapour/40 bg-vapour/5 px-3 py-2 text-sm">{notice}</p>}
+      {notice && (
+        <p role="status" className="mt-4 rounded border border-vapour/40 bg-vapour/5 px-3 py-2 text-sm">
+          {notice}
+        </p>
+      )}
       <Form method="post" {...getFormProps(form)} className="mt-6 flex flex-col gap-4">
         <CsrfField />
         <input type="hidden" name="next" value={searchParams.get("next") ?? ""} />
@@ -61,7 +66,8 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
         <SubmitButton>Sign in</SubmitButton>
       </Form>
       <p className="mt-6 text-sm">
-        <Link to="/forgot-password">Forgot your password?</Link> · New here? <Link to="/sign-up">Create an account</Link>.
+        <Link to="/forgot-password">Forgot your password?</Link> · New here?{" "}
+        <Link to="/sign-up">Create an account</Link>.
       </p>
     </section>
   );

@@ -14,7 +14,10 @@ export async function action({ request }: Route.ActionArgs) {
   const formData = await requireCsrf(request);
   const submission = parseWithZod(formData, { schema: signUpSchema });
   if (submission.status !== "success") {
-    return data({ result: submission.reply({ hideFields: ["password", "confirmPassword"] }), sentTo: null }, { status: 400 });
+    return data(
+      { result: submission.reply({ hideFields: ["password", "confirmPassword"] }), sentTo: null },
+      { status: 400 },
+    );
   }
   await signUp(submission.value);
   return { result: submission.reply({ resetForm: true }), sentTo: submission.value.email };
@@ -35,24 +38,36 @@ export default function SignUp({ actionData }: Route.ComponentProps) {
         <p className="mt-4">
           We sent a confirmation link to <strong>{actionData.sentTo}</strong>. Follow it within 24 hours, then sign in.
         </p>
-        <p className="mt-4 text-sm text-graphite-soft">No mail after a few minutes? Look in your spam folder, or try signing in: we send a fresh link.</p>
+        <p className="mt-4 text-sm text-graphite-soft">
+          No mail after a few minutes? Look in your spam folder, or try signing in: we send a fresh link.
+        </p>
       </section>
     );
   }
   return (
     <section className="mx-auto max-w-md">
       <h1 className="text-3xl">Create an account</h1>
-      <p className="mt-2 text-graphite-soft">Members can save details, keep job folders and get an e-mail when a saved detail is revised.</p>
+      <p className="mt-2 text-graphite-soft">
+        Members can save details, keep job folders and get an e-mail when a saved detail is revised.
+      </p>
       <Form method="post" {...getFormProps(form)} className="mt-6 flex flex-col gap-4">
         <CsrfField />
         <FormErrors id={form.errorId} errors={form.errors} />
         <TextField label="Your name" meta={fields.displayName} autoComplete="name" />
         <TextField label="E-mail" meta={fields.email} type="email" autoComplete="email" />
-        <TextField label="Password" meta={fields.password} type="password" autoComplete="new-password" hint="At least 12 characters." />
+        <TextField
+          label="Password"
+          meta={fields.password}
+          type="password"
+          autoComplete="new-password"
+          hint="At least 12 characters."
+        />
         <TextField label="Password again" meta={fields.confirmPassword} type="password" autoComplete="new-password" />
         <SubmitButton>Create account</SubmitButton>
       </Form>
-      <p className="mt-6 text-sm">Already have one? <Link to="/sign-in">Sign in</Link>.</p>
+      <p className="mt-6 text-sm">
+        Already have one? <Link to="/sign-in">Sign in</Link>.
+      </p>
     </section>
   );
 }

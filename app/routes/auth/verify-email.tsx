@@ -26,7 +26,10 @@ export default function VerifyEmail({ loaderData, actionData }: Route.ComponentP
     return (
       <section className="mx-auto max-w-md">
         <h1 className="text-3xl">This link no longer works</h1>
-        <p className="mt-4">Confirmation links work once and expire after 24 hours. <Link to="/sign-in">Sign in</Link> and we will send you a fresh one.</p>
+        <p className="mt-4">
+          Confirmation links work once and expire after 24 hours. <Link to="/sign-in">Sign in</Link> and we will send
+          you a fresh one.
+        </p>
       </section>
     );
   }

@@ -16,7 +16,10 @@ export const meta: Route.MetaFunction = ({ data }) => [
 export async function loader({ request }: Route.LoaderArgs) {
   const parsed = parseCatalogueQuery(new URL(request.url).searchParams);
   if (!parsed.ok) {
-    throw data(`This search address has a problem: ${parsed.errors.map((e) => `${e.param}: ${e.message}`).join("; ")}`, { status: 400 });
+    throw data(
+      `This search address has a problem: ${parsed.errors.map((e) => `${e.param}: ${e.message}`).join("; ")}`,
+      { status: 400 },
+    );
   }
   const [result, units] = await Promise.all([searchCatalogue(parsed.query), unitsFor(request)]);
   return { query: parsed.query, result, units };
@@ -70,7 +73,9 @@ export default function Catalogue({ loaderData }: Route.ComponentProps) {
           <FacetRail query={query} facets={result.facets} />
           <div className="mt-6 flex gap-3 text-sm">
             <noscript>
-              <button type="submit" className="rounded bg-graphite px-3 py-1 text-paper">Apply</button>
+              <button type="submit" className="rounded bg-graphite px-3 py-1 text-paper">
+                Apply
+              </button>
             </noscript>
             {anyFilter ? <Link to="/details">Clear all</Link> : null}
           </div>
@@ -91,7 +96,9 @@ export default function Catalogue({ loaderData }: Route.ComponentProps) {
                 ))}
               </select>
             </label>
-            <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Search</button>
+            <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">
+              Search
+            </button>
           </div>
 
           {result.cards.length === 0 ? (
@@ -109,8 +116,16 @@ export default function Catalogue({ loaderData }: Route.ComponentProps) {
 
           {result.pages > 1 ? (
             <nav aria-label="Pages" className="mt-8 flex items-center justify-between text-sm">
-              {result.page > 1 ? <Link to={pageHref(query, result.page - 1)} preventScrollReset={false}>← Previous</Link> : <span />}
-              <span className="text-graphite-soft">Page {result.page} of {result.pages}</span>
+              {result.page > 1 ? (
+                <Link to={pageHref(query, result.page - 1)} preventScrollReset={false}>
+                  ← Previous
+                </Link>
+              ) : (
+                <span />
+              )}
+              <span className="text-graphite-soft">
+                Page {result.page} of {result.pages}
+              </span>
               {result.page < result.pages ? <Link to={pageHref(query, result.page + 1)}>Next →</Link> : <span />}
             </nav>
           ) : null}

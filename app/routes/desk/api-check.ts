@@ -38,12 +38,21 @@ export async function action({ request }: Route.ActionArgs) {
   if (!stack.success) {
     const first = stack.error.issues[0];
     const where = first.path[0] === "layers" && typeof first.path[1] === "number" ? `Layer ${first.path[1] + 1}: ` : "";
-    return jsonError(400, "incomplete_stack", `${where}${first.path[0] === "layers" && first.path.length > 1 ? `${String(first.path[2] ?? "")} — ` : ""}${first.message}`);
+    return jsonError(
+      400,
+      "incomplete_stack",
+      `${where}${first.path[0] === "layers" && first.path.length > 1 ? `${String(first.path[2] ?? "")} — ` : ""}${first.message}`,
+    );
   }
   const library = await materialLibrary();
-  const unknown = stack.data.layers.flatMap((layer) => [layer.material, layer.framing?.material].filter((slug): slug is string => Boolean(slug) && !library.has(slug!)));
+  const unknown = stack.data.layers.flatMap((layer) =>
+    [layer.material, layer.framing?.material].filter((slug): slug is string => Boolean(slug) && !library.has(slug!)),
+  );
   if (unknown.length) return jsonError(400, "unknown_material", `Not in the material library: ${unknown.join(", ")}.`);
   const outcome = await checkAssemblyForSite({ assembly: stack.data.assembly, layers: stack.data.layers }, posted.site);
-  if (!outcome.ok) return jsonError(400, "invalid_site", "The site is not complete or not valid.", { fieldErrors: outcome.fieldErrors });
+  if (!outcome.ok)
+    return jsonError(400, "invalid_site", "The site is not complete or not valid.", {
+      fieldErrors: outcome.fieldErrors,
+    });
   return Response.json({ result: outcome.result, units: outcome.units }, { headers: { "Cache-Control": "no-store" } });
 }

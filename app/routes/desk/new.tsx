@@ -11,12 +11,27 @@ import { unitsFor } from "~/preferences/units.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "New detail — Desk — Dryside" }];
 
-const STARTER_BODY = "## Why it works\n\n\n## Install sequence\n\n1. \n\n## Cautions\n\n- Confirm with the code adopted where you build and a licensed professional where one is required.\n";
+const STARTER_BODY =
+  "## Why it works\n\n\n## Install sequence\n\n1. \n\n## Cautions\n\n- Confirm with the code adopted where you build and a licensed professional where one is required.\n";
 
 const EMPTY: DraftFormValues = {
-  slug: "", title: "", summary: "", assembly: "", substrate: "", below_grade: "none", strategy: "", tier: "free",
-  zones: [], sets: [], references: "", change_note: "", body: STARTER_BODY,
-  layers: [{ ...BLANK_LAYER, role: "cladding" }, { ...BLANK_LAYER, role: "structure" }],
+  slug: "",
+  title: "",
+  summary: "",
+  assembly: "",
+  substrate: "",
+  below_grade: "none",
+  strategy: "",
+  tier: "free",
+  zones: [],
+  sets: [],
+  references: "",
+  change_note: "",
+  body: STARTER_BODY,
+  layers: [
+    { ...BLANK_LAYER, role: "cladding" },
+    { ...BLANK_LAYER, role: "structure" },
+  ],
 };
 
 // The preview and the site check change nothing: re-running this page's loader after them would only cost a query.
@@ -33,7 +48,8 @@ export async function action({ request, context }: Route.ActionArgs) {
   const user = context.get(userContext);
   const form = await requireCsrf(request);
   const submission = parseWithZod(form, { schema: draftPostSchema });
-  if (submission.status !== "success") return data({ result: submission.reply() }, { status: submission.status === "error" ? 400 : 200 });
+  if (submission.status !== "success")
+    return data({ result: submission.reply() }, { status: submission.status === "error" ? 400 : 200 });
   const { intent: _intent, ...values } = submission.value;
   const outcome = await createDetailDraft(user, values);
   if (!outcome.ok) return data({ result: submission.reply({ fieldErrors: outcome.errors }) }, { status: 400 });
@@ -41,5 +57,17 @@ export async function action({ request, context }: Route.ActionArgs) {
 }
 
 export default function NewDetail({ loaderData, actionData }: Route.ComponentProps) {
-  return <DraftEditor mode="new" heading="New detail: the first save creates revision 1 as a draft." revision={1} values={loaderData.values} lastResult={actionData?.result} materials={loaderData.materials} sets={loaderData.sets} units={loaderData.units} editable />;
+  return (
+    <DraftEditor
+      mode="new"
+      heading="New detail: the first save creates revision 1 as a draft."
+      revision={1}
+      values={loaderData.values}
+      lastResult={actionData?.result}
+      materials={loaderData.materials}
+      sets={loaderData.sets}
+      units={loaderData.units}
+      editable
+    />
+  );
 }

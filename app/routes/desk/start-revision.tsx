@@ -30,7 +30,11 @@ export default function StartRevision({ loaderData, actionData }: Route.Componen
   return (
     <div className="max-w-prose space-y-4">
       <h1 className="text-3xl">Revise “{title}”</h1>
-      {actionData?.message ? <p role="alert" className="text-stop">{actionData.message}</p> : null}
+      {actionData?.message ? (
+        <p role="alert" className="text-stop">
+          {actionData.message}
+        </p>
+      ) : null}
       {open ? (
         <p>
           Revision {open.number} is already open ({REVISION_STATE_LABELS[open.state]}, by {open.authorName}).{" "}
@@ -40,13 +44,17 @@ export default function StartRevision({ loaderData, actionData }: Route.Componen
         <Form method="post" className="space-y-3">
           <CsrfField />
           <p>
-            This starts revision {(publishedNumber ?? 0) + 1} as your draft, copied from the published revision {publishedNumber ?? "—"}.
-            The published page stays as it is until a reviewer approves the new one.
+            This starts revision {(publishedNumber ?? 0) + 1} as your draft, copied from the published revision{" "}
+            {publishedNumber ?? "—"}. The published page stays as it is until a reviewer approves the new one.
           </p>
-          <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">Start a new revision</button>
+          <button type="submit" className="rounded bg-ochre px-4 py-2 font-medium text-white hover:bg-ochre-deep">
+            Start a new revision
+          </button>
         </Form>
       )}
-      <p className="text-sm"><Link to={`/details/${slug}`}>Back to the published page</Link></p>
+      <p className="text-sm">
+        <Link to={`/details/${slug}`}>Back to the published page</Link>
+      </p>
     </div>
   );
 }

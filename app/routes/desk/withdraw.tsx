@@ -48,16 +48,28 @@ export default function Withdraw({ loaderData, actionData }: Route.ComponentProp
         <Form method="post" {...getFormProps(form)} className="space-y-3">
           <CsrfField />
           <FormErrors id={form.errorId} errors={form.errors} />
-          <p>Withdrawing takes the detail out of the catalogue and its pages; its history stays, and publishing a later revision brings it back. Members who saved it keep it in their list, marked withdrawn.</p>
+          <p>
+            Withdrawing takes the detail out of the catalogue and its pages; its history stays, and publishing a later
+            revision brings it back. Members who saved it keep it in their list, marked withdrawn.
+          </p>
           <div className="flex flex-col gap-1 text-sm">
             <label htmlFor={fields.reason.id}>Reason (kept in the audit log)</label>
-            <textarea key={fields.reason.key} {...withoutKey(getTextareaProps(fields.reason))} rows={3} className="rounded border border-rule bg-sheet px-3 py-2 aria-[invalid=true]:border-stop" />
+            <textarea
+              key={fields.reason.key}
+              {...withoutKey(getTextareaProps(fields.reason))}
+              rows={3}
+              className="rounded border border-rule bg-sheet px-3 py-2 aria-[invalid=true]:border-stop"
+            />
             <FieldError meta={fields.reason} />
           </div>
-          <button type="submit" className="rounded bg-stop px-4 py-2 font-medium text-white">Withdraw this detail</button>
+          <button type="submit" className="rounded bg-stop px-4 py-2 font-medium text-white">
+            Withdraw this detail
+          </button>
         </Form>
       )}
-      <p className="text-sm"><Link to="/desk">Back to the desk</Link></p>
+      <p className="text-sm">
+        <Link to="/desk">Back to the desk</Link>
+      </p>
     </div>
   );
 }

@@ -23,7 +23,8 @@ export async function action({ request, context }: Route.ActionArgs) {
   const submission = parseWithZod(form, { schema: checkoutFormSchema });
   if (submission.status !== "success") return data({ message: "Choose a plan or a set to buy." }, { status: 400 });
   const chosen = submission.value;
-  const purchase = chosen.kind === "plan" ? { kind: "plan" as const, plan: chosen.plan } : { kind: "set" as const, set: chosen.set };
+  const purchase =
+    chosen.kind === "plan" ? { kind: "plan" as const, plan: chosen.plan } : { kind: "set" as const, set: chosen.set };
   const started = await startCheckout(user, purchase);
   if (!started.ok) return data({ message: started.message }, { status: started.status });
   return redirect(started.url, { status: 303 });
@@ -36,16 +37,26 @@ export default function Pricing({ loaderData, actionData }: Route.ComponentProps
       <header className="max-w-3xl">
         <h1 className="text-3xl">Pricing</h1>
         <p className="mt-2 text-graphite-soft">
-          Free details stay free. A plan opens every premium detail, the site check on them and every set pack; a single set is yours to keep
-          after one payment.
+          Free details stay free. A plan opens every premium detail, the site check on them and every set pack; a single
+          set is yours to keep after one payment.
         </p>
       </header>
-      {actionData?.message && <p role="alert" className="rounded border border-caution/50 bg-sheet p-3 text-sm">{actionData.message}</p>}
+      {actionData?.message && (
+        <p role="alert" className="rounded border border-caution/50 bg-sheet p-3 text-sm">
+          {actionData.message}
+        </p>
+      )}
       <section aria-labelledby="plans-heading">
-        <h2 id="plans-heading" className="text-xl">Plans</h2>
+        <h2 id="plans-heading" className="text-xl">
+          Plans
+        </h2>
         <ul className="mt-4 grid gap-4 sm:grid-cols-2">
           {plans.map((plan) => (
-            <li key={plan.slug} className="flex flex-col gap-3 rounded border border-rule bg-sheet p-5" data-testid={`plan-${plan.slug}`}>
+            <li
+              key={plan.slug}
+              className="flex flex-col gap-3 rounded border border-rule bg-sheet p-5"
+              data-testid={`plan-${plan.slug}`}
+            >
               <h3 className="text-lg">{plan.name}</h3>
               <p className="font-mono text-lg">{plan.price}</p>
               <p className="text-sm text-graphite-soft">{plan.blurb}</p>
@@ -53,7 +64,12 @@ export default function Pricing({ loaderData, actionData }: Route.ComponentProps
                 {hasPlan ? (
                   <Link to="/account/billing">Your plan is on the billing page</Link>
                 ) : signedIn ? (
-                  <BuyButton kind="plan" item={plan.slug} label={`Start the ${plan.name.toLowerCase()}`} testId={`buy-plan-${plan.slug}`} />
+                  <BuyButton
+                    kind="plan"
+                    item={plan.slug}
+                    label={`Start the ${plan.name.toLowerCase()}`}
+                    testId={`buy-plan-${plan.slug}`}
+                  />
                 ) : (
                   <Link to="/sign-in?next=/pricing">Sign in to subscribe</Link>
                 )}
@@ -63,19 +79,36 @@ export default function Pricing({ loaderData, actionData }: Route.ComponentProps
         </ul>
       </section>
       <section aria-labelledby="sets-heading">
-        <h2 id="sets-heading" className="text-xl">Single sets, bought once</h2>
+        <h2 id="sets-heading" className="text-xl">
+          Single sets, bought once
+        </h2>
         <table className="mt-4 w-full text-left text-sm">
           <thead>
-            <tr className="border-b border-rule"><th className="py-2">Set</th><th>Details</th><th>Price</th><th><span className="sr-only">Buy</span></th></tr>
+            <tr className="border-b border-rule">
+              <th className="py-2">Set</th>
+              <th>Details</th>
+              <th>Price</th>
+              <th>
+                <span className="sr-only">Buy</span>
+              </th>
+            </tr>
           </thead>
           <tbody>
             {sets.map((set) => (
               <tr key={set.slug} className="border-b border-rule/60" data-testid={`price-${set.slug}`}>
-                <td className="py-2"><Link to={`/sets#${set.slug}`}>{set.title}</Link></td>
+                <td className="py-2">
+                  <Link to={`/sets#${set.slug}`}>{set.title}</Link>
+                </td>
                 <td>{set.details.length}</td>
                 <td className="font-mono">{set.priceLabel}</td>
                 <td className="py-2 text-right">
-                  {set.owned ? <Link to={`/sets#${set.slug}`}>Yours: download</Link> : signedIn ? <BuyButton kind="set" item={set.slug} label="Buy" /> : <Link to="/sign-in?next=/pricing">Sign in to buy</Link>}
+                  {set.owned ? (
+                    <Link to={`/sets#${set.slug}`}>Yours: download</Link>
+                  ) : signedIn ? (
+                    <BuyButton kind="set" item={set.slug} label="Buy" />
+                  ) : (
+                    <Link to="/sign-in?next=/pricing">Sign in to buy</Link>
+                  )}
                 </td>
               </tr>
             ))}
@@ -83,7 +116,8 @@ export default function Pricing({ loaderData, actionData }: Route.ComponentProps
         </table>
       </section>
       <p className="max-w-3xl text-sm text-graphite-soft">
-        Prices in US dollars. Payment happens on the payments service's own page; Dryside never sees your card. {STANDING_CAUTION}
+        Prices in US dollars. Payment happens on the payments service's own page; Dryside never sees your card.{" "}
+        {STANDING_CAUTION}
       </p>
     </div>
   );

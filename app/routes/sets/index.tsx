@@ -17,14 +17,22 @@ export default function Sets({ loaderData }: Route.ComponentProps) {
       <header className="max-w-3xl">
         <h1 className="text-3xl">Sets</h1>
         <p className="mt-2 text-graphite-soft">
-          Details grouped the way jobs come in. Each set downloads as a pack: one PDF sheet per detail and its Markdown source. A plan opens
-          them all; <Link to="/pricing">see pricing</Link>.
+          Details grouped the way jobs come in. Each set downloads as a pack: one PDF sheet per detail and its Markdown
+          source. A plan opens them all; <Link to="/pricing">see pricing</Link>.
         </p>
       </header>
       {sets.map((set) => (
-        <section key={set.slug} id={set.slug} aria-labelledby={`${set.slug}-heading`} className="scroll-mt-6 rounded border border-rule bg-sheet p-6" data-testid={`set-${set.slug}`}>
+        <section
+          key={set.slug}
+          id={set.slug}
+          aria-labelledby={`${set.slug}-heading`}
+          className="scroll-mt-6 rounded border border-rule bg-sheet p-6"
+          data-testid={`set-${set.slug}`}
+        >
           <div className="flex flex-wrap items-baseline justify-between gap-4">
-            <h2 id={`${set.slug}-heading`} className="text-xl">{set.title}</h2>
+            <h2 id={`${set.slug}-heading`} className="text-xl">
+              {set.title}
+            </h2>
             <p className="font-mono">{set.priceLabel}</p>
           </div>
           <p className="mt-2 max-w-3xl text-sm text-graphite-soft">{set.summary}</p>
@@ -32,20 +40,34 @@ export default function Sets({ loaderData }: Route.ComponentProps) {
             {set.details.map((detail) => (
               <li key={detail.slug}>
                 <Link to={`/details/${detail.slug}`}>{detail.title}</Link>
-                {detail.tier === "free" && <span className="ml-2 text-xs uppercase tracking-wide text-vapour">free</span>}
+                {detail.tier === "free" && (
+                  <span className="ml-2 text-xs uppercase tracking-wide text-vapour">free</span>
+                )}
               </li>
             ))}
           </ul>
           <div className="mt-5 flex flex-wrap items-center gap-4">
             {set.owned ? (
               <>
-                <a href={`/sets/${set.slug}/pack`} download className="rounded bg-vapour px-4 py-2 font-semibold text-sheet no-underline" data-testid={`download-${set.slug}`}>
+                <a
+                  href={`/sets/${set.slug}/pack`}
+                  download
+                  className="rounded bg-vapour px-4 py-2 font-semibold text-sheet no-underline"
+                  data-testid={`download-${set.slug}`}
+                >
                   Download the pack (ZIP)
                 </a>
-                <a href={`/sets/${set.slug}/pack?units=si`} download className="text-sm">SI units</a>
+                <a href={`/sets/${set.slug}/pack?units=si`} download className="text-sm">
+                  SI units
+                </a>
               </>
             ) : signedIn ? (
-              <BuyButton kind="set" item={set.slug} label={`Buy this set, ${set.priceLabel}`} testId={`buy-${set.slug}`} />
+              <BuyButton
+                kind="set"
+                item={set.slug}
+                label={`Buy this set, ${set.priceLabel}`}
+                testId={`buy-${set.slug}`}
+              />
             ) : (
               <Link to={`/sign-in?next=${encodeURIComponent(`/sets#${set.slug}`)}`}>Sign in to buy this set</Link>
             )}

@@ -11,7 +11,8 @@ import { unitsFor } from "~/preferences/units.server";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = requireUser(request, context);
   const packRequest = parsePackRequest(new URL(request.url).searchParams, await unitsFor(request));
-  if (!packRequest) return jsonError(400, "bad_request", "units must be si or ip; zone a climate zone such as 5A, or own.");
+  if (!packRequest)
+    return jsonError(400, "bad_request", "units must be si or ip; zone a climate zone such as 5A, or own.");
   const result = await downloadPack({ id: user.id, role: user.role }, params.slug, packRequest);
   if (!result.ok) return jsonError(result.status, "not_found", result.message);
   return new Response(Readable.toWeb(result.body) as ReadableStream, {

@@ -5,7 +5,13 @@ import { catalogueQuerySchema } from "~/catalogue/query-parse";
 import { countFacets } from "~/catalogue/search.server";
 import { toBooleanQuery } from "~/catalogue/fulltext";
 import { regimeMask, zoneMask } from "~/catalogue/zone-mask";
-import { CLIMATE_ZONE_IDS, MOISTURE_REGIMES, moistureRegime, type ClimateZoneId, type MoistureRegime } from "~/vocabulary/climate-zones";
+import {
+  CLIMATE_ZONE_IDS,
+  MOISTURE_REGIMES,
+  moistureRegime,
+  type ClimateZoneId,
+  type MoistureRegime,
+} from "~/vocabulary/climate-zones";
 
 interface Item {
   tier: string;
@@ -29,13 +35,15 @@ const itemArb: fc.Arbitrary<Item> = fc.record({
 
 function valuesOf(item: Item, key: FilterKey): string[] {
   if (key === "zone") return item.zones;
-  if (key === "regime") return [...new Set(item.zones.map(moistureRegime).filter((r): r is MoistureRegime => r !== null))];
+  if (key === "regime")
+    return [...new Set(item.zones.map(moistureRegime).filter((r): r is MoistureRegime => r !== null))];
   return [item[key]];
 }
 
 /** The definition, item by item: counts of each value under every other active filter. */
 function naive(items: Item[], query: CatalogueQuery) {
-  const passes = (item: Item, key: FilterKey) => query[key].length === 0 || valuesOf(item, key).some((v) => (query[key] as string[]).includes(v));
+  const passes = (item: Item, key: FilterKey) =>
+    query[key].length === 0 || valuesOf(item, key).some((v) => (query[key] as string[]).includes(v));
   const total = items.filter((item) => FILTER_KEYS.every((key) => passes(item, key))).length;
   const facets: Record<string, Record<string, number>> = {};
   for (const key of FILTER_KEYS) {
@@ -60,8 +68,15 @@ test("facet counts from grouped combinations equal counting detail by detail (pr
     fc.property(fc.array(itemArb, { maxLength: 40 }), queryArb, (items, partial) => {
       const query = catalogueQuerySchema.parse({ substrate: [], belowGrade: [], strategy: [], ...partial });
       const combinations = items.map((item) => ({
-        tier: item.tier, assembly: item.assembly, substrate: item.substrate, below_grade: item.belowGrade, strategy: item.strategy,
-        interior_class: item.interiorClass, zone_mask: zoneMask(item.zones), regime_mask: regimeMask(item.zones), n: 1,
+        tier: item.tier,
+        assembly: item.assembly,
+        substrate: item.substrate,
+        below_grade: item.belowGrade,
+        strategy: item.strategy,
+        interior_class: item.interiorClass,
+        zone_mask: zoneMask(item.zones),
+        regime_mask: regimeMask(item.zones),
+        n: 1,
       }));
       const fast = countFacets(combinations, query);
       const expected = naive(items, query);

@@ -16,12 +16,18 @@ function parse(fields: Record<string, string>) {
   return parseWithZod(posted({ units: "ip", ...fields }), { schema: siteFormSchema });
 }
 
-const CSV = ["month,temperature_c,rh_percent", ...Array.from({ length: 12 }, (_, i) => `${i + 1},${i < 3 ? -10 : 12},80`)].join("\n");
+const CSV = [
+  "month,temperature_c,rh_percent",
+  ...Array.from({ length: 12 }, (_, i) => `${i + 1},${i < 3 ? -10 : 12},80`),
+].join("\n");
 
 describe("Canadian sites", () => {
   test("a province alone is a site, entered in SI whatever the viewer's units", () => {
     const submission = parse({ country: "CA", province: "MB", zone: "", hdd: "" });
-    expect(submission.status === "success" && siteInputFromForm(submission.value)).toEqual({ country: "CA", province: "MB" });
+    expect(submission.status === "success" && siteInputFromForm(submission.value)).toEqual({
+      country: "CA",
+      province: "MB",
+    });
   });
   test("an NBC zone or heating degree-days below 18 °C go to the engine as they are", () => {
     const byZone = parse({ country: "CA", nbcZone: "7A" });
@@ -31,7 +37,9 @@ describe("Canadian sites", () => {
   });
   test("none of the three asks for one, on the province field", () => {
     const submission = parse({ country: "CA" });
-    expect(submission.status === "error" && submission.error).toEqual({ province: ["Choose a province or territory, an NBC zone, or enter heating degree-days below 18 °C"] });
+    expect(submission.status === "error" && submission.error).toEqual({
+      province: ["Choose a province or territory, an NBC zone, or enter heating degree-days below 18 °C"],
+    });
   });
   test("an NBC zone that does not exist is refused on its field", () => {
     const submission = parse({ country: "CA", nbcZone: "9" });
@@ -45,7 +53,10 @@ describe("indoor humidity method", () => {
     const byDefault = parse({ zone: "5A", indoorMethod: first });
     expect(byDefault.status === "success" && siteInputFromForm(byDefault.value)).toEqual({ zone: "5A" });
     const other = parse({ zone: "5A", indoorMethod: "iso-13788-class-4" });
-    expect(other.status === "success" && siteInputFromForm(other.value)).toEqual({ zone: "5A", indoor: { rh: undefined, t_c: undefined, method: "iso-13788-class-4" } });
+    expect(other.status === "success" && siteInputFromForm(other.value)).toEqual({
+      zone: "5A",
+      indoor: { rh: undefined, t_c: undefined, method: "iso-13788-class-4" },
+    });
   });
   test("an unknown method is a field error", () => {
     const submission = parse({ zone: "5A", indoorMethod: "guess" });
@@ -61,7 +72,8 @@ describe("the site year", () => {
   });
   test("twelve typed months in °F reach the engine in °C (32 °F = 0 °C, 50 °F = 10 °C)", () => {
     const fields: Record<string, string> = { zone: "6A", yearSource: "typed" };
-    for (let i = 0; i < 12; i++) Object.assign(fields, { [`yearMonths[${i}].t`]: i % 2 ? "50" : "32", [`yearMonths[${i}].rh`]: "75" });
+    for (let i = 0; i < 12; i++)
+      Object.assign(fields, { [`yearMonths[${i}].t`]: i % 2 ? "50" : "32", [`yearMonths[${i}].rh`]: "75" });
     const submission = parse(fields);
     expect(submission.status).toBe("success");
     const year = submission.status === "success" ? siteInputFromForm(submission.value).year : undefined;
@@ -77,7 +89,9 @@ describe("the site year", () => {
     const errors = submission.status === "error" ? (submission.error ?? {}) : {};
     expect(Object.keys(errors).sort()).toEqual(["yearMonths[11].rh", "yearMonths[11].t", "yearMonths[3].rh"]);
     expect(errors["yearMonths[3].rh"]).toEqual(["Month 4: relative humidity above 0 and at most 100 %"]);
-    expect(submission.reply().initialValue).toMatchObject({ yearMonths: expect.arrayContaining([{ t: "20", rh: "140" }]) });
+    expect(submission.reply().initialValue).toMatchObject({
+      yearMonths: expect.arrayContaining([{ t: "20", rh: "140" }]),
+    });
   });
   test("a good CSV goes to the engine as its text", () => {
     const submission = parse({ zone: "6A", yearSource: "csv", yearCsv: CSV });

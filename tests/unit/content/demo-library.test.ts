@@ -16,13 +16,25 @@ test("the demo library has at least 36 details in at least four sets", () => {
   expect(loaded.details.length).toBeGreaterThanOrEqual(36);
   expect(loaded.sets.length).toBeGreaterThanOrEqual(4);
   for (const set of loaded.sets) {
-    expect(loaded.details.some((detail) => detail.sets.includes(set.slug)), set.slug).toBe(true);
+    expect(
+      loaded.details.some((detail) => detail.sets.includes(set.slug)),
+      set.slug,
+    ).toBe(true);
   }
 });
 
 test("the library covers every assembly kind asked for, zones 2 to 8 and all three moisture regimes", () => {
   const kinds = new Set(loaded.details.map((detail) => detail.assembly));
-  for (const kind of ["above-grade-wall", "roof", "floor", "crawlspace-wall", "crawlspace-floor", "basement-wall", "slab", "rim-joist"]) {
+  for (const kind of [
+    "above-grade-wall",
+    "roof",
+    "floor",
+    "crawlspace-wall",
+    "crawlspace-floor",
+    "basement-wall",
+    "slab",
+    "rim-joist",
+  ]) {
     expect(kinds.has(kind as never), kind).toBe(true);
   }
   const zones = loaded.details.flatMap((detail) => detail.zones);
@@ -59,7 +71,8 @@ test("every detail with foam plastic inboard of its structure names the thermal 
       (layer, index) => index > structure && /xps|eps|polyiso|spray-foam|icf/.test(layer.material),
     );
     if (!inboardFoam) continue;
-    const mentions = /R316|thermal barrier|ignition barrier/i.test(detail.body) || detail.references.some((ref) => /R316/.test(ref));
+    const mentions =
+      /R316|thermal barrier|ignition barrier/i.test(detail.body) || detail.references.some((ref) => /R316/.test(ref));
     expect(mentions, detail.slug).toBe(true);
   }
 });

@@ -94,7 +94,12 @@ test("an unknown material in a layer is an error at that layer's line, relative 
   expect(loaded.details).toEqual([]);
   // Line 18: `---` is line 1 and the first layer is the 18th line of the file.
   expect(loaded.errors).toEqual([
-    { file: "details/test-slab.md", line: 18, field: "layers[0].material", message: 'unknown material "gravel-of-dreams"' },
+    {
+      file: "details/test-slab.md",
+      line: 18,
+      field: "layers[0].material",
+      message: 'unknown material "gravel-of-dreams"',
+    },
   ]);
 });
 
@@ -105,8 +110,12 @@ test("a material whose slug differs from its file name, and a bad material field
     "sets.yaml": SETS,
   });
   const loaded = loadContent(root);
-  expect(loaded.errors).toContainEqual(expect.objectContaining({ file: "materials/cast-concrete.yaml", line: 1, field: "slug" }));
-  expect(loaded.errors).toContainEqual(expect.objectContaining({ file: "materials/crushed-stone.yaml", line: 3, field: "family" }));
+  expect(loaded.errors).toContainEqual(
+    expect.objectContaining({ file: "materials/cast-concrete.yaml", line: 1, field: "slug" }),
+  );
+  expect(loaded.errors).toContainEqual(
+    expect.objectContaining({ file: "materials/crushed-stone.yaml", line: 3, field: "family" }),
+  );
 });
 
 test("a missing sets.yaml is an error and every set reference then fails", () => {
@@ -116,11 +125,17 @@ test("a missing sets.yaml is an error and every set reference then fails", () =>
     "details/test-slab.md": detail("test-slab", ["crushed-stone", "cast-concrete"]),
   });
   const loaded = loadContent(root);
-  expect(loaded.errors.map((error) => `${error.file}:${error.field}`)).toEqual(["sets.yaml:", "details/test-slab.md:sets[0]"]);
+  expect(loaded.errors.map((error) => `${error.file}:${error.field}`)).toEqual([
+    "sets.yaml:",
+    "details/test-slab.md:sets[0]",
+  ]);
 });
 
 test("a folder without materials/ loads details without checking their materials", () => {
-  const root = contentFolder({ "sets.yaml": SETS, "details/test-slab.md": detail("test-slab", ["anything", "at-all"]) });
+  const root = contentFolder({
+    "sets.yaml": SETS,
+    "details/test-slab.md": detail("test-slab", ["anything", "at-all"]),
+  });
   const loaded = loadContent(root);
   expect(loaded.materials).toBeUndefined();
   expect(loaded.errors).toEqual([]);

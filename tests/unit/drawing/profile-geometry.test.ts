@@ -13,11 +13,19 @@ import { ShapeElements } from "~/components/section-drawing";
 import { profileAxes } from "~/drawing/profile-axes";
 import { MIN_TEXT_SIZE, niceStep, profileGeometry, type ProfileGeometry } from "~/drawing/profile-geometry";
 import { estimateTextWidth, type Shape, type TextShape } from "~/drawing/shapes";
-import { buildMaterialLibrary, materialSchema, runSiteCheck, type AssemblyInput, type LayerInput, type SiteInput } from "~/envelope";
+import {
+  buildMaterialLibrary,
+  materialSchema,
+  runSiteCheck,
+  type AssemblyInput,
+  type LayerInput,
+  type SiteInput,
+} from "~/envelope";
 import { cToF } from "~/envelope/units";
 
 const materials = buildMaterialLibrary(
-  readdirSync("content/materials").filter((f) => f.endsWith(".yaml"))
+  readdirSync("content/materials")
+    .filter((f) => f.endsWith(".yaml"))
     .map((f) => materialSchema.parse(parse(readFileSync(join("content/materials", f), "utf8")))),
 );
 const check = (assembly: AssemblyInput, site: SiteInput) => runSiteCheck(assembly, site, materials);
@@ -28,7 +36,12 @@ const thinFoamLayers: LayerInput[] = [
   { role: "insulation", material: "xps-board", thickness_mm: 25 },
   { role: "water-resistive-barrier", material: "polymeric-housewrap", thickness_mm: 0.2 },
   { role: "sheathing", material: "osb", thickness_mm: 11 },
-  { role: "insulation", material: "fibreglass-batt", thickness_mm: 140, framing: { material: "softwood-lumber", fraction: 0.23 } },
+  {
+    role: "insulation",
+    material: "fibreglass-batt",
+    thickness_mm: 140,
+    framing: { material: "softwood-lumber", fraction: 0.23 },
+  },
   { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
   { role: "vapour-retarder", material: "latex-paint", thickness_mm: 0.1 },
 ];
@@ -42,15 +55,23 @@ const polyLayers: LayerInput[] = [
 const poly = check({ kind: "above-grade-wall", layers: polyLayers }, { zone: "5A" });
 
 // A basement wall insulated on the inside: the soil face is held at the ground temperature.
-const basement = check({
-  kind: "basement-wall",
-  layers: [
-    { role: "structure", material: "cast-concrete", thickness_mm: 200 },
-    { role: "insulation", material: "xps-board", thickness_mm: 50 },
-    { role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "softwood-lumber", fraction: 0.2 } },
-    { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
-  ],
-}, { zone: "5A" });
+const basement = check(
+  {
+    kind: "basement-wall",
+    layers: [
+      { role: "structure", material: "cast-concrete", thickness_mm: 200 },
+      { role: "insulation", material: "xps-board", thickness_mm: 50 },
+      {
+        role: "insulation",
+        material: "fibreglass-batt",
+        thickness_mm: 89,
+        framing: { material: "softwood-lumber", fraction: 0.2 },
+      },
+      { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
+    ],
+  },
+  { zone: "5A" },
+);
 
 function polyline(g: ProfileGeometry, tag: string): [number, number][] {
   const s = g.shapes.find((x) => x.tag === tag);
@@ -93,7 +114,8 @@ describe("temperature against cumulative thermal resistance", () => {
     const exterior = films.find((f) => f.side === "exterior")?.rsi ?? 0;
     const interior = films.find((f) => f.side === "interior")?.rsi ?? 0;
     const cumulative = [exterior];
-    for (const l of layers) cumulative.push(cumulative[cumulative.length - 1] + (l.framed ? l.framed.cavity_rsi : l.rsi));
+    for (const l of layers)
+      cumulative.push(cumulative[cumulative.length - 1] + (l.framed ? l.framed.cavity_rsi : l.rsi));
     const total = cumulative[cumulative.length - 1] + interior;
     const g = profileGeometry(thinFoam.profiles.winter, { units: "si" });
     const { plot, interfaceX } = g.temperature;
@@ -168,7 +190,12 @@ describe("margin above the dew point", () => {
   });
 
   test("every condensing interface is marked in all three panels", () => {
-    for (const profile of [thinFoam.profiles.winter, thinFoam.profiles.summer, basement.profiles.winter, basement.profiles.summer]) {
+    for (const profile of [
+      thinFoam.profiles.winter,
+      thinFoam.profiles.summer,
+      basement.profiles.winter,
+      basement.profiles.summer,
+    ]) {
       const g = profileGeometry(profile, { units: "si" });
       for (const plane of profile.condensingPlanes) {
         for (const panel of ["temperature", "vapour", "margin"]) {
@@ -182,7 +209,13 @@ describe("margin above the dew point", () => {
 });
 
 describe("legible at phone width", () => {
-  const cases = [thinFoam.profiles.winter, thinFoam.profiles.summer, poly.profiles.winter, basement.profiles.winter, basement.profiles.summer];
+  const cases = [
+    thinFoam.profiles.winter,
+    thinFoam.profiles.summer,
+    poly.profiles.winter,
+    basement.profiles.winter,
+    basement.profiles.summer,
+  ];
 
   test("in the phone layout (a 360 px screen draws it near 1:1) every label is at least 10 units and inside the drawing", () => {
     for (const profile of cases) {
@@ -203,7 +236,10 @@ describe("legible at phone width", () => {
   test("no two labels overlap, narrow or wide", () => {
     for (const profile of cases) {
       for (const width of [PROFILE_CHART_WIDTHS.narrow, PROFILE_CHART_WIDTHS.wide]) {
-        const labels = texts(profileGeometry(profile, { units: "ip", width }).shapes).map((t) => ({ t, box: textBox(t) }));
+        const labels = texts(profileGeometry(profile, { units: "ip", width }).shapes).map((t) => ({
+          t,
+          box: textBox(t),
+        }));
         for (let i = 0; i < labels.length; i++) {
           for (let j = i + 1; j < labels.length; j++) {
             const a = labels[i].box;
@@ -230,10 +266,16 @@ test("profile charts render as titled, accessible figures, written to test-resul
     ["winter-dry", profileGeometry(poly.profiles.winter, { units: "ip" })],
     ["summer", profileGeometry(thinFoam.profiles.summer, { units: "si" })],
     ["below-grade", profileGeometry(basement.profiles.winter, { units: "si" })],
-    ["winter-condensing-phone", profileGeometry(thinFoam.profiles.winter, { units: "si", width: PROFILE_CHART_WIDTHS.narrow })],
+    [
+      "winter-condensing-phone",
+      profileGeometry(thinFoam.profiles.winter, { units: "si", width: PROFILE_CHART_WIDTHS.narrow }),
+    ],
   ];
   for (const [name, g] of samples) {
     const body = renderToStaticMarkup(createElement(ShapeElements, { shapes: g.shapes }));
-    writeFileSync(`test-results/profile-${name}.svg`, `<svg xmlns="http://www.w3.org/2000/svg" width="${g.width}" height="${g.height}" viewBox="0 0 ${g.width} ${g.height}">${body}</svg>`);
+    writeFileSync(
+      `test-results/profile-${name}.svg`,
+      `<svg xmlns="http://www.w3.org/2000/svg" width="${g.width}" height="${g.height}" viewBox="0 0 ${g.width} ${g.height}">${body}</svg>`,
+    );
   }
 });

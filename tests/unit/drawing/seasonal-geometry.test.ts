@@ -16,11 +16,17 @@ import { fixedRsiMaterial, libraryOf, loadLibrary } from "../envelope/library";
 
 const layerMaterial = (slug: string, rsi: number, perm: number, family: MaterialFamily = "membrane") =>
   fixedRsiMaterial(slug, rsi, { family, vapour: { permeance_ng: perm, source: "fixture, D" } });
-const twoLayer = libraryOf(layerMaterial("outer-board", 0.5, 10), layerMaterial("fill", 3.0, 500, "fibrous-insulation"));
-const wall = { kind: "above-grade-wall" as const, layers: [
-  { role: "sheathing", material: "outer-board", thickness_mm: 10 },
-  { role: "insulation", material: "fill", thickness_mm: 100 },
-] };
+const twoLayer = libraryOf(
+  layerMaterial("outer-board", 0.5, 10),
+  layerMaterial("fill", 3.0, 500, "fibrous-insulation"),
+);
+const wall = {
+  kind: "above-grade-wall" as const,
+  layers: [
+    { role: "sheathing", material: "outer-board", thickness_mm: 10 },
+    { role: "insulation", material: "fill", thickness_mm: 100 },
+  ],
+};
 const cold: MonthInput = { t_c: -5, rh: 80 };
 const mild: MonthInput = { t_c: 15, rh: 70 };
 
@@ -38,7 +44,20 @@ describe("a wall that dries within the year (condenses in Jan and Feb, dry by th
   const chart = seasonalGeometry(dries, { units: "si", width: 720 });
 
   test("twelve month columns, January to December, left to right", () => {
-    expect(chart.slots.map((s) => s.name)).toEqual(["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"]);
+    expect(chart.slots.map((s) => s.name)).toEqual([
+      "Jan",
+      "Feb",
+      "Mar",
+      "Apr",
+      "May",
+      "Jun",
+      "Jul",
+      "Aug",
+      "Sep",
+      "Oct",
+      "Nov",
+      "Dec",
+    ]);
     for (let i = 1; i < 12; i++) expect(chart.slots[i].x).toBeGreaterThan(chart.slots[i - 1].x);
   });
 
@@ -80,7 +99,10 @@ test("verdict labels for the three outcomes", () => {
 
 test("the interior-surface mould check is on the chart, in words", () => {
   const chart = seasonalGeometry(dries, { units: "ip", width: 300 });
-  const surface = chart.shapes.filter((s): s is TextShape => s.type === "text" && s.tag === "surface").map((s) => s.text).join(" ");
+  const surface = chart.shapes
+    .filter((s): s is TextShape => s.type === "text" && s.tag === "surface")
+    .map((s) => s.text)
+    .join(" ");
   expect(surface).toBe(surfaceCheckLine(dries));
   expect(surface).toMatch(/^Inside surface: temperature factor 0\.\d\d/);
 });
@@ -100,22 +122,44 @@ test("both widths: type at 10 units or more, everything inside the drawing, inch
     const months = chart.shapes.filter((s): s is TextShape => s.type === "text" && /^month:/.test(s.tag ?? ""));
     for (let i = 1; i < months.length; i++) {
       const gap = months[i].x - months[i - 1].x;
-      expect(gap).toBeGreaterThan((estimateTextWidth(months[i].text, months[i].size) + estimateTextWidth(months[i - 1].text, months[i - 1].size)) / 2 + 1);
+      expect(gap).toBeGreaterThan(
+        (estimateTextWidth(months[i].text, months[i].size) +
+          estimateTextWidth(months[i - 1].text, months[i - 1].size)) /
+          2 +
+          1,
+      );
     }
   }
 });
 
 test("renders to SVG with its accessible name (saved to test-results/ to look at)", () => {
   const library = loadLibrary();
-  const realWall = runSiteCheck({ kind: "above-grade-wall", layers: [
-    { role: "cladding", material: "fibre-cement-lap-siding", thickness_mm: 8 },
-    { role: "water-resistive-barrier", material: "polymeric-housewrap", thickness_mm: 0.2 },
-    { role: "sheathing", material: "osb", thickness_mm: 11 },
-    { role: "insulation", material: "fibreglass-batt", thickness_mm: 140, framing: { material: "softwood-lumber", fraction: 0.23 } },
-    { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
-  ] }, { country: "CA", province: "MB" }, library).seasonal;
-  const html = [dries, accumulates, ...(realWall ? [realWall] : [])].map((s) => renderToStaticMarkup(createElement(SeasonalChart, { seasonal: s, units: "si" }))).join("\n");
+  const realWall = runSiteCheck(
+    {
+      kind: "above-grade-wall",
+      layers: [
+        { role: "cladding", material: "fibre-cement-lap-siding", thickness_mm: 8 },
+        { role: "water-resistive-barrier", material: "polymeric-housewrap", thickness_mm: 0.2 },
+        { role: "sheathing", material: "osb", thickness_mm: 11 },
+        {
+          role: "insulation",
+          material: "fibreglass-batt",
+          thickness_mm: 140,
+          framing: { material: "softwood-lumber", fraction: 0.23 },
+        },
+        { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
+      ],
+    },
+    { country: "CA", province: "MB" },
+    library,
+  ).seasonal;
+  const html = [dries, accumulates, ...(realWall ? [realWall] : [])]
+    .map((s) => renderToStaticMarkup(createElement(SeasonalChart, { seasonal: s, units: "si" })))
+    .join("\n");
   expect(html).toContain('aria-label="Dries within the year. Peak 1578 g/m² in Feb');
   mkdirSync("test-results", { recursive: true });
-  writeFileSync("test-results/seasonal-chart.html", `<!doctype html><meta charset="utf-8"><body style="background:#f7f2e8;width:760px;font-family:Inter,sans-serif">${html}</body>`);
+  writeFileSync(
+    "test-results/seasonal-chart.html",
+    `<!doctype html><meta charset="utf-8"><body style="background:#f7f2e8;width:760px;font-family:Inter,sans-serif">${html}</body>`,
+  );
 });

@@ -1,7 +1,13 @@
 // The section drawing's geometry: proportions, order, hatch containment, callouts, scale bar.
 import { expect, test } from "vitest";
 import { insideBox, type Box } from "~/drawing/clip";
-import { fitBandWidths, sectionGeometry, sideLabelsFor, spreadCallouts, type SectionInput } from "~/drawing/section-geometry";
+import {
+  fitBandWidths,
+  sectionGeometry,
+  sideLabelsFor,
+  spreadCallouts,
+  type SectionInput,
+} from "~/drawing/section-geometry";
 import type { Shape } from "~/drawing/shapes";
 import { formatThickness, inToMm } from "~/envelope/units";
 
@@ -13,7 +19,13 @@ const wall: SectionInput = {
     { role: "insulation", family: "foam-board", materialName: "Extruded polystyrene board", thickness_mm: 50 },
     { role: "water-resistive-barrier", family: "membrane", materialName: "Polymeric housewrap", thickness_mm: 0.2 },
     { role: "sheathing", family: "wood-panel", materialName: "Oriented strand board", thickness_mm: 11 },
-    { role: "insulation", family: "fibrous-insulation", materialName: "Fibreglass batt", thickness_mm: 140, framing: { fraction: 0.23, family: "lumber", materialName: "Softwood lumber" } },
+    {
+      role: "insulation",
+      family: "fibrous-insulation",
+      materialName: "Fibreglass batt",
+      thickness_mm: 140,
+      framing: { fraction: 0.23, family: "lumber", materialName: "Softwood lumber" },
+    },
     { role: "interior-finish", family: "gypsum", materialName: "Gypsum board", thickness_mm: 12.7 },
     { role: "vapour-retarder", family: "coating", materialName: "Latex paint", thickness_mm: 0.1 },
   ],
@@ -21,17 +33,49 @@ const wall: SectionInput = {
 
 const everyFamily: SectionInput = {
   kind: "basement-wall",
-  layers: ["cladding", "masonry", "concrete", "wood-panel", "lumber", "gypsum", "foam-board", "spray-foam", "fibrous-insulation", "loose-fill", "membrane", "sheet-retarder", "coating", "air-space", "drainage", "aggregate", "metal", "roofing"]
-    .map((family, i) => ({ role: "structure", family, materialName: `Material ${i + 1}`, thickness_mm: 10 + i * 3 })),
+  layers: [
+    "cladding",
+    "masonry",
+    "concrete",
+    "wood-panel",
+    "lumber",
+    "gypsum",
+    "foam-board",
+    "spray-foam",
+    "fibrous-insulation",
+    "loose-fill",
+    "membrane",
+    "sheet-retarder",
+    "coating",
+    "air-space",
+    "drainage",
+    "aggregate",
+    "metal",
+    "roofing",
+  ].map((family, i) => ({ role: "structure", family, materialName: `Material ${i + 1}`, thickness_mm: 10 + i * 3 })),
 };
 
 function pointsOf(s: Shape): [number, number][] {
   switch (s.type) {
-    case "line": return [[s.x1, s.y1], [s.x2, s.y2]];
-    case "polyline": return s.points;
-    case "circle": return [[s.cx - s.r, s.cy - s.r], [s.cx + s.r, s.cy + s.r]];
-    case "rect": return [[s.x, s.y], [s.x + s.w, s.y + s.h]];
-    case "text": return [[s.x, s.y]];
+    case "line":
+      return [
+        [s.x1, s.y1],
+        [s.x2, s.y2],
+      ];
+    case "polyline":
+      return s.points;
+    case "circle":
+      return [
+        [s.cx - s.r, s.cy - s.r],
+        [s.cx + s.r, s.cy + s.r],
+      ];
+    case "rect":
+      return [
+        [s.x, s.y],
+        [s.x + s.w, s.y + s.h],
+      ];
+    case "text":
+      return [[s.x, s.y]];
   }
 }
 
@@ -75,18 +119,23 @@ test("every band's hatch lies inside its band, and framed layers hatch around th
     for (const band of g.bands) {
       const hatch = g.shapes.filter((s) => s.tag === `hatch:${band.index}`);
       const style = input.layers[band.index].family;
-      if (!["membrane", "sheet-retarder", "coating", "metal", "air-space"].includes(style)) expect(hatch.length, style).toBeGreaterThan(0);
-      for (const s of hatch) for (const [x, y] of pointsOf(s)) expect(insideBox(x, y, band.box), `${style} at ${x},${y}`).toBe(true);
+      if (!["membrane", "sheet-retarder", "coating", "metal", "air-space"].includes(style))
+        expect(hatch.length, style).toBeGreaterThan(0);
+      for (const s of hatch)
+        for (const [x, y] of pointsOf(s)) expect(insideBox(x, y, band.box), `${style} at ${x},${y}`).toBe(true);
     }
   }
   const g = sectionGeometry(wall, { units: "si" });
   const batt = g.bands[5];
   expect(batt.framingBox).toBeDefined();
   const stud = batt.framingBox as Box;
-  const cavityLines = g.shapes.filter((s): s is Extract<Shape, { type: "polyline" }> => s.tag === "hatch:5" && s.type === "polyline");
+  const cavityLines = g.shapes.filter(
+    (s): s is Extract<Shape, { type: "polyline" }> => s.tag === "hatch:5" && s.type === "polyline",
+  );
   expect(cavityLines.length).toBeGreaterThan(0);
   // Batt loops stay out of the framing member (its crossed box is drawn as lines).
-  for (const s of cavityLines) for (const [, y] of s.points) expect(y <= stud.y + 1e-6 || y >= stud.y + stud.h - 1e-6).toBe(true);
+  for (const s of cavityLines)
+    for (const [, y] of s.points) expect(y <= stud.y + 1e-6 || y >= stud.y + stud.h - 1e-6).toBe(true);
   expect(g.shapes.filter((s) => s.tag === "hatch:5" && s.type === "line")).toHaveLength(2);
 });
 
@@ -96,7 +145,9 @@ test("callouts and legend number the layers 1..n in order, with the material and
     const n = i + 1;
     const callout = g.shapes.find((s) => s.type === "text" && s.tag === `callout:${n}`);
     expect(callout && callout.type === "text" && callout.text).toBe(String(n));
-    const legend = g.shapes.filter((s): s is Extract<Shape, { type: "text" }> => s.type === "text" && s.tag === `legend:${n}`).map((s) => s.text);
+    const legend = g.shapes
+      .filter((s): s is Extract<Shape, { type: "text" }> => s.type === "text" && s.tag === `legend:${n}`)
+      .map((s) => s.text);
     expect(legend[0]).toBe(String(n));
     expect(legend[1].startsWith(layer.materialName)).toBe(true);
     expect(legend[2].replace(" *", "")).toBe(formatThickness(layer.thickness_mm, "ip"));
@@ -144,5 +195,7 @@ test("side labels fit the assembly kind", () => {
 });
 
 test("the same input gives the same drawing (deterministic stipple)", () => {
-  expect(JSON.stringify(sectionGeometry(everyFamily, { units: "si" }))).toBe(JSON.stringify(sectionGeometry(everyFamily, { units: "si" })));
+  expect(JSON.stringify(sectionGeometry(everyFamily, { units: "si" }))).toBe(
+    JSON.stringify(sectionGeometry(everyFamily, { units: "si" })),
+  );
 });

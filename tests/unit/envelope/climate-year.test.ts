@@ -1,6 +1,13 @@
 import { expect, test } from "vitest";
 import { resolveSite } from "~/envelope/climate";
-import { ClimateCsvError, generateClimateYear, monthlyDegreeDays, parseClimateCsv, resolveClimateYear, validateMonths } from "~/envelope/climate-year";
+import {
+  ClimateCsvError,
+  generateClimateYear,
+  monthlyDegreeDays,
+  parseClimateCsv,
+  resolveClimateYear,
+  validateMonths,
+} from "~/envelope/climate-year";
 import { SiteCheckInputError } from "~/envelope/errors";
 
 const good = `month,temperature_c,rh_percent
@@ -26,7 +33,12 @@ test("a 12-row CSV reads month by month, January first", () => {
 });
 
 test("the header is optional; month names, any order, CRLF, comments and blank lines are accepted", () => {
-  const rows = good.trim().split("\n").slice(1).reverse().map((r, i) => (i === 0 ? r.replace(/^12,/, "Dec,") : r));
+  const rows = good
+    .trim()
+    .split("\n")
+    .slice(1)
+    .reverse()
+    .map((r, i) => (i === 0 ? r.replace(/^12,/, "Dec,") : r));
   const months = parseClimateCsv(`\uFEFF# site normals\r\n\r\n${rows.join("\r\n")}\r\n`);
   expect(months.map((m) => m.month)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
   expect(months[11].t_c).toBe(-6.4);
@@ -36,9 +48,9 @@ test.each([
   ["a short row", good.replace("3,-2.1,76", "3,-2.1"), 4, "expected 3 values"],
   ["a bad month", good.replace("5,12.8,68", "13,12.8,68"), 6, "is not a month"],
   ["a repeated month", good.replace("5,12.8,68", "4,12.8,68"), 6, "Apr appears twice"],
-  ["text for a temperature", good.replace("7,20.8,72", "7,warm,72"), 8, "temperature \"warm\""],
-  ["an RH above 100", good.replace("9,14.7,76", "9,14.7,176"), 10, "relative humidity \"176\""],
-  ["an RH of 0", good.replace("9,14.7,76", "9,14.7,0"), 10, "relative humidity \"0\""],
+  ["text for a temperature", good.replace("7,20.8,72", "7,warm,72"), 8, 'temperature "warm"'],
+  ["an RH above 100", good.replace("9,14.7,76", "9,14.7,176"), 10, 'relative humidity "176"'],
+  ["an RH of 0", good.replace("9,14.7,76", "9,14.7,0"), 10, 'relative humidity "0"'],
 ])("a CSV with %s names the line", (_, text, line, message) => {
   try {
     parseClimateCsv(text);

@@ -8,7 +8,17 @@ import { fixedMaterial, libraryOf, loadLibrary } from "./library";
 // (0.030 at −20 °C, 0.025 at 20 °C); rated 0.025.
 const board: Material = {
   ...fixedMaterial("cold-board", 0, 1, { family: "foam-board", foam_plastic: true }),
-  thermal: { conductivity_w_mk: 0.025, source: "fixture, D", by_mean_temperature: { points: [[-20, 0.03], [20, 0.025]], source: "fixture, D" } },
+  thermal: {
+    conductivity_w_mk: 0.025,
+    source: "fixture, D",
+    by_mean_temperature: {
+      points: [
+        [-20, 0.03],
+        [20, 0.025],
+      ],
+      source: "fixture, D",
+    },
+  },
 };
 const lib = libraryOf(board);
 
@@ -17,7 +27,11 @@ test("a cold-sensitive board is taken at its own mean temperature, iterated: inn
   // Fixed point: T_m = −20 + 40 (R_e + R_b/2) / (R_e + R_b + R_i) and R_b = 0.050 / k(T_m), solved by
   // substitution: R_b = 1.8106, T_m = −0.92 °C; inner face −20 + 40 (R_e + R_b) / R_tot = 17.556 °C.
   // At the rated k (R_b = 2.0) it would be 17.772 °C.
-  const w = runSiteCheck({ kind: "above-grade-wall", layers: [{ role: "insulation", material: "cold-board", thickness_mm: 50 }] }, { zone: "6A", winter: { t_c: -20, rh: 80 }, indoor: { t_c: 20, rh: 30 } }, lib).profiles.winter;
+  const w = runSiteCheck(
+    { kind: "above-grade-wall", layers: [{ role: "insulation", material: "cold-board", thickness_mm: 50 }] },
+    { zone: "6A", winter: { t_c: -20, rh: 80 }, indoor: { t_c: 20, rh: 30 } },
+    lib,
+  ).profiles.winter;
   expect(w.interfaces[1].t_c).toBeCloseTo(17.556, 2);
   expect(w.interfaces[0].t_c).toBeCloseTo(-19.389, 2);
   expect(w.notes.join(" ")).toMatch(/mean temperature of -0\.9 °C/);

@@ -4,7 +4,10 @@ import type { AssemblyInput, SiteInput } from "~/envelope/types";
 import { loadLibrary } from "./library";
 
 const lib = loadLibrary();
-const good: AssemblyInput = { kind: "above-grade-wall", layers: [{ role: "sheathing", material: "osb", thickness_mm: 11.1 }] };
+const good: AssemblyInput = {
+  kind: "above-grade-wall",
+  layers: [{ role: "sheathing", material: "osb", thickness_mm: 11.1 }],
+};
 
 function errorOf(fn: () => unknown): SiteCheckInputError {
   try {
@@ -17,15 +20,85 @@ function errorOf(fn: () => unknown): SiteCheckInputError {
 }
 
 test.each([
-  ["unknown material", { kind: "above-grade-wall", layers: [{ role: "x", material: "unobtainium", thickness_mm: 10 }] }, "layers[0].material", /unknown material "unobtainium"/],
-  ["zero thickness", { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: 0 }] }, "layers[0].thickness_mm", /above 0 mm/],
-  ["negative thickness", { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: -3 }] }, "layers[0].thickness_mm", /above 0 mm/],
-  ["NaN thickness", { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: Number.NaN }] }, "layers[0].thickness_mm", /above 0 mm/],
-  ["framing fraction above 1", { kind: "above-grade-wall", layers: [{ role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "softwood-lumber", fraction: 1.5 } }] }, "layers[0].framing.fraction", /from 0 to 1/],
-  ["negative framing fraction", { kind: "above-grade-wall", layers: [{ role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "softwood-lumber", fraction: -0.1 } }] }, "layers[0].framing.fraction", /from 0 to 1/],
-  ["unknown framing material", { kind: "above-grade-wall", layers: [{ role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "steel-stud", fraction: 0.2 } }] }, "layers[0].framing.material", /unknown material/],
+  [
+    "unknown material",
+    { kind: "above-grade-wall", layers: [{ role: "x", material: "unobtainium", thickness_mm: 10 }] },
+    "layers[0].material",
+    /unknown material "unobtainium"/,
+  ],
+  [
+    "zero thickness",
+    { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: 0 }] },
+    "layers[0].thickness_mm",
+    /above 0 mm/,
+  ],
+  [
+    "negative thickness",
+    { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: -3 }] },
+    "layers[0].thickness_mm",
+    /above 0 mm/,
+  ],
+  [
+    "NaN thickness",
+    { kind: "above-grade-wall", layers: [{ role: "x", material: "osb", thickness_mm: Number.NaN }] },
+    "layers[0].thickness_mm",
+    /above 0 mm/,
+  ],
+  [
+    "framing fraction above 1",
+    {
+      kind: "above-grade-wall",
+      layers: [
+        {
+          role: "insulation",
+          material: "fibreglass-batt",
+          thickness_mm: 89,
+          framing: { material: "softwood-lumber", fraction: 1.5 },
+        },
+      ],
+    },
+    "layers[0].framing.fraction",
+    /from 0 to 1/,
+  ],
+  [
+    "negative framing fraction",
+    {
+      kind: "above-grade-wall",
+      layers: [
+        {
+          role: "insulation",
+          material: "fibreglass-batt",
+          thickness_mm: 89,
+          framing: { material: "softwood-lumber", fraction: -0.1 },
+        },
+      ],
+    },
+    "layers[0].framing.fraction",
+    /from 0 to 1/,
+  ],
+  [
+    "unknown framing material",
+    {
+      kind: "above-grade-wall",
+      layers: [
+        {
+          role: "insulation",
+          material: "fibreglass-batt",
+          thickness_mm: 89,
+          framing: { material: "steel-stud", fraction: 0.2 },
+        },
+      ],
+    },
+    "layers[0].framing.material",
+    /unknown material/,
+  ],
   ["empty stack", { kind: "above-grade-wall", layers: [] }, "layers", /no layers/],
-  ["unknown kind", { kind: "chimney", layers: [{ role: "x", material: "osb", thickness_mm: 10 }] }, "kind", /unknown assembly kind/],
+  [
+    "unknown kind",
+    { kind: "chimney", layers: [{ role: "x", material: "osb", thickness_mm: 10 }] },
+    "kind",
+    /unknown assembly kind/,
+  ],
 ])("%s throws SiteCheckInputError on the right field", (_name, assembly, field, message) => {
   const e = errorOf(() => runSiteCheck(assembly as AssemblyInput, { zone: "5A" }, lib));
   expect(e.field).toBe(field);

@@ -30,7 +30,14 @@ function wall(extra: { poly?: boolean; xps?: "xps1" | "xps2" } = {}) {
 }
 
 test("G1a: R_tot 22.92 (RSI 4.036) — docs/references.md §7.2 (D)", () => {
-  const r = runSiteCheck({ kind: "above-grade-wall", layers: [L("w", "housewrap"), L("s", "osb"), L("insulation", "batt"), L("f", "gypsum-painted")] }, site, lib);
+  const r = runSiteCheck(
+    {
+      kind: "above-grade-wall",
+      layers: [L("w", "housewrap"), L("s", "osb"), L("insulation", "batt"), L("f", "gypsum-painted")],
+    },
+    site,
+    lib,
+  );
   expect(r.thermal.r_ip).toBeCloseTo(22.92, 2);
   expect(r.thermal.rsi).toBeCloseTo(4.036, 3);
 });
@@ -79,14 +86,17 @@ test("G1b: with 6-mil poly inside no condensation; p_v 252.7 Pa vs p_sat 285.7, 
 test.each([
   ["xps1", -3.57, 453.7, 10.08],
   ["xps2", 0.16, 618.4, 6.73],
-] as const)("G1c/G1d: with %s outside the OSB, condensing at batt/OSB at %s °C (p_sat %s), rate %s g/(m²·day) — docs/references.md §7.2 (D)", (xps, tc, psat, rate) => {
-  const p = wall({ xps });
-  const plane = p.firstCondensingSurface;
-  expect(plane?.label).toBe("osb / batt");
-  expect(plane?.t_c).toBeCloseTo(tc, 2);
-  expect(p.interfaces[plane?.interfaceIndex ?? 0].p_sat_pa).toBeCloseTo(psat, 0);
-  expect(p.rate_g_m2_day).toBeCloseTo(rate, 2);
-});
+] as const)(
+  "G1c/G1d: with %s outside the OSB, condensing at batt/OSB at %s °C (p_sat %s), rate %s g/(m²·day) — docs/references.md §7.2 (D)",
+  (xps, tc, psat, rate) => {
+    const p = wall({ xps });
+    const plane = p.firstCondensingSurface;
+    expect(plane?.label).toBe("osb / batt");
+    expect(plane?.t_c).toBeCloseTo(tc, 2);
+    expect(p.interfaces[plane?.interfaceIndex ?? 0].p_sat_pa).toBeCloseTo(psat, 0);
+    expect(p.rate_g_m2_day).toBeCloseTo(rate, 2);
+  },
+);
 
 // JLC "Where does the dew drop" (docs/references.md §7.1, C): indoor 70 °F / 50 %, outdoor 32 °F; sheathing
 // inner face at 32 + R_out/R_tot × 38 °F; indoor dew point ≈ 50 °F (psychrolib 50.53 °F, D).
@@ -98,8 +108,18 @@ function jlcWall(foamR: number) {
     fixedMaterial("cavity", 9.87, 20, { family: "fibrous-insulation", water_sensitive: true }),
     fixedMaterial("gypsum", 0.45, 5, { family: "gypsum" }),
   );
-  const layers = [L("cladding", "siding"), L("insulation", "foam"), L("sheathing", "sheathing"), L("insulation", "cavity"), L("interior-finish", "gypsum")];
-  return runSiteCheck({ kind: "above-grade-wall", layers }, { zone: "5A", winter: { t_c: 0, rh: 80 }, indoor: { t_c: (70 - 32) * 5 / 9, rh: 50 } }, jlcLib);
+  const layers = [
+    L("cladding", "siding"),
+    L("insulation", "foam"),
+    L("sheathing", "sheathing"),
+    L("insulation", "cavity"),
+    L("interior-finish", "gypsum"),
+  ];
+  return runSiteCheck(
+    { kind: "above-grade-wall", layers },
+    { zone: "5A", winter: { t_c: 0, rh: 80 }, indoor: { t_c: ((70 - 32) * 5) / 9, rh: 50 } },
+    jlcLib,
+  );
 }
 
 test("JLC wall A (1 in foam, R-7 of R-18 outboard): sheathing at 46.78 °F, below the indoor dew point, flagged — JLC 'Where does the dew drop' (docs/references.md §7.1, C)", () => {
@@ -124,5 +144,5 @@ test("JLC wall B (2 in foam, R-14 of R-25 outboard): sheathing at 53.28 °F, abo
 
 test("JLC indoor dew point 70 °F / 50 % ≈ 50 °F (chart; psychrolib 50.53 °F) — docs/references.md §7.1 (C) / §1.4 (D)", () => {
   const dp = jlcWall(5).profiles.winter.sourceDewPoint_c;
-  expect(dp * 9 / 5 + 32).toBeCloseTo(50.53, 1);
+  expect((dp * 9) / 5 + 32).toBeCloseTo(50.53, 1);
 });

@@ -1,10 +1,17 @@
 import { expect, test } from "vitest";
-import { DEFAULT_INDOOR_METHOD, INDOOR_METHODS, indoorHumidity, indoorMethodChoices, indoorTemperature } from "~/envelope/indoor-climate";
+import {
+  DEFAULT_INDOOR_METHOD,
+  INDOOR_METHODS,
+  indoorHumidity,
+  indoorMethodChoices,
+  indoorTemperature,
+} from "~/envelope/indoor-climate";
 import { resolveSite } from "~/envelope/climate";
 import { saturationPressure } from "~/envelope/psychrometrics";
 import { SiteCheckInputError } from "~/envelope/errors";
 
-const rhAt = (method: (typeof INDOOR_METHODS)[number], t: number, rh = 80, indoor = 21) => indoorHumidity(method, { t_c: t, rh }, indoor).rh;
+const rhAt = (method: (typeof INDOOR_METHODS)[number], t: number, rh = 80, indoor = 21) =>
+  indoorHumidity(method, { t_c: t, rh }, indoor).rh;
 
 test("ASHRAE 160 simplified method: 40 % at ≤ −10 °C, 70 % at ≥ 20 °C, linear between (ASHRAE 160-2016 §4.3.1.1, from memory)", () => {
   expect(rhAt("ashrae-160-simplified", -30)).toBe(40);
@@ -53,7 +60,11 @@ test("a chosen method sets the design-day indoor RH and the sentence that says s
 
 test("an unknown method is a field error", () => {
   expect(() => resolveSite({ zone: "5A", indoor: { method: "damp" as never } })).toThrow(SiteCheckInputError);
-  try { resolveSite({ zone: "5A", indoor: { method: "damp" as never } }); } catch (e) { expect((e as SiteCheckInputError).field).toBe("indoor.method"); }
+  try {
+    resolveSite({ zone: "5A", indoor: { method: "damp" as never } });
+  } catch (e) {
+    expect((e as SiteCheckInputError).field).toBe("indoor.method");
+  }
 });
 
 test("indoor temperature: heated to the heating set point, cooled to the cooling set point, free between", () => {

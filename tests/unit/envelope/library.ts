@@ -9,17 +9,25 @@ import { ripToRsi, permToNg } from "~/envelope/units";
 const DIR = join(process.cwd(), "content", "materials");
 
 export function loadLibrary(): ReadonlyMap<string, Material> {
-  const entries = readdirSync(DIR).filter((f) => f.endsWith(".yaml")).map((f) => parse(readFileSync(join(DIR, f), "utf8")) as unknown);
+  const entries = readdirSync(DIR)
+    .filter((f) => f.endsWith(".yaml"))
+    .map((f) => parse(readFileSync(join(DIR, f), "utf8")) as unknown);
   return buildMaterialLibrary(entries);
 }
 
 /** A fixture material with a fixed R (inch-pound) and a fixed permeance (US perm). */
 export function fixedMaterial(slug: string, rIp: number, perm: number, extra: Partial<Material> = {}): Material {
   return {
-    slug, name: slug, family: "membrane",
+    slug,
+    name: slug,
+    family: "membrane",
     thermal: { rsi_fixed: ripToRsi(rIp), source: "fixture, D" },
     vapour: { permeance_ng: permToNg(perm), source: "fixture, D" },
-    foam_plastic: false, water_sensitive: false, insect_risk: false, solvent_sensitive: false, vented_cladding: false,
+    foam_plastic: false,
+    water_sensitive: false,
+    insect_risk: false,
+    solvent_sensitive: false,
+    vented_cladding: false,
     ...extra,
   };
 }

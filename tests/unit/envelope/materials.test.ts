@@ -29,9 +29,16 @@ test("every slug listed in docs/content-format.md has a valid material file, and
 });
 
 test("the schema refuses a value without a status, and both conductivity and rsi_fixed", () => {
-  const base = parse(readFileSync(join(process.cwd(), "content", "materials", "xps-board.yaml"), "utf8")) as Record<string, Record<string, unknown>>;
-  expect(materialSchema.safeParse({ ...base, thermal: { conductivity_w_mk: 0.03, source: "a page" } }).success).toBe(false);
-  expect(materialSchema.safeParse({ ...base, thermal: { conductivity_w_mk: 0.03, rsi_fixed: 0, source: "x, M" } }).success).toBe(false);
+  const base = parse(readFileSync(join(process.cwd(), "content", "materials", "xps-board.yaml"), "utf8")) as Record<
+    string,
+    Record<string, unknown>
+  >;
+  expect(materialSchema.safeParse({ ...base, thermal: { conductivity_w_mk: 0.03, source: "a page" } }).success).toBe(
+    false,
+  );
+  expect(
+    materialSchema.safeParse({ ...base, thermal: { conductivity_w_mk: 0.03, rsi_fixed: 0, source: "x, M" } }).success,
+  ).toBe(false);
   expect(materialSchema.safeParse(base).success).toBe(true);
 });
 
@@ -63,14 +70,44 @@ test("wood bevel siding 1/2 in is RSI 0.14 — Çengel example layer (docs/refer
 test.each([
   ["xps-board", 25.4, 1.1, "III", "BSC Guide to Insulating Sheathing, 1.1 perm at 1 in (C2)"],
   ["xps-board", 50.8, 0.55, "II", "BSC Guide to Insulating Sheathing, 2 in XPS is Class II at 0.55 perm (C2)"],
-  ["polyethylene-sheet-6mil", 0.15, 0.06, "I", "IRC 2021 Table R702.7(1): sheet polyethylene is Class I (C); 0.06 perm ASHRAE (M — from memory)"],
-  ["polyethylene-sheet-10mil", 0.25, 0.03, "I", "ASHRAE HoF ch.26 Table 2 10 mil (M — from memory); Class I by R702.7(1) (C)"],
+  [
+    "polyethylene-sheet-6mil",
+    0.15,
+    0.06,
+    "I",
+    "IRC 2021 Table R702.7(1): sheet polyethylene is Class I (C); 0.06 perm ASHRAE (M — from memory)",
+  ],
+  [
+    "polyethylene-sheet-10mil",
+    0.25,
+    0.03,
+    "I",
+    "ASHRAE HoF ch.26 Table 2 10 mil (M — from memory); Class I by R702.7(1) (C)",
+  ],
   ["kraft-facing", 0.1, 0.4, "II", "IRC 2021 Table R702.7(1): kraft-faced batts are Class II (C)"],
   ["latex-paint", 0.1, 5, "III", "IRC 2021 Table R702.7(1): latex paint is Class III (C); 5 perm builder page (C2)"],
   ["polyiso-foil-faced", 50, 0.05, "I", "BSC Info-312, foil-faced polyiso ≤ 0.05 perm at any thickness (C2)"],
-  ["vapour-retarder-primer", 0.1, 0.6, "II", "IRC 2021 Table R702.7(1): vapour-retarder paint Class II (C); 0.6 perm (M — from memory)"],
-  ["cast-concrete", 203.2, 0.4, "II", "ASHRAE HoF ch.26 Table 2, 8 in concrete ≈ 0.4 perm (docs/references.md §5.2, M — from memory)"],
-  ["fibreglass-batt", 139.7, 21.1, "permeable", "116 perm-in → ≈ 21 perm at 5.5 in (docs/references.md §5.2, M — from memory)"],
+  [
+    "vapour-retarder-primer",
+    0.1,
+    0.6,
+    "II",
+    "IRC 2021 Table R702.7(1): vapour-retarder paint Class II (C); 0.6 perm (M — from memory)",
+  ],
+  [
+    "cast-concrete",
+    203.2,
+    0.4,
+    "II",
+    "ASHRAE HoF ch.26 Table 2, 8 in concrete ≈ 0.4 perm (docs/references.md §5.2, M — from memory)",
+  ],
+  [
+    "fibreglass-batt",
+    139.7,
+    21.1,
+    "permeable",
+    "116 perm-in → ≈ 21 perm at 5.5 in (docs/references.md §5.2, M — from memory)",
+  ],
   ["polymeric-housewrap", 0.2, 35, "permeable", "housewrap 35 perm builder page (docs/references.md §5.2, C2)"],
 ])("%s at %s mm: %s perm, Class %s — %s", (slug, mm, p, cls) => {
   expect(perm(slug, mm)).toBeCloseTo(p, 1);

@@ -11,7 +11,11 @@ import type { MaterialFamily } from "~/envelope/material-schema";
 import type { ClimateYear, LayerInput, MonthInput } from "~/envelope/types";
 import { fixedRsiMaterial, libraryOf, loadLibrary } from "./library";
 
-interface PsychroLib { SetUnitSystem(u: unknown): void; SI: unknown; GetSatVapPres(t: number): number }
+interface PsychroLib {
+  SetUnitSystem(u: unknown): void;
+  SI: unknown;
+  GetSatVapPres(t: number): number;
+}
 const psychrolib = createRequire(import.meta.url)("psychrolib") as PsychroLib;
 psychrolib.SetUnitSystem(psychrolib.SI);
 
@@ -19,11 +23,17 @@ psychrolib.SetUnitSystem(psychrolib.SI);
 const layerMaterial = (slug: string, rsi: number, perm: number, family: MaterialFamily = "membrane") =>
   fixedRsiMaterial(slug, rsi, { family, vapour: { permeance_ng: perm, source: "fixture, D" } });
 
-const twoLayer = libraryOf(layerMaterial("outer-board", 0.5, 10), layerMaterial("fill", 3.0, 500, "fibrous-insulation"));
-const twoLayerWall = { kind: "above-grade-wall" as const, layers: [
-  { role: "sheathing", material: "outer-board", thickness_mm: 10 },
-  { role: "insulation", material: "fill", thickness_mm: 100 },
-] };
+const twoLayer = libraryOf(
+  layerMaterial("outer-board", 0.5, 10),
+  layerMaterial("fill", 3.0, 500, "fibrous-insulation"),
+);
+const twoLayerWall = {
+  kind: "above-grade-wall" as const,
+  layers: [
+    { role: "sheathing", material: "outer-board", thickness_mm: 10 },
+    { role: "insulation", material: "fill", thickness_mm: 100 },
+  ],
+};
 
 const year = (months: MonthInput[]) => ({ months });
 /** The 12-month balance of a full site check (runSiteCheck runs it unless told not to). */
@@ -54,8 +64,14 @@ describe("two-layer wall, hand-derived accumulation (D: derived here, p_sat from
   const sat = (t: number) => psychrolib.GetSatVapPres(t);
   const f = (0.17 / 5.678263 + 0.5) / (0.17 / 5.678263 + 0.68 / 5.678263 + 3.5);
   const pI = 0.5 * sat(20);
-  const coldRate = (() => { const p = sat(-5 + 25 * f); return ((pI - p) / 2e9 - (p - 0.8 * sat(-5)) / 1e11) * 86400 * 1000; })();
-  const dryRate = (() => { const p = sat(15 + 5 * f); return ((p - pI) / 2e9 + (p - 0.7 * sat(15)) / 1e11) * 86400 * 1000; })();
+  const coldRate = (() => {
+    const p = sat(-5 + 25 * f);
+    return ((pI - p) / 2e9 - (p - 0.8 * sat(-5)) / 1e11) * 86400 * 1000;
+  })();
+  const dryRate = (() => {
+    const p = sat(15 + 5 * f);
+    return ((p - pI) / 2e9 + (p - 0.7 * sat(15)) / 1e11) * 86400 * 1000;
+  })();
 
   test("the hand figures themselves", () => {
     expect(coldRate).toBeCloseTo(26.753, 3);
@@ -95,7 +111,11 @@ test("the design day alone, on request, carries no seasonal balance", () => {
 });
 
 test("no condensing month: verdict no-condensation, nothing held, positive margins", () => {
-  const r = seasonalOf(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 20 }, year: year(Array(12).fill(mild)) }, twoLayer);
+  const r = seasonalOf(
+    twoLayerWall,
+    { zone: "5A", indoor: { t_c: 20, rh: 20 }, year: year(Array(12).fill(mild)) },
+    twoLayer,
+  );
   expect(r.verdict).toBe("no-condensation");
   expect(r.startMonth).toBeNull();
   expect(r.peak_g_m2).toBe(0);
@@ -106,7 +126,11 @@ describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 
   // f_Rsi = (R_T − Rsi)/R_T with R_T = 0.25 + 0.5 + 3.0 + 0.04 = 3.79 → 0.93404 (hand-derived, D).
   // January: indoor 20 °C / 50 % (1169.40 Pa); the surface may reach 1169.40/0.8 = 1461.75 Pa, whose dew
   // point is 12.628 °C (psychrolib GetTDewPointFromVapPres); f_Rsi,min = (12.628 − (−5))/25 = 0.7051.
-  const r = seasonalOf(twoLayerWall, { zone: "5A", indoor: { t_c: 20, rh: 50 }, year: year([cold, cold, ...Array(10).fill(mild)]) }, twoLayer);
+  const r = seasonalOf(
+    twoLayerWall,
+    { zone: "5A", indoor: { t_c: 20, rh: 50 }, year: year([cold, cold, ...Array(10).fill(mild)]) },
+    twoLayer,
+  );
   test("temperature factor of the plane wall and the month that asks most", () => {
     expect(r.surface.fRsi).toBeCloseTo(3.54 / 3.79, 5);
     expect(r.surface.fRsiMax).toBeCloseTo(0.7051, 3);
@@ -115,14 +139,22 @@ describe("interior-surface mould check, ISO 13788:2012 §5 (Rsi 0.25, Rse 0.04, 
   });
   test("a thin uninsulated layer in a humid room fails", () => {
     const lib = libraryOf(layerMaterial("thin", 0.05, 10));
-    const bad = seasonalOf({ kind: "above-grade-wall", layers: [{ role: "structure", material: "thin", thickness_mm: 10 }] }, { zone: "5A", indoor: { t_c: 20, rh: 60 }, year: year(Array(12).fill(cold)) }, lib);
+    const bad = seasonalOf(
+      { kind: "above-grade-wall", layers: [{ role: "structure", material: "thin", thickness_mm: 10 }] },
+      { zone: "5A", indoor: { t_c: 20, rh: 60 }, year: year(Array(12).fill(cold)) },
+      lib,
+    );
     expect(bad.surface.fRsi).toBeCloseTo(0.09 / 0.34, 5);
     expect(bad.surface.pass).toBe(false);
   });
 });
 
 test("months carry the indoor conditions actually used, by the site's indoor method (ASHRAE 160 simplified default)", () => {
-  const r = seasonalOf(twoLayerWall, { zone: "5A", year: year([{ t_c: -12, rh: 80 }, { t_c: 5, rh: 70 }, ...Array(10).fill({ t_c: 25, rh: 60 })]) }, twoLayer);
+  const r = seasonalOf(
+    twoLayerWall,
+    { zone: "5A", year: year([{ t_c: -12, rh: 80 }, { t_c: 5, rh: 70 }, ...Array(10).fill({ t_c: 25, rh: 60 })]) },
+    twoLayer,
+  );
   expect(r.indoorMethod).toBe("ashrae-160-simplified");
   expect(r.months[0].indoor).toMatchObject({ t_c: 21, rh: 40 });
   expect(r.months[1].indoor.rh).toBeCloseTo(55, 9);
@@ -133,59 +165,92 @@ test("months carry the indoor conditions actually used, by the site's indoor met
 
 describe("properties (fast-check)", () => {
   const lib = libraryOf(
-    layerMaterial("a", 0.1, 40), layerMaterial("b", 0.6, 800, "wood-panel"), layerMaterial("c", 2.5, 2000, "fibrous-insulation"),
-    layerMaterial("d", 0.08, 300, "gypsum"), layerMaterial("e", 0, 3),
+    layerMaterial("a", 0.1, 40),
+    layerMaterial("b", 0.6, 800, "wood-panel"),
+    layerMaterial("c", 2.5, 2000, "fibrous-insulation"),
+    layerMaterial("d", 0.08, 300, "gypsum"),
+    layerMaterial("e", 0, 3),
   );
-  const layerArb = fc.constantFrom("a", "b", "c", "d", "e").map((material): LayerInput => ({ role: "insulation", material, thickness_mm: 10 }));
-  const wallArb = fc.array(layerArb, { minLength: 2, maxLength: 6 }).map((layers) => ({ kind: "above-grade-wall" as const, layers }));
-  const monthArb = fc.record({ t_c: fc.double({ min: -30, max: 30, noNaN: true }), rh: fc.double({ min: 20, max: 100, noNaN: true }) });
-  const indoorArb = fc.record({ t_c: fc.double({ min: 18, max: 24, noNaN: true }), rh: fc.double({ min: 20, max: 70, noNaN: true }) });
+  const layerArb = fc
+    .constantFrom("a", "b", "c", "d", "e")
+    .map((material): LayerInput => ({ role: "insulation", material, thickness_mm: 10 }));
+  const wallArb = fc
+    .array(layerArb, { minLength: 2, maxLength: 6 })
+    .map((layers) => ({ kind: "above-grade-wall" as const, layers }));
+  const monthArb = fc.record({
+    t_c: fc.double({ min: -30, max: 30, noNaN: true }),
+    rh: fc.double({ min: 20, max: 100, noNaN: true }),
+  });
+  const indoorArb = fc.record({
+    t_c: fc.double({ min: 18, max: 24, noNaN: true }),
+    rh: fc.double({ min: 20, max: 70, noNaN: true }),
+  });
 
   // Heating season: outdoors colder than indoors, so the indoor temperature is the set point the
   // design-day case uses.
-  const heatingMonthArb = fc.record({ t_c: fc.double({ min: -30, max: 15, noNaN: true }), rh: fc.double({ min: 20, max: 100, noNaN: true }) });
+  const heatingMonthArb = fc.record({
+    t_c: fc.double({ min: -30, max: 15, noNaN: true }),
+    rh: fc.double({ min: 20, max: 100, noNaN: true }),
+  });
   test("a constant heating-season climate condenses every month at the design-day winter rate (the design-day Glaser result)", () => {
-    fc.assert(fc.property(wallArb, heatingMonthArb, indoorArb, (wall, m, indoor) => {
-      const input = { zone: "5A", winter: m, indoor: { ...indoor, summer_t_c: 30 }, year: year(Array(12).fill(m)) };
-      const r = { seasonal: seasonalOf(wall, input, lib) };
-      const design = computeProfile(resolveAssembly(wall, lib), winterCase(resolveAssembly(wall, lib), resolveSite(input))).rate_g_m2_day;
-      for (const month of r.seasonal.months) {
-        expect(month.condensed_g_m2 / month.days).toBeCloseTo(design, 6);
-        expect(month.evaporated_g_m2).toBe(0);
-      }
-      expect(r.seasonal.verdict).toBe(design > 1e-6 ? "accumulates" : "no-condensation");
-    }), { numRuns: 150 });
+    fc.assert(
+      fc.property(wallArb, heatingMonthArb, indoorArb, (wall, m, indoor) => {
+        const input = { zone: "5A", winter: m, indoor: { ...indoor, summer_t_c: 30 }, year: year(Array(12).fill(m)) };
+        const r = { seasonal: seasonalOf(wall, input, lib) };
+        const design = computeProfile(
+          resolveAssembly(wall, lib),
+          winterCase(resolveAssembly(wall, lib), resolveSite(input)),
+        ).rate_g_m2_day;
+        for (const month of r.seasonal.months) {
+          expect(month.condensed_g_m2 / month.days).toBeCloseTo(design, 6);
+          expect(month.evaporated_g_m2).toBe(0);
+        }
+        expect(r.seasonal.verdict).toBe(design > 1e-6 ? "accumulates" : "no-condensation");
+      }),
+      { numRuns: 150 },
+    );
   });
 
   test("water held is never negative, and condensed minus evaporated equals what is held", () => {
-    fc.assert(fc.property(wallArb, fc.array(monthArb, { minLength: 12, maxLength: 12 }), indoorArb, (wall, months, indoor) => {
-      const r = seasonalOf(wall, { zone: "5A", indoor, year: year(months) }, lib);
-      if (r.startMonth === null) return;
-      let balance = 0;
-      for (let step = 0; step < 12; step++) {
-        const m = r.months[(r.startMonth - 1 + step) % 12];
-        expect(m.accumulated_g_m2).toBeGreaterThanOrEqual(0);
-        for (const i of m.interfaces) expect(i.accumulated_g_m2).toBeGreaterThanOrEqual(0);
-        expect(m.condensed_g_m2).toBeGreaterThanOrEqual(0);
-        expect(m.evaporated_g_m2).toBeGreaterThanOrEqual(0);
-        balance += m.condensed_g_m2 - m.evaporated_g_m2;
-        expect(m.accumulated_g_m2).toBeCloseTo(balance, 6);
-      }
-      expect(r.endOfYear_g_m2).toBeCloseTo(balance, 6);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(wallArb, fc.array(monthArb, { minLength: 12, maxLength: 12 }), indoorArb, (wall, months, indoor) => {
+        const r = seasonalOf(wall, { zone: "5A", indoor, year: year(months) }, lib);
+        if (r.startMonth === null) return;
+        let balance = 0;
+        for (let step = 0; step < 12; step++) {
+          const m = r.months[(r.startMonth - 1 + step) % 12];
+          expect(m.accumulated_g_m2).toBeGreaterThanOrEqual(0);
+          for (const i of m.interfaces) expect(i.accumulated_g_m2).toBeGreaterThanOrEqual(0);
+          expect(m.condensed_g_m2).toBeGreaterThanOrEqual(0);
+          expect(m.evaporated_g_m2).toBeGreaterThanOrEqual(0);
+          balance += m.condensed_g_m2 - m.evaporated_g_m2;
+          expect(m.accumulated_g_m2).toBeCloseTo(balance, 6);
+        }
+        expect(r.endOfYear_g_m2).toBeCloseTo(balance, 6);
+      }),
+      { numRuns: 200 },
+    );
   });
 });
 
 describe("variable-permeance retarder at each month's humidity (real library)", () => {
   const lib = loadLibrary();
-  const wall = (retarder: string): { kind: "above-grade-wall"; layers: LayerInput[] } => ({ kind: "above-grade-wall", layers: [
-    { role: "cladding", material: "fibre-cement-lap-siding", thickness_mm: 8 },
-    { role: "water-resistive-barrier", material: "polymeric-housewrap", thickness_mm: 0.2 },
-    { role: "sheathing", material: "osb", thickness_mm: 11 },
-    { role: "insulation", material: "fibreglass-batt", thickness_mm: 140, framing: { material: "softwood-lumber", fraction: 0.23 } },
-    { role: "vapour-retarder", material: retarder, thickness_mm: 0.2 },
-    { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
-  ] });
+  const wall = (retarder: string): { kind: "above-grade-wall"; layers: LayerInput[] } => ({
+    kind: "above-grade-wall",
+    layers: [
+      { role: "cladding", material: "fibre-cement-lap-siding", thickness_mm: 8 },
+      { role: "water-resistive-barrier", material: "polymeric-housewrap", thickness_mm: 0.2 },
+      { role: "sheathing", material: "osb", thickness_mm: 11 },
+      {
+        role: "insulation",
+        material: "fibreglass-batt",
+        thickness_mm: 140,
+        framing: { material: "softwood-lumber", fraction: 0.23 },
+      },
+      { role: "vapour-retarder", material: retarder, thickness_mm: 0.2 },
+      { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
+    ],
+  });
   const site = { zone: "6A", hdd18: 4500, cdd10: 900 };
   test("it holds less winter water than no retarder, and the months record what was used", () => {
     const open = seasonalOf(wall("latex-paint"), site, lib);
@@ -209,11 +274,19 @@ test("a typed year and a CSV year give the same balance", () => {
 
 test("below grade: the soil face is saturated at the ground temperature all year", () => {
   const lib = loadLibrary();
-  const wall = { kind: "basement-wall" as const, layers: [
-    { role: "structure", material: "cast-concrete", thickness_mm: 200 },
-    { role: "insulation", material: "fibreglass-batt", thickness_mm: 89, framing: { material: "softwood-lumber", fraction: 0.15 } },
-    { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
-  ] };
+  const wall = {
+    kind: "basement-wall" as const,
+    layers: [
+      { role: "structure", material: "cast-concrete", thickness_mm: 200 },
+      {
+        role: "insulation",
+        material: "fibreglass-batt",
+        thickness_mm: 89,
+        framing: { material: "softwood-lumber", fraction: 0.15 },
+      },
+      { role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 },
+    ],
+  };
   const r = seasonalOf(wall, { zone: "6A", hdd18: 4500, cdd10: 900 }, lib);
   const y: ClimateYear = r.climate;
   expect(y.months).toHaveLength(12);

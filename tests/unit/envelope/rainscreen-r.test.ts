@@ -14,7 +14,14 @@ const lib = libraryOf(
   fixedMaterial("gypsum-painted", 0.45, 5.0, { family: "gypsum" }),
 );
 const L = (role: string, material: string): LayerInput => ({ role, material, thickness_mm: 10 });
-const layers = [L("cladding", "siding"), L("drainage-gap", "cavity"), L("water-resistive-barrier", "housewrap"), L("sheathing", "osb"), L("insulation", "batt"), L("interior-finish", "gypsum-painted")];
+const layers = [
+  L("cladding", "siding"),
+  L("drainage-gap", "cavity"),
+  L("water-resistive-barrier", "housewrap"),
+  L("sheathing", "osb"),
+  L("insulation", "batt"),
+  L("interior-finish", "gypsum-painted"),
+];
 
 test("rainscreen wall R: siding and cavity do not count, still-air film R-0.68 â€” R-23.43 (hand derivation)", () => {
   // 0.68 (still air in the cavity) + 0 + 0.62 + 21 + 0.45 + 0.68 (inside) = 23.43; counting the siding,
@@ -27,6 +34,10 @@ test("rainscreen wall R: siding and cavity do not count, still-air film R-0.68 â
 
 test("the same wall without a ventilated cavity counts the siding and the outdoor film: R-23.92 (hand derivation)", () => {
   // 0.17 + 1 + 0 + 0.62 + 21 + 0.45 + 0.68 = 23.92
-  const t = runSiteCheck({ kind: "above-grade-wall", layers: layers.filter((l) => l.material !== "cavity") }, { zone: "5A" }, lib).thermal;
+  const t = runSiteCheck(
+    { kind: "above-grade-wall", layers: layers.filter((l) => l.material !== "cavity") },
+    { zone: "5A" },
+    lib,
+  ).thermal;
   expect(t.r_ip).toBeCloseTo(23.92, 2);
 });

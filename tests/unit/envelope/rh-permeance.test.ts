@@ -8,7 +8,17 @@ import { fixedMaterial, libraryOf } from "./library";
 // The docs/references.md §7.2 wall (D), which condenses at the OSB in winter, with a humidity-dependent
 // retarder inboard of the batt: 1 perm at 25 % mean RH, 20 perm at 75 % (a variable-permeance
 // membrane's shape, docs/references.md §5.2, M).
-const vr: Material = { ...fixedMaterial("vr", 0, 1), vapour: { permeance_ng: 57.2, curve: [[25, 57.2], [75, 1144]], source: "fixture, D" } };
+const vr: Material = {
+  ...fixedMaterial("vr", 0, 1),
+  vapour: {
+    permeance_ng: 57.2,
+    curve: [
+      [25, 57.2],
+      [75, 1144],
+    ],
+    source: "fixture, D",
+  },
+};
 const lib = libraryOf(
   fixedMaterial("housewrap", 0, 50),
   fixedMaterial("osb", 0.62, 1.0, { family: "wood-panel", water_sensitive: true }),
@@ -17,7 +27,13 @@ const lib = libraryOf(
   fixedMaterial("gypsum-painted", 0.45, 5.0, { family: "gypsum" }),
 );
 const L = (role: string, material: string): LayerInput => ({ role, material, thickness_mm: 10 });
-const layers = [L("water-resistive-barrier", "housewrap"), L("sheathing", "osb"), L("insulation", "batt"), L("vapour-retarder", "vr"), L("interior-finish", "gypsum-painted")];
+const layers = [
+  L("water-resistive-barrier", "housewrap"),
+  L("sheathing", "osb"),
+  L("insulation", "batt"),
+  L("vapour-retarder", "vr"),
+  L("interior-finish", "gypsum-painted"),
+];
 const site = { zone: "5A", winter: { t_c: -10, rh: 80 }, indoor: { t_c: 21, rh: 50 } };
 
 const meanRh = (a: number, b: number) => (Math.min(100, a) + Math.min(100, b)) / 2;
@@ -30,7 +46,11 @@ test("the retarder's permeance is the one at the mean RH of its faces on the con
   expect(Math.abs(w.vapourLayers[3].case_perm_ng - atCorrected) / atCorrected).toBeLessThan(0.005);
   // On the straight (uncondensed) line the same layer would read a different permeance: the
   // correction matters here.
-  const atLinear = permeanceAtRh(vr, 10, meanRh((100 * outer.p_v_linear_pa) / outer.p_sat_pa, (100 * inner.p_v_linear_pa) / inner.p_sat_pa));
+  const atLinear = permeanceAtRh(
+    vr,
+    10,
+    meanRh((100 * outer.p_v_linear_pa) / outer.p_sat_pa, (100 * inner.p_v_linear_pa) / inner.p_sat_pa),
+  );
   expect(Math.abs(atLinear - atCorrected) / atCorrected).toBeGreaterThan(0.02);
 });
 

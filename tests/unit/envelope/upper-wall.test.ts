@@ -9,7 +9,10 @@ const lib = libraryOf(
   fixedMaterial("gypsum-painted", 0.45, 5.0, { family: "gypsum" }),
 );
 const L = (role: string, material: string): LayerInput => ({ role, material, thickness_mm: 10 });
-const wall = { kind: "basement-wall" as const, layers: [L("structure", "concrete"), L("insulation", "batt"), L("interior-finish", "gypsum-painted")] };
+const wall = {
+  kind: "basement-wall" as const,
+  layers: [L("structure", "concrete"), L("insulation", "batt"), L("interior-finish", "gypsum-painted")],
+};
 const site = { zone: "6A", winter: { t_c: -20, rh: 80 }, indoor: { t_c: 20, rh: 40 }, ground_t_c: 10 };
 
 test("a basement wall is checked above grade (outdoor air, film R-0.17): concrete / batt at −17.83 °C (hand derivation)", () => {

@@ -29,7 +29,8 @@ test("pack requests accept only known units and climate zones", () => {
 });
 
 test("the cautions of a body become one plain sentence per bullet", () => {
-  const body = "## Why it works\n\nText.\n\n## Cautions\n\n- Keep **foam** covered,\n  inside and out.\n- Drain the footing.\n\n## References\n";
+  const body =
+    "## Why it works\n\nText.\n\n## Cautions\n\n- Keep **foam** covered,\n  inside and out.\n- Drain the footing.\n\n## References\n";
   expect(cautionsOf(body)).toEqual(["Keep foam covered, inside and out.", "Drain the footing."]);
 });
 

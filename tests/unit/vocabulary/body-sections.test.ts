@@ -1,6 +1,11 @@
 import { expect, test } from "vitest";
 import {
-  BODY_SECTION_HEADINGS, REQUIRED_BODY_SECTIONS, bodySection, bodySections, missingBodySections, sameSectionName,
+  BODY_SECTION_HEADINGS,
+  REQUIRED_BODY_SECTIONS,
+  bodySection,
+  bodySections,
+  missingBodySections,
+  sameSectionName,
 } from "~/vocabulary/body-sections";
 
 const BODY = [
@@ -34,8 +39,14 @@ test("every detail body carries three sections, in this order (docs/design.md, A
 });
 
 test("sections are the level-2 headings, read from Markdown tokens (a heading in a code block is not one)", () => {
-  expect(bodySections(BODY).map((section) => section.heading)).toEqual(["Why it works", "Install sequence", "Cautions"]);
-  expect(bodySection(BODY, "Why it works")).toBe("Exterior foam keeps the sheathing warm.\n\n### A note\n\nSub-headings stay inside their section.");
+  expect(bodySections(BODY).map((section) => section.heading)).toEqual([
+    "Why it works",
+    "Install sequence",
+    "Cautions",
+  ]);
+  expect(bodySection(BODY, "Why it works")).toBe(
+    "Exterior foam keeps the sheathing warm.\n\n### A note\n\nSub-headings stay inside their section.",
+  );
   expect(bodySection(BODY, "Install sequence")).toContain("## not a heading inside a code block");
   expect(bodySection(BODY, "Cautions")).toBe("- Keep the foam covered.");
   expect(bodySection(BODY, "References")).toBe("");
@@ -54,6 +65,9 @@ test("one case rule: headings match ignoring letter case and extra spaces, nothi
 test("the missing sections are named in the required order; deeper or shallower headings do not count", () => {
   expect(missingBodySections(BODY)).toEqual([]);
   expect(missingBodySections("")).toEqual(["Why it works", "Install sequence", "Cautions"]);
-  expect(missingBodySections("# Why it works\n\n### Install sequence\n\n## Cautions\n")).toEqual(["Why it works", "Install sequence"]);
+  expect(missingBodySections("# Why it works\n\n### Install sequence\n\n## Cautions\n")).toEqual([
+    "Why it works",
+    "Install sequence",
+  ]);
   expect(missingBodySections("```\n## Cautions\n```\n## Why it works\n## Install sequence\n")).toEqual(["Cautions"]);
 });

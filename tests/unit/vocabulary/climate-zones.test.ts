@@ -1,8 +1,15 @@
 import { expect, test } from "vitest";
 import { regimeBit, regimeMask, zoneBit, zoneMask } from "~/catalogue/zone-mask";
 import {
-  CLIMATE_ZONE_IDS, FEATURED_ZONES, MOISTURE_REGIMES, MOISTURE_REGIME_LABELS, isClimateZoneId, isMoistureRegime, moistureRegime,
-  zoneLabel, zoneNumber,
+  CLIMATE_ZONE_IDS,
+  FEATURED_ZONES,
+  MOISTURE_REGIMES,
+  MOISTURE_REGIME_LABELS,
+  isClimateZoneId,
+  isMoistureRegime,
+  moistureRegime,
+  zoneLabel,
+  zoneNumber,
 } from "~/vocabulary/climate-zones";
 
 // The zone list is ASHRAE 169-2013 / IECC 2021 R301 (docs/references.md §6.3): thermal zones 0–8,
@@ -12,11 +19,19 @@ import {
 
 test("zones run 0 to 8, and each number has the regimes the standard gives it (ASHRAE 169-2013 / IECC 2021 R301, from memory)", () => {
   const byNumber = new Map<number, string[]>();
-  for (const zone of CLIMATE_ZONE_IDS) byNumber.set(zoneNumber(zone), [...(byNumber.get(zoneNumber(zone)) ?? []), zone]);
+  for (const zone of CLIMATE_ZONE_IDS)
+    byNumber.set(zoneNumber(zone), [...(byNumber.get(zoneNumber(zone)) ?? []), zone]);
   expect([...byNumber.keys()]).toEqual([0, 1, 2, 3, 4, 5, 6, 7, 8]);
   expect(Object.fromEntries(byNumber)).toEqual({
-    0: ["0A", "0B"], 1: ["1A", "1B"], 2: ["2A", "2B"], 3: ["3A", "3B", "3C"], 4: ["4A", "4B", "4C"],
-    5: ["5A", "5B", "5C"], 6: ["6A", "6B"], 7: ["7"], 8: ["8"],
+    0: ["0A", "0B"],
+    1: ["1A", "1B"],
+    2: ["2A", "2B"],
+    3: ["3A", "3B", "3C"],
+    4: ["4A", "4B", "4C"],
+    5: ["5A", "5B", "5C"],
+    6: ["6A", "6B"],
+    7: ["7"],
+    8: ["8"],
   });
 });
 
@@ -31,7 +46,27 @@ test("every zone has a moisture regime, or is 7 or 8 and has none (IECC 2021 R30
 
 test("the bit order of stored zone and regime masks never changes (details.zone_mask / regime_mask as backfilled)", () => {
   // These are the meanings of bits already stored in the database; a new zone goes at the end.
-  const storedZoneOrder = ["0A", "0B", "1A", "1B", "2A", "2B", "3A", "3B", "3C", "4A", "4B", "4C", "5A", "5B", "5C", "6A", "6B", "7", "8"];
+  const storedZoneOrder = [
+    "0A",
+    "0B",
+    "1A",
+    "1B",
+    "2A",
+    "2B",
+    "3A",
+    "3B",
+    "3C",
+    "4A",
+    "4B",
+    "4C",
+    "5A",
+    "5B",
+    "5C",
+    "6A",
+    "6B",
+    "7",
+    "8",
+  ];
   expect(CLIMATE_ZONE_IDS).toEqual(storedZoneOrder);
   expect(zoneBit("0A")).toBe(1);
   expect(zoneBit("5A")).toBe(2 ** 12);
@@ -46,7 +81,8 @@ test("the bit order of stored zone and regime masks never changes (details.zone_
 
 test("the type guards accept exactly the listed ids", () => {
   for (const zone of CLIMATE_ZONE_IDS) expect(isClimateZoneId(zone)).toBe(true);
-  for (const junk of ["5", "6C", "9A", "5a", " 5A", "", null, undefined, 5]) expect(isClimateZoneId(junk), String(junk)).toBe(false);
+  for (const junk of ["5", "6C", "9A", "5a", " 5A", "", null, undefined, 5])
+    expect(isClimateZoneId(junk), String(junk)).toBe(false);
   expect(MOISTURE_REGIMES.every(isMoistureRegime)).toBe(true);
   expect(isMoistureRegime("D")).toBe(false);
 });

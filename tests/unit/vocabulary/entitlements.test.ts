@@ -1,5 +1,11 @@
 import { expect, test } from "vitest";
-import { ENTITLEMENT_KINDS, ENTITLEMENT_STATUSES, ENTITLEMENT_STATUS_LABELS, LIVE_ENTITLEMENT_STATUSES, isLive } from "~/vocabulary/entitlements";
+import {
+  ENTITLEMENT_KINDS,
+  ENTITLEMENT_STATUSES,
+  ENTITLEMENT_STATUS_LABELS,
+  LIVE_ENTITLEMENT_STATUSES,
+  isLive,
+} from "~/vocabulary/entitlements";
 import { LIVE_ENTITLEMENT_SQL } from "~/vocabulary/entitlements.server";
 
 const end = new Date("2026-12-31T00:00:00.000Z");

@@ -1,7 +1,13 @@
 import { expect, test } from "vitest";
 import {
-  EDITABLE_REVISION_STATES, OPEN_REVISION_STATES, PUBLIC_REVISION_STATES, REVISION_STATES, REVISION_STATE_LABELS,
-  isEditableRevisionState, isOpenRevisionState, isRevisionState,
+  EDITABLE_REVISION_STATES,
+  OPEN_REVISION_STATES,
+  PUBLIC_REVISION_STATES,
+  REVISION_STATES,
+  REVISION_STATE_LABELS,
+  isEditableRevisionState,
+  isOpenRevisionState,
+  isRevisionState,
 } from "~/vocabulary/revision-states";
 
 test("the states a revision passes through, as the database column lists them", () => {

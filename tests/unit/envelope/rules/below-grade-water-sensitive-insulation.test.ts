@@ -8,8 +8,13 @@ test("fibreglass batts against a basement wall: stop — common practice (docs/r
 });
 
 test("must not fire: a mineral-wool stud wall inside taped XPS on the concrete (the foam keeps the concrete's moisture off it)", () => {
-  const a = of("basement-wall", layer("soil-side-protection", "bituminous-dampproofing", 1.5), layer("structure", "cast-concrete", 200),
+  const a = of(
+    "basement-wall",
+    layer("soil-side-protection", "bituminous-dampproofing", 1.5),
+    layer("structure", "cast-concrete", 200),
     layer("insulation", "xps-board", 50.8, { joints: "taped" }),
-    layer("insulation", "mineral-wool-batt", 88.9, { framing: { material: "softwood-lumber", fraction: 0.2 } }), gyp);
+    layer("insulation", "mineral-wool-batt", 88.9, { framing: { material: "softwood-lumber", fraction: 0.2 } }),
+    gyp,
+  );
   expect(flag(a, ID)).toBeUndefined();
 });

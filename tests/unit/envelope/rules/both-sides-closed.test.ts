@@ -3,8 +3,13 @@ import { batt140, flag, gyp, layer, paint, wall } from "./fixtures";
 
 const ID = "both-sides-closed";
 const closed = wall(
-  layer("cladding", "vinyl-siding", 1), layer("insulation", "polyiso-foil-faced", 25.4), layer("sheathing", "osb", 11.1), batt140,
-  layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15), gyp, paint,
+  layer("cladding", "vinyl-siding", 1),
+  layer("insulation", "polyiso-foil-faced", 25.4),
+  layer("sheathing", "osb", 11.1),
+  batt140,
+  layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15),
+  gyp,
+  paint,
 );
 
 test("foil-faced foam outside and poly inside in dry 6B: closed on both sides, caution — common practice", () => {

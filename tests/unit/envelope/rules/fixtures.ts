@@ -4,9 +4,18 @@ import type { AssemblyInput, Flag, LayerInput, SiteInput } from "~/envelope/type
 import { loadLibrary } from "../library";
 
 export const lib = loadLibrary();
-export const layer = (role: string, material: string, thickness_mm: number, extra: Partial<LayerInput> = {}): LayerInput => ({ role, material, thickness_mm, ...extra });
-export const batt140 = layer("insulation", "fibreglass-batt", 139.7, { framing: { material: "softwood-lumber", fraction: 0.23 } });
-export const batt89 = layer("insulation", "fibreglass-batt", 88.9, { framing: { material: "softwood-lumber", fraction: 0.23 } });
+export const layer = (
+  role: string,
+  material: string,
+  thickness_mm: number,
+  extra: Partial<LayerInput> = {},
+): LayerInput => ({ role, material, thickness_mm, ...extra });
+export const batt140 = layer("insulation", "fibreglass-batt", 139.7, {
+  framing: { material: "softwood-lumber", fraction: 0.23 },
+});
+export const batt89 = layer("insulation", "fibreglass-batt", 88.9, {
+  framing: { material: "softwood-lumber", fraction: 0.23 },
+});
 export const gyp = layer("interior-finish", "gypsum-board", 12.7);
 export const paint = layer("interior-finish", "latex-paint", 0.1);
 export const wall = (...layers: LayerInput[]): AssemblyInput => ({ kind: "above-grade-wall", layers });

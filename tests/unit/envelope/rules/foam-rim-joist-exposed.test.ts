@@ -2,7 +2,13 @@ import { expect, test } from "vitest";
 import { flag, layer, of } from "./fixtures";
 
 const ID = "foam-rim-joist-exposed";
-const rim = (mm: number) => of("rim-joist", layer("sheathing", "osb", 11.1), layer("structure", "softwood-lumber", 38), layer("insulation", "closed-cell-spray-foam", mm));
+const rim = (mm: number) =>
+  of(
+    "rim-joist",
+    layer("sheathing", "osb", 11.1),
+    layer("structure", "softwood-lumber", 38),
+    layer("insulation", "closed-cell-spray-foam", mm),
+  );
 
 test("75 mm of exposed spray foam at a rim joist: note — IRC 2018 R316.5.11 (C)", () => {
   expect(flag(rim(75), ID)?.severity).toBe("note");

@@ -2,8 +2,13 @@ import { expect, test } from "vitest";
 import { batt140, flag, gyp, layer, paint, wall } from "./fixtures";
 
 const sandwich = wall(
-  layer("cladding", "vinyl-siding", 1), layer("insulation", "polyiso-foil-faced", 25.4), layer("sheathing", "osb", 11.1), batt140,
-  layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15), gyp, paint,
+  layer("cladding", "vinyl-siding", 1),
+  layer("insulation", "polyiso-foil-faced", 25.4),
+  layer("sheathing", "osb", 11.1),
+  batt140,
+  layer("vapour-retarder", "polyethylene-sheet-6mil", 0.15),
+  gyp,
+  paint,
 );
 const ID = "interior-sheet-with-closed-exterior";
 

@@ -16,6 +16,9 @@ test("must not fire: two cold months, then ten mild ones dry it out by April (ha
 });
 
 test("must not fire when the caller asked for the design day only (no balance to judge)", () => {
-  const wall = { kind: "above-grade-wall" as const, layers: [{ role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 }] };
+  const wall = {
+    kind: "above-grade-wall" as const,
+    layers: [{ role: "interior-finish", material: "gypsum-board", thickness_mm: 12.7 }],
+  };
   expect(runSiteCheck(wall, { zone: "7" }, lib, { seasonal: false }).flags.some((f) => f.id === ID)).toBe(false);
 });

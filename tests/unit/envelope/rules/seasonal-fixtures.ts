@@ -13,11 +13,17 @@ export const mild: MonthInput = { t_c: 15, rh: 70 };
 
 /** The flag with this id for the two-layer wall (fill RSI as given) over the year of months. */
 export function seasonalFlag(id: string, months: MonthInput[], fillRsi = 3.0, indoorRh = 50): Flag | undefined {
-  const lib = libraryOf(layerMaterial("outer-board", 0.5, 10), layerMaterial("fill", fillRsi, 500, "fibrous-insulation"));
-  const wall = { kind: "above-grade-wall" as const, layers: [
-    { role: "sheathing", material: "outer-board", thickness_mm: 10 },
-    { role: "insulation", material: "fill", thickness_mm: 100 },
-  ] };
+  const lib = libraryOf(
+    layerMaterial("outer-board", 0.5, 10),
+    layerMaterial("fill", fillRsi, 500, "fibrous-insulation"),
+  );
+  const wall = {
+    kind: "above-grade-wall" as const,
+    layers: [
+      { role: "sheathing", material: "outer-board", thickness_mm: 10 },
+      { role: "insulation", material: "fill", thickness_mm: 100 },
+    ],
+  };
   const result = runSiteCheck(wall, { zone: "5A", indoor: { t_c: 20, rh: indoorRh }, year: { months } }, lib);
   return result.flags.find((f) => f.id === id);
 }

@@ -3,8 +3,13 @@ import { batt89, flag, gyp, layer, paint, wall } from "./fixtures";
 
 const ID = "stucco-over-foam-undrained";
 const barrier = wall(
-  layer("cladding", "cement-stucco", 22), layer("insulation", "eps-board", 25.4), layer("water-resistive-barrier", "polymeric-housewrap", 0.2),
-  layer("sheathing", "osb", 11.1), batt89, gyp, paint,
+  layer("cladding", "cement-stucco", 22),
+  layer("insulation", "eps-board", 25.4),
+  layer("water-resistive-barrier", "polymeric-housewrap", 0.2),
+  layer("sheathing", "osb", 11.1),
+  batt89,
+  gyp,
+  paint,
 );
 
 test("stucco on EPS on one housewrap with no drainage space: named a face-sealed wall, stop — IRC 2021 R703.7.3 (M, from memory); common practice", () => {
@@ -21,6 +26,12 @@ test("must not fire: a drainage mat between stucco and foam", () => {
 });
 
 test("must not fire: stucco on a block wall insulated with foam on the inside (the foam is not behind the stucco)", () => {
-  const block = wall(layer("cladding", "cement-stucco", 22), layer("structure", "hollow-cmu", 194), layer("insulation", "xps-board", 25.4), gyp, paint);
+  const block = wall(
+    layer("cladding", "cement-stucco", 22),
+    layer("structure", "hollow-cmu", 194),
+    layer("insulation", "xps-board", 25.4),
+    gyp,
+    paint,
+  );
   expect(flag(block, ID, { zone: "2A" })).toBeUndefined();
 });

@@ -2,13 +2,21 @@ import { expect, test } from "vitest";
 import { batt140, flag, gyp, layer, paint, wall } from "./fixtures";
 
 const ID = "summer-condensation-interior-sheet";
-const brickWith = (retarder: string) => wall(
-  layer("cladding", "brick-veneer", 101.6), layer("water-resistive-barrier", "building-paper-grade-d", 0.5), layer("sheathing", "fibreboard-sheathing", 12.7), batt140,
-  layer("vapour-retarder", retarder, 0.15), gyp, paint,
-);
+const brickWith = (retarder: string) =>
+  wall(
+    layer("cladding", "brick-veneer", 101.6),
+    layer("water-resistive-barrier", "building-paper-grade-d", 0.5),
+    layer("sheathing", "fibreboard-sheathing", 12.7),
+    batt140,
+    layer("vapour-retarder", retarder, 0.15),
+    gyp,
+    paint,
+  );
 
 test("sun-warmed wet brick drives vapour onto interior poly: stop — common practice (inward drive behind reservoir cladding)", () => {
-  expect(flag(brickWith("polyethylene-sheet-6mil"), ID, { zone: "5A", summer: { t_c: 30, rh: 70 } })?.severity).toBe("stop");
+  expect(flag(brickWith("polyethylene-sheet-6mil"), ID, { zone: "5A", summer: { t_c: 30, rh: 70 } })?.severity).toBe(
+    "stop",
+  );
 });
 
 test("must not fire: a vented cavity behind the brick breaks the drive", () => {
