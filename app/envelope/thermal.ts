@@ -5,7 +5,6 @@
 // it for comparison; with wood framing the truth lies between the two (docs/references.md §4.1).
 import {
   materialRsi,
-  materialRsiAt,
   resolveAssembly,
   ventedCavityIndex,
   type ResolvedAssembly,

@@ -103,7 +103,7 @@ export function drawShapes(doc: Doc, shapes: readonly Shape[], x: number, y: num
     if (s.type !== "text") {
       if (s.opacity !== undefined) doc.opacity(s.opacity);
       if (s.strokeWidth !== undefined) doc.lineWidth(s.strokeWidth);
-      if (s.dash && s.dash.length) doc.dash(s.dash[0], { space: s.dash[1] ?? s.dash[0] });
+      if (s.dash?.length) doc.dash(s.dash[0], { space: s.dash[1] ?? s.dash[0] });
     }
     switch (s.type) {
       case "rect":

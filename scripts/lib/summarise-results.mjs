@@ -21,7 +21,9 @@ const typecheck = readdirSync(dir).includes("typecheck.txt")
   ? readFileSync(join(dir, "typecheck.txt"), "utf8").trim()
   : "typecheck not run";
 if (typecheck !== "typecheck ok") failed += 1;
-const lint = readdirSync(dir).includes("lint.txt") ? readFileSync(join(dir, "lint.txt"), "utf8").trim() : "lint not run";
+const lint = readdirSync(dir).includes("lint.txt")
+  ? readFileSync(join(dir, "lint.txt"), "utf8").trim()
+  : "lint not run";
 if (lint !== "lint ok") failed += 1;
 if (missing.length) {
   console.log(`(no results from: ${missing.join(", ")})`);

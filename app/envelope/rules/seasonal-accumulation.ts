@@ -12,7 +12,7 @@ export const seasonalAccumulation: Rule = {
   applies: (ctx) => ctx.seasonal !== null && ctx.seasonal.scopeNote === null,
   check(ctx) {
     const s = ctx.seasonal;
-    if (!s || s.verdict !== "accumulates") return null;
+    if (s?.verdict !== "accumulates") return null;
     const where = s.criticalInterface?.label ?? "an interface";
     return flagOf(
       this,

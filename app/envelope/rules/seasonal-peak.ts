@@ -14,7 +14,7 @@ export const seasonalPeak: Rule = {
   applies: (ctx) => ctx.seasonal !== null && ctx.seasonal.scopeNote === null,
   check(ctx) {
     const s = ctx.seasonal;
-    if (!s || s.verdict !== "dries-within-year" || s.peak_g_m2 <= SEASONAL_PEAK_LIMIT_G_M2) return null;
+    if (s?.verdict !== "dries-within-year" || s.peak_g_m2 <= SEASONAL_PEAK_LIMIT_G_M2) return null;
     const where = s.criticalInterface?.label ?? "an interface";
     return flagOf(
       this,
