@@ -3,13 +3,7 @@
 // applied inside the layer), then all layers and the air films in series (isothermal planes).
 // The whole-assembly parallel-path figure (paths running through every layer) is reported beside
 // it for comparison; with wood framing the truth lies between the two (docs/references.md §4.1).
-import {
-  materialRsi,
-  resolveAssembly,
-  ventedCavityIndex,
-  type ResolvedAssembly,
-  type ResolvedLayer,
-} from "./layers";
+import { materialRsi, resolveAssembly, ventedCavityIndex, type ResolvedAssembly, type ResolvedLayer } from "./layers";
 import type { MaterialLibrary } from "./material-schema";
 import type { AirFilm, AssemblyInput, AssemblyKind, ThermalLayer, ThermalResult } from "./types";
 import { ripToRsi, rsiToRip, usiToUip } from "./units";
