@@ -1,16 +1,7 @@
 // Kept free of zod so client components can use the vocabularies without shipping the validator.
+export { ADHESIVES, ASSEMBLY_KINDS, EXPOSURES, JOINT_TREATMENTS, LAYER_ROLES } from "~/vocabulary/assemblies";
 
 /** Vocabularies of a detail's front matter, as fixed in docs/content-format.md. */
-export const ASSEMBLY_KINDS = [
-  "above-grade-wall",
-  "roof",
-  "floor",
-  "crawlspace-wall",
-  "crawlspace-floor",
-  "basement-wall",
-  "slab",
-  "rim-joist",
-] as const;
 export const SUBSTRATES = [
   "wood-frame",
   "cast-concrete",
@@ -37,24 +28,3 @@ export const INSULATION_STRATEGIES = [
   "under-slab",
 ] as const;
 export const TIERS = ["free", "premium"] as const;
-export const LAYER_ROLES = [
-  "cladding",
-  "drainage-gap",
-  "water-resistive-barrier",
-  "air-barrier",
-  "sheathing",
-  "insulation",
-  "vapour-retarder",
-  "structure",
-  "interior-finish",
-  "thermal-barrier",
-  "soil-side-protection",
-  "capillary-break",
-  "roofing",
-  "underlayment",
-  "subfloor",
-] as const;
-export const JOINT_TREATMENTS = ["taped", "lapped", "sealed"] as const;
-export const ADHESIVES = ["solvent-based", "water-based", "mechanical"] as const;
-/** What a layer's open face meets (the site check's rules read it; app/envelope/types.ts EXPOSURES). */
-export const EXPOSURES = ["interior", "service-space", "weather", "soil"] as const;

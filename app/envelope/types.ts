@@ -3,43 +3,9 @@
 import type { ClimateZoneId, MoistureRegime } from "~/vocabulary/climate-zones";
 import type { IndoorMethodId } from "./indoor-climate";
 
-export const ASSEMBLY_KINDS = [
-  "above-grade-wall",
-  "roof",
-  "floor",
-  "crawlspace-wall",
-  "crawlspace-floor",
-  "basement-wall",
-  "slab",
-  "rim-joist",
-] as const;
-export type AssemblyKind = (typeof ASSEMBLY_KINDS)[number];
-
-export const LAYER_ROLES = [
-  "cladding",
-  "drainage-gap",
-  "water-resistive-barrier",
-  "air-barrier",
-  "sheathing",
-  "insulation",
-  "vapour-retarder",
-  "structure",
-  "interior-finish",
-  "thermal-barrier",
-  "soil-side-protection",
-  "capillary-break",
-  "roofing",
-  "underlayment",
-  "subfloor",
-] as const;
-export type LayerRole = (typeof LAYER_ROLES)[number];
-
-export type Joints = "taped" | "lapped" | "sealed";
-export type Adhesive = "solvent-based" | "water-based" | "mechanical";
-/** What a layer's open face meets, where that is not simply the next layer: a room, a crawl space
- * or attic, the weather (above grade), or the soil. */
-export const EXPOSURES = ["interior", "service-space", "weather", "soil"] as const;
-export type Exposure = (typeof EXPOSURES)[number];
+export { ASSEMBLY_KINDS, EXPOSURES } from "~/vocabulary/assemblies";
+export type { Adhesive, AssemblyKind, Exposure, Joints, LayerRole } from "~/vocabulary/assemblies";
+import type { Adhesive, AssemblyKind, Exposure, Joints, LayerRole } from "~/vocabulary/assemblies";
 
 /** One layer, exactly as the `layers` of a detail file (docs/content-format.md). */
 export interface LayerInput {
