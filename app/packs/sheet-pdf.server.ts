@@ -447,6 +447,22 @@ function render(doc: Doc, input: DetailSheetInput): void {
     seasonalPage(doc, input, input.siteCheck.seasonal);
     footer(doc, input, generatedAt);
   }
+  // The winter profile on its own page: the case where walls rot, drawn as on the detail page.
+  doc.addPage();
+  profilePage(doc, input, input.siteCheck.profiles.winter);
+  footer(doc, input, generatedAt);
+}
+
+function profilePage(doc: Doc, input: DetailSheetInput, profile: ProfileCase): void {
+  let y: number = PAGE.margin;
+  doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", PAGE.margin, y, { lineBreak: false });
+  y += 16;
+  y = block(doc, `${input.title}: winter profile`, PAGE.margin, y, CONTENT_WIDTH, y + 20, {
+    font: FONTS.serifBold,
+    size: 12,
+    gap: 6,
+  });
+  drawProfileChart(doc, profile, input.units, y);
 }
 
 /** The sheet's second page: the seasonal balance month by month, drawn with the page's primitives. */
@@ -527,7 +543,7 @@ function letterPdf(info: PDFKit.DocumentInfo, draw: (doc: Doc) => void): Promise
 }
 
 /** Renders one detail sheet to Letter PDF: the detail and its site check on the first page, the
- * seasonal balance month by month on the second. */
+ * seasonal balance month by month on the second, the winter profile chart on the third. */
 export function renderDetailSheet(input: DetailSheetInput): Promise<Buffer> {
   return letterPdf(
     {

@@ -80,7 +80,7 @@ test("a member buys a set with a test card, returns, sees it as theirs and downl
   expect(expected.size).toBeGreaterThan(0);
   for (const [slug, sheet] of expected) {
     const info = execFileSync("pdfinfo", [`${slug}.pdf`], { cwd: dir, encoding: "utf8" });
-    expect(info, slug).toMatch(/^Pages:\s+2$/m); // the detail, then its seasonal balance
+    expect(info, slug).toMatch(/^Pages:\s+3$/m); // the detail, its seasonal balance, its winter profile
     const title = /^Title:\s+(.*)$/m.exec(info)?.[1];
     expect(title, slug).toBe(pdfText(sheet.title));
     const text = execFileSync("pdftotext", ["-layout", `${slug}.pdf`, "-"], { cwd: dir, encoding: "utf8" });

@@ -225,8 +225,8 @@ test("buying a set: checkout → signed webhook → entitlement → the premium 
   expect(pdfs.length).toBeGreaterThan(0);
   expect(names.filter((n) => n.endsWith(".md")).length).toBe(pdfs.length);
   for (const pdf of pdfs) {
-    // poppler-utils' pdfinfo reads the page count from the PDF's own page tree: the detail, then the year.
-    expect(execFileSync("pdfinfo", [pdf], { cwd: dir, encoding: "utf8" })).toMatch(/^Pages:\s+2$/m);
+    // poppler-utils' pdfinfo reads the page count from the PDF's own page tree: the detail, the year, the winter profile.
+    expect(execFileSync("pdfinfo", [pdf], { cwd: dir, encoding: "utf8" })).toMatch(/^Pages:\s+3$/m);
   }
 
   // Another member without the set is refused at download time; a visitor is sent to sign in.

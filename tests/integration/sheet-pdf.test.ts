@@ -1,5 +1,5 @@
 // Renders a real detail sheet (a content wall, the engine's site check, the material library)
-// and reads it back with poppler: the detail on one page, the seasonal balance on a second, extractable
+// and reads it back with poppler: the detail on one page, the seasonal balance on a second, the winter profile on a third, extractable
 // text, the figures the engine formats.
 import { execFileSync } from "node:child_process";
 import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
@@ -111,14 +111,15 @@ async function renderSample(
   };
 }
 
-test("a zone 6 wall sheet is the detail on one Letter page and the year on a second, with extractable text and the engine's figures", async () => {
+test("a zone 6 wall sheet is the detail on one Letter page, the year on a second and the winter profile on a third, with extractable text and the engine's figures", async () => {
   const { text, pages, r, u, siteCheck } = await renderSample(
     "wall-2x6-r21-plus-50mm-polyiso-zone-6",
     "6A",
     "ip",
     "sheet-sample.pdf",
   );
-  expect(pages).toBe(2);
+  expect(pages).toBe(3);
+  expect(text).toMatch(/winter profile/);
   expect(text).toContain("2x6 wall with 50 mm foil-faced polyiso, zone 6");
   const revision = loadDetail("wall-2x6-r21-plus-50mm-polyiso-zone-6").revision;
   expect(text).toContain(`Revision ${revision}`);
@@ -152,7 +153,7 @@ test("a long roof stack in SI units still fits its first page", async () => {
     "si",
     "sheet-sample-roof-si.pdf",
   );
-  expect(pages).toBe(2);
+  expect(pages).toBe(3);
   expect(text).toContain(r);
   expect(text).toContain("ROOF TOP");
   expect(text).toContain(STANDING_CAUTION);
