@@ -220,7 +220,19 @@ export interface InsulationSummary {
   massOutboardOnly: boolean;
 }
 
-export function summariseInsulation(a: ResolvedAssembly): InsulationSummary {
+// Depends on the assembly alone, and a site check reads it for the code rows and the rules at every
+// site: worked out once per resolved assembly (callers only read it).
+const summaries = new WeakMap<ResolvedAssembly, Readonly<InsulationSummary>>();
+export function summariseInsulation(a: ResolvedAssembly): Readonly<InsulationSummary> {
+  let s = summaries.get(a);
+  if (!s) {
+    s = summarise(a);
+    summaries.set(a, s);
+  }
+  return s;
+}
+
+function summarise(a: ResolvedAssembly): InsulationSummary {
   const framed = a.layers.filter((l) => l.framing && isInsulation(l));
   const frameIdx = framed.length ? framed[0].index : a.layers.findIndex((l) => l.input.role === "structure");
   let cavity = 0;
@@ -250,7 +262,7 @@ function optionsRow(
   id: string,
   label: string,
   options: string[],
-  s: InsulationSummary,
+  s: Readonly<InsulationSummary>,
   ciValue: number,
   edition: CodeEdition,
 ): CodeRow {
