@@ -57,11 +57,21 @@ function checkRh(rh: number, field: string): void {
   }
 }
 
+// A site checked again (a detail page, a pack, the content re-check) asks for the same interface
+// temperatures again: remember recent answers (the function is pure; a full table starts again).
+const MAX_REMEMBERED = 4096;
+const remembered = new Map<number, number>();
+
 /** Saturation vapour pressure, Pa (over ice below 0.01 °C). */
 export function saturationPressure(tC: number): number {
+  const known = remembered.get(tC);
+  if (known !== undefined) return known;
   checkTemperature(tC, "temperature");
   const tK = tC + KELVIN;
-  return Math.exp(tC < TRIPLE_POINT_C ? lnSatIce(tK) : lnSatWater(tK));
+  const p = Math.exp(tC < TRIPLE_POINT_C ? lnSatIce(tK) : lnSatWater(tK));
+  if (remembered.size >= MAX_REMEMBERED) remembered.clear();
+  remembered.set(tC, p);
+  return p;
 }
 
 /** Vapour pressure, Pa, of air at tC and rh (percent, 0–100). */
