@@ -195,16 +195,15 @@ function interfaceLabels(a: ResolvedAssembly): string[] {
  * insulation (e.g. interior polyethylene). */
 function candidateSurface(a: ResolvedAssembly, season: Season, vapourStart: number, prep: Prepared): number {
   const n = a.layers.length;
-  const resists = (i: number) => retarderClass(prep.dry[i]) !== "permeable";
   let innermost = prep.innermostInsulation;
   let outermost = prep.outermostInsulation;
   if (season === "winter") {
     if (innermost < 0) innermost = n - 1;
-    for (let i = innermost - 1; i >= vapourStart; i--) if (resists(i)) return i + 1; // inner face of layer i
+    for (let i = innermost - 1; i >= vapourStart; i--) if (prep.dryClass[i] !== "permeable") return i + 1; // inner face of layer i
     return Math.max(vapourStart, Math.min(innermost, n - 1));
   }
   if (outermost < 0) outermost = 0;
-  for (let i = outermost + 1; i < n; i++) if (resists(i)) return i; // outer face of layer i
+  for (let i = outermost + 1; i < n; i++) if (prep.dryClass[i] !== "permeable") return i; // outer face of layer i
   return n - 1;
 }
 
@@ -269,7 +268,9 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
   const notes = c.notes ? c.notes.slice() : [];
 
   const { t, layerR, coldAdjusted } = pathTemperatures(a, c, "clear-cavity", extFilm, films.interior.rsi, thermalStart);
-  const framed = a.layers.some((l, i) => l.framing !== null && i >= thermalStart);
+  // Plain loops here and below, not callbacks: this runs several times per site check.
+  let framed = false;
+  for (let i = thermalStart; i < n && !framed; i++) framed = a.layers[i].framing !== null;
   const stud = framed ? pathTemperatures(a, c, "stud", extFilm, films.interior.rsi, thermalStart) : null;
   for (const i of coldAdjusted) {
     const l = a.layers[i];
@@ -336,6 +337,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     notes.push("The humidity-dependent permeances did not settle within 0.5 %; the figures are from the last pass.");
   // Condensation planes: hull vertices that are saturation points below the straight line.
   const planes: CondensationPlane[] = [];
+  let totalRate = 0;
   for (let h = 0; h < hullLength; h++) {
     const k = hullK[h];
     if (k < 0 || pLinear[k] <= pSat[k]) continue;
@@ -351,6 +353,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
       t_c: t[k],
       rate_g_m2_day: surface ? 0 : kgPerSToGPerDay(rate),
     });
+    totalRate += planes[planes.length - 1].rate_g_m2_day;
   }
 
   const condensing = new Array<boolean>(n + 1).fill(false);
@@ -402,7 +405,7 @@ export function computeProfile(a: ResolvedAssembly, c: CaseConditions): ProfileC
     margin_c: t[marginIndex] - sourceDew,
     marginSurface: labels[marginIndex],
     sourceDewPoint_c: sourceDew,
-    rate_g_m2_day: planes.reduce((s, p) => s + p.rate_g_m2_day, 0),
+    rate_g_m2_day: totalRate,
     vapourLayers,
     studPath: stud ? { interfaces_t_c: stud.t, margin_c: stud.t[marginIndex] - sourceDew } : null,
     notes,
