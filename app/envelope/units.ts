@@ -35,7 +35,8 @@ export type { UnitSystem };
 function fixed(value: number, digits: number): string {
   // −0.0 reads as a sign error on a drawing; show 0.
   const s = value.toFixed(digits);
-  return /^-0(\.0+)?$/.test(s) ? s.slice(1) : s;
+  // Only a string that starts "-0" can be one (most labels are built without the pattern test).
+  return s.startsWith("-0") && /^-0(\.0+)?$/.test(s) ? s.slice(1) : s;
 }
 
 /** "R-21.0" or "RSI 3.70". */
