@@ -400,6 +400,12 @@ function mouldCheck(
   };
 }
 
+// ISO 13788:2012 leaves ground contact out of the monthly method's scope (from memory): the soil face
+// is held saturated at the ground temperature all year, so condensate there can never evaporate
+// outward, and the wall's own moisture from the soil is not modelled at all.
+const SOIL_SCOPE_NOTE =
+  "Against soil the monthly method is outside its scope: the soil face is held saturated at ground temperature all year, so these figures are shown for reference and raise no flag. The top of the wall (above grade and at frost depth) and the design-day cases judge this assembly.";
+
 /** The seasonal balance of an assembly over a site year. */
 export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: ClimateYear): SeasonalResult {
   const s = buildStack(a);
@@ -591,6 +597,6 @@ export function seasonalBalance(a: ResolvedAssembly, site: ResolvedSite, year: C
     verdict,
     surface: mould.check,
     explanation,
-    scopeNote: null,
+    scopeNote: isBelowGrade(a.kind) ? SOIL_SCOPE_NOTE : null,
   };
 }

@@ -172,12 +172,6 @@ export function summerCase(a: ResolvedAssembly, site: ResolvedSite): CaseConditi
   };
 }
 
-// ISO 13788:2012 leaves ground contact out of the monthly method's scope (from memory): the soil face
-// is held saturated at the ground temperature all year, so condensate there can never evaporate
-// outward, and the wall's own moisture from the soil is not modelled at all.
-const SOIL_SCOPE_NOTE =
-  "Against soil the monthly method is outside its scope: the soil face is held saturated at ground temperature all year, so these figures are shown for reference and raise no flag. The top of the wall (above grade and at frost depth) and the design-day cases judge this assembly.";
-
 /** seasonal: false skips the 12-month balance (bulk screening, the design-day benchmark). */
 export interface SiteCheckOptions {
   seasonal?: boolean;
@@ -198,9 +192,8 @@ export function runSiteCheck(
     ? { aboveGrade: computeProfile(a, upper.aboveGrade), frostDepth: computeProfile(a, upper.frostDepth) }
     : null;
   const rows = codeRows(a, resolvedSite, vapour.interiorClass);
-  const balance =
+  const seasonal =
     options.seasonal === false ? null : seasonalBalance(a, resolvedSite, resolveClimateYear(site.year, resolvedSite));
-  const seasonal = balance && winter.exterior.label === "soil" ? { ...balance, scopeNote: SOIL_SCOPE_NOTE } : balance;
   const flags = evaluateRules({
     assembly: a,
     site: resolvedSite,

@@ -453,30 +453,22 @@ function render(doc: Doc, input: DetailSheetInput): void {
   footer(doc, input, generatedAt);
 }
 
-function profilePage(doc: Doc, input: DetailSheetInput, profile: ProfileCase): void {
-  let y: number = PAGE.margin;
+/** The head of a sheet's later pages: the name, then the page's title; returns the y below it. */
+function continuationHeading(doc: Doc, title: string): number {
+  const y = PAGE.margin;
   doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", PAGE.margin, y, { lineBreak: false });
-  y += 16;
-  y = block(doc, `${input.title}: winter profile`, PAGE.margin, y, CONTENT_WIDTH, y + 20, {
-    font: FONTS.serifBold,
-    size: 12,
-    gap: 6,
-  });
-  drawProfileChart(doc, profile, input.units, y);
+  return block(doc, title, PAGE.margin, y + 16, CONTENT_WIDTH, y + 36, { font: FONTS.serifBold, size: 12, gap: 6 });
+}
+
+function profilePage(doc: Doc, input: DetailSheetInput, profile: ProfileCase): void {
+  drawProfileChart(doc, profile, input.units, continuationHeading(doc, `${input.title}: winter profile`));
 }
 
 /** The sheet's second page: the seasonal balance month by month, drawn with the page's primitives. */
 function seasonalPage(doc: Doc, input: DetailSheetInput, seasonal: SeasonalResult): void {
   const x = PAGE.margin;
   const limit = FOOTER_TOP - 10;
-  let y: number = PAGE.margin;
-  doc.font(FONTS.serifBold).fontSize(10).fillColor(INK.ochre).text("Dryside", x, y, { lineBreak: false });
-  y += 16;
-  y = block(doc, `${input.title}: through the year`, x, y, CONTENT_WIDTH, y + 20, {
-    font: FONTS.serifBold,
-    size: 12,
-    gap: 4,
-  });
+  let y = continuationHeading(doc, `${input.title}: through the year`);
   y = heading(doc, "Seasonal balance, month by month", x, y, CONTENT_WIDTH);
   y = block(doc, seasonal.explanation, x, y, CONTENT_WIDTH, limit, { font: FONTS.sans, size: 7.6, gap: 6 });
   const chart = seasonalGeometry(seasonal, { units: input.units, width: SEASONAL_CHART_WIDTHS.wide });
