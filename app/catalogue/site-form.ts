@@ -100,7 +100,14 @@ export const siteFormSchema = z
       const hasZone = Boolean(form.zone);
       const hasDegreeDays = form.hdd !== undefined;
       if (!hasZone && !hasDegreeDays)
-        ctx.addIssue({ code: "custom", path: ["zone"], message: "Choose a climate zone or enter heating degree-days" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["zone"],
+          message:
+            form.province || form.nbcZone
+              ? "A province or NBC zone is a Canadian site: choose Canada as the country"
+              : "Choose a climate zone or enter heating degree-days",
+        });
       if (hasDegreeDays && form.cdd === undefined)
         ctx.addIssue({ code: "custom", path: ["cdd"], message: "Enter cooling degree-days too (0 if none)" });
     }

@@ -49,3 +49,11 @@ test("neither a zone nor degree-days asks for one of them, on the zone field", (
   const errors = submission.status === "error" ? (submission.error ?? {}) : {};
   expect(errors).toEqual({ zone: ["Choose a climate zone or enter heating degree-days"] });
 });
+
+test("a province without the country says the site is Canadian rather than asking for a US zone", () => {
+  const parsed = siteFormSchema.safeParse({ province: "MB" });
+  expect(parsed.success).toBe(false);
+  expect(parsed.error?.issues.map((i) => i.message)).toContain(
+    "A province or NBC zone is a Canadian site: choose Canada as the country",
+  );
+});
